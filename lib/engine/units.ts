@@ -9,11 +9,17 @@ export const CIRCULAR_MILS_PER_MM2 = 1 / ((Math.PI / 4) * (MM_PER_INCH / 1000) *
 /** 1 T = 1 Wb/m² = 1e8 lines / (1550.0031 in²) = 64.516 kilolines/in² [derived]. */
 export const KILOLINES_PER_IN2_PER_TESLA = 1e8 / 1e3 / (1 / (MM_PER_INCH / 1000) ** 2);
 export const WATTS_PER_HP = 745.7;
+/** International foot, exact by definition. */
+export const M_PER_FOOT = 0.3048;
 
 export const inchesToMm = (inches: number): number => inches * MM_PER_INCH;
 export const mmToInches = (mm: number): number => mm / MM_PER_INCH;
 export const mmToM = (mm: number): number => mm / 1000;
 export const mToMm = (m: number): number => m * 1000;
+export const milsToMm = (mils: number): number => (mils / 1000) * MM_PER_INCH;
+export const mmToMils = (mm: number): number => (mm / MM_PER_INCH) * 1000;
+export const feetToM = (ft: number): number => ft * M_PER_FOOT;
+export const mToFeet = (m: number): number => m / M_PER_FOOT;
 export const mm2ToCircularMils = (mm2: number): number => mm2 * CIRCULAR_MILS_PER_MM2;
 export const circularMilsToMm2 = (cm: number): number => cm / CIRCULAR_MILS_PER_MM2;
 export const teslaToKilolinesPerIn2 = (t: number): number => t * KILOLINES_PER_IN2_PER_TESLA;
