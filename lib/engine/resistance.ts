@@ -9,6 +9,7 @@ import {
   type CopperTempConstant,
 } from './copper';
 import { fail, finiteOr, type EngineResult } from './result';
+import type { Verdict } from './verdict';
 
 export type Connection = 'star' | 'delta';
 
@@ -114,6 +115,29 @@ export type WindingKind = 'random' | 'form';
 /** Largest acceptable resistance unbalance: 2 % random-wound, 1 % form-wound (ANSI/EASA AR100-2020). */
 export function unbalanceLimitFraction(kind: WindingKind): number {
   return kind === 'random' ? 0.02 : 0.01;
+}
+
+/**
+ * Unbalance verdict: (max − min)/average ≤ 2 % random-wound, ≤ 1 % form-wound (ANSI/EASA AR100-2020).
+ * Needs at least two readings, all positive.
+ */
+export function resistanceUnbalanceVerdict(readings: readonly number[], kind: WindingKind): EngineResult<Verdict> {
+  if (readings.length < 2 || readings.some((r) => !(r > 0) || !Number.isFinite(r))) {
+    return fail(
+      'invalid-input',
+      'Resistance unbalance needs at least two positive readings.',
+      'Enter the readings for every phase (or every pair of leads).',
+      'readings',
+    );
+  }
+  const value = resistanceUnbalance(readings).unbalanceFraction;
+  const limit = unbalanceLimitFraction(kind);
+  return finiteOr(value, (v) => ({
+    pass: v <= limit,
+    value: v,
+    limit,
+    rule: `ANSI/EASA AR100-2020: (max − min)/average ≤ ${limit * 100} % for ${kind}-wound windings`,
+  }), 'Resistance unbalance');
 }
 
 /** Predicted against measured: (measured − predicted)/predicted × 100, in percent (positive: measured higher). */

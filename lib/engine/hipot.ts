@@ -1,0 +1,87 @@
+/**
+ * High-potential (hipot) test voltages for stator windings, ground wall to frame.
+ * Hipot only after satisfactory IR/PI on a clean, dry winding.
+ */
+import { fail, ok, type EngineResult } from './result';
+
+export type HipotCase = 'new' | 'repeat' | 'reconditioned';
+export type HipotPractice = 'nema' | 'iec';
+
+export interface HipotInput {
+  /** Rated line voltage, V. */
+  ratedVoltageV: number;
+  case: HipotCase;
+  practice: HipotPractice;
+  /** Rated output, hp; only used for the NEMA rule on small motors. */
+  ratedOutputHp?: number;
+}
+
+export interface HipotLevels {
+  /** AC test voltage, V rms, applied for 1 minute. */
+  acV: number;
+  /** DC equivalent, V. */
+  dcV: number;
+  /** The rule used, in words, with its source. */
+  rule: string;
+}
+
+/** DC hipot = 1.7 × AC (NEMA MG 1; ANSI/EASA AR100-2020). */
+export const DC_TO_AC_RATIO = 1.7;
+/** Repeat test: 80 % of the new-winding voltage (NEMA MG 1; ANSI/EASA AR100-2020; IEC 60034-1). */
+export const REPEAT_FRACTION = 0.8;
+/** Reconditioned winding, NEMA/EASA practice: 65 % of the new-winding voltage [from memory: ANSI/EASA AR100]. */
+export const RECONDITIONED_FRACTION_NEMA = 0.65;
+/** Partial rewind or reconditioned, IEC practice: 75 % of the new-winding voltage [from memory: IEC 60034-1]. */
+export const RECONDITIONED_FRACTION_IEC = 0.75;
+/** IEC 60034-1 minimum new-winding test voltage, V [from memory]. */
+export const IEC_MINIMUM_AC_V = 1500;
+
+/** Test voltages are set on the tester to the volt: round to the nearest volt. */
+export const roundVolts = (v: number): number => Math.round(v);
+
+const SOURCE: Readonly<Record<HipotPractice, string>> = {
+  nema: 'NEMA MG 1; ANSI/EASA AR100-2020',
+  iec: 'IEC 60034-1 [from memory]',
+};
+
+/**
+ * Hipot voltages. New winding: NEMA MG 1 / ANSI/EASA AR100-2020 AC = 1000 V + 2·V_rated for 1 min
+ * (1000 V for motors of 0.5 hp and less rated 250 V and less [from memory: MG 1]); IEC 60034-1
+ * AC = 1000 V + 2·U_N, at least 1500 V [from memory]. Repeat: 80 %. Reconditioned: 65 % for NEMA/EASA
+ * [from memory: AR100], 75 % for IEC (partial rewinds) [from memory]. DC = 1.7 × AC in both practices
+ * (the NEMA/EASA ratio; IEC 60034-1 gives no DC equivalent here). 460 V NEMA new → 1920 V AC, 3264 V DC.
+ */
+export function hipotTestVoltage(input: HipotInput): EngineResult<HipotLevels> {
+  const v = input.ratedVoltageV;
+  if (!(v > 0) || !Number.isFinite(v)) {
+    return fail('invalid-input', 'The rated voltage must be a positive number.', 'Enter the nameplate voltage.', 'ratedVoltageV');
+  }
+  const source = SOURCE[input.practice];
+  const smallNema = input.practice === 'nema' && v <= 250 && input.ratedOutputHp !== undefined && input.ratedOutputHp <= 0.5;
+  let newAc = 1000 + 2 * v;
+  let newText = `1000 V + 2 × ${v} V = ${roundVolts(newAc)} V`;
+  if (smallNema) {
+    newAc = 1000;
+    newText = '1000 V for motors of 0.5 hp and less rated 250 V and less [from memory]';
+  } else if (input.practice === 'iec' && newAc < IEC_MINIMUM_AC_V) {
+    newText += `, raised to the ${IEC_MINIMUM_AC_V} V minimum`;
+    newAc = IEC_MINIMUM_AC_V;
+  }
+  const fraction =
+    input.case === 'new' ? 1 :
+    input.case === 'repeat' ? REPEAT_FRACTION :
+    input.practice === 'nema' ? RECONDITIONED_FRACTION_NEMA : RECONDITIONED_FRACTION_IEC;
+  const acV = roundVolts(newAc * fraction);
+  const dcV = roundVolts(newAc * fraction * DC_TO_AC_RATIO);
+  const caseText =
+    input.case === 'new' ? 'new winding' :
+    input.case === 'repeat' ? 'repeat test, 80 % of the new-winding level' :
+    input.practice === 'nema'
+      ? 'reconditioned winding, 65 % of the new-winding level [from memory: AR100]'
+      : 'partial rewind or reconditioned winding, 75 % of the new-winding level [from memory]';
+  return ok({
+    acV,
+    dcV,
+    rule: `${source}, ${caseText}: new-winding AC ${newText}; test ${acV} V AC for 1 minute, or ${dcV} V DC (1.7 × AC).`,
+  });
+}
