@@ -1,0 +1,86 @@
+/**
+ * The one database client of the app. Nothing else constructs a PrismaClient (seed and tooling scripts
+ * aside). The instance is cached on globalThis because Next.js bundles instrumentation, pages and route
+ * handlers separately: a module-level cache would open the embedded database twice.
+ */
+import { mkdirSync } from 'node:fs';
+import { PGlite } from '@electric-sql/pglite';
+import { PrismaPg } from '@prisma/adapter-pg';
+import { PrismaPGlite } from 'pglite-prisma-adapter';
+import { PrismaClient } from './generated/client';
+import { readDbConfig, type DbConfig } from './config';
+import { pgliteRunner, postgresRunner, type SqlRunner } from './sql-runner';
+
+interface DbHandle {
+  config: DbConfig;
+  prisma: PrismaClient;
+  /** A raw SQL connection for migrations and seeding (the same PGlite instance when embedded). */
+  openRunner(): Promise<SqlRunner>;
+  close(): Promise<void>;
+  prepared?: Promise<void>;
+}
+
+const holder = globalThis as typeof globalThis & { __coilwrightDb?: DbHandle };
+
+function open(config: DbConfig): DbHandle {
+  if (config.engine === 'postgres') {
+    const prisma = new PrismaClient({ adapter: new PrismaPg({ connectionString: config.url, max: 10 }) });
+    return { config, prisma, openRunner: () => postgresRunner(config.url), close: () => prisma.$disconnect() };
+  }
+  const inMemory = config.dataDir === 'memory://';
+  if (!inMemory) mkdirSync(config.dataDir, { recursive: true });
+  const pglite = inMemory ? new PGlite() : new PGlite(config.dataDir);
+  const prisma = new PrismaClient({ adapter: new PrismaPGlite(pglite) });
+  return {
+    config,
+    prisma,
+    openRunner: async () => pgliteRunner(pglite),
+    close: async () => {
+      await prisma.$disconnect();
+      await pglite.close();
+    },
+  };
+}
+
+function handle(): DbHandle {
+  holder.__coilwrightDb ??= open(readDbConfig());
+  return holder.__coilwrightDb;
+}
+
+/** The Prisma client for the configured database. */
+export function db(): PrismaClient {
+  return handle().prisma;
+}
+
+export function dbEngine(): DbConfig['engine'] {
+  return handle().config.engine;
+}
+
+export async function withSqlRunner<T>(work: (sql: SqlRunner) => Promise<T>): Promise<T> {
+  const runner = await handle().openRunner();
+  try {
+    return await work(runner);
+  } finally {
+    await runner.close();
+  }
+}
+
+/** Remembers the one-time preparation (migrate, seed) so it runs once per process. */
+export function prepareOnce(prepare: () => Promise<void>): Promise<void> {
+  const h = handle();
+  h.prepared ??= prepare().catch((err: unknown) => {
+    h.prepared = undefined;
+    throw err;
+  });
+  return h.prepared;
+}
+
+/** Closes the database (the embedded one must be closed, or the process will not exit). */
+export async function closeDb(): Promise<void> {
+  const h = holder.__coilwrightDb;
+  holder.__coilwrightDb = undefined;
+  if (h) await h.close();
+}
+
+export type { PrismaClient };
+export { Prisma } from './generated/client';

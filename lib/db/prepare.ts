@@ -1,0 +1,20 @@
+/**
+ * Start-up preparation, run once per process (instrumentation on server start, and by tests): apply the
+ * migrations, then seed the invented demo shop on a first start of the embedded database (or on any
+ * empty database when COILWRIGHT_SEED_DEMO=1).
+ */
+import { db, dbEngine, prepareOnce, withSqlRunner } from './client';
+import { applyMigrations } from './migrate';
+import { isEmpty, seedDemoShop } from './seed/seed-demo';
+
+export function prepareDatabase(): Promise<void> {
+  return prepareOnce(async () => {
+    const applied = await withSqlRunner((sql) => applyMigrations(sql));
+    if (applied.length) console.log(`[coilwright] applied migrations: ${applied.join(', ')}`);
+    const wantDemo = dbEngine() === 'pglite' ? process.env.COILWRIGHT_SEED_DEMO !== '0' : process.env.COILWRIGHT_SEED_DEMO === '1';
+    if (wantDemo && (await isEmpty(db()))) {
+      await seedDemoShop(db());
+      console.log('[coilwright] seeded the demo shop (see README for the demo sign-ins)');
+    }
+  });
+}
