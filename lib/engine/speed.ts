@@ -28,7 +28,8 @@ export const POLES_FROM_SPEED_MESSAGES = {
 } as const;
 
 /**
- * Pole count from rated speed, assuming normal slip: P = 2·floor(60·f/n). 60 Hz 1750 rpm → 4;
+ * Pole count from rated speed, assuming normal slip: P = 2·floor(60·f/n), right while the slip is below
+ * 1/(p + 1) (n above the synchronous speed of the next pole count) [derived]. 60 Hz 1750 rpm → 4;
  * 50 Hz 965 rpm → 6. Errors when the inputs are not positive, when n exceeds 60·f (faster than 2 poles),
  * when more than MAX_POLES_FROM_SPEED poles would result, or when the implied slip exceeds MAX_NORMAL_SLIP.
  */
