@@ -50,7 +50,9 @@ export function currentDensityChecked(input: CurrentDensityInput): EngineResult<
     }
   }
   const result = currentDensity(input);
-  return finiteOr(result.circularMilsPerAmp, () => result, 'Current density');
+  // A product of finite numbers can still overflow; both outputs must be finite and positive.
+  const product = result.ampsPerMm2 * result.circularMilsPerAmp;
+  return finiteOr(result.ampsPerMm2 > 0 && result.circularMilsPerAmp > 0 ? product : Number.NaN, () => result, 'Current density');
 }
 
 export interface CurrentDensityRange {

@@ -73,6 +73,9 @@ export function hipotTestVoltage(input: HipotInput): EngineResult<HipotLevels> {
     input.practice === 'nema' ? RECONDITIONED_FRACTION_NEMA : RECONDITIONED_FRACTION_IEC;
   const acV = roundVolts(newAc * fraction);
   const dcV = roundVolts(newAc * fraction * DC_TO_AC_RATIO);
+  if (!Number.isFinite(dcV)) {
+    return fail('non-finite-result', 'The test voltage is out of range.', 'Check the rated voltage.', 'ratedVoltageV');
+  }
   const caseText =
     input.case === 'new' ? 'new winding' :
     input.case === 'repeat' ? 'repeat test, 80 % of the new-winding level' :

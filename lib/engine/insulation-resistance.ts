@@ -111,7 +111,13 @@ export function polarizationIndexVerdict(input: {
 }): EngineResult<Verdict> {
   if (!(input.ir1MinMOhm > 0) || !Number.isFinite(input.ir1MinMOhm)) return invalidReading('ir1MinMOhm');
   if (!(input.ir10MinMOhm >= 0) || !Number.isFinite(input.ir10MinMOhm)) return invalidReading('ir10MinMOhm');
+  if (!Number.isFinite(input.temperatureC)) {
+    return fail('invalid-input', 'The winding temperature must be a number.', 'Enter the temperature in °C.', 'temperatureC');
+  }
   const value = polarizationIndex(input.ir1MinMOhm, input.ir10MinMOhm);
+  if (!Number.isFinite(value)) {
+    return fail('non-finite-result', 'The PI is out of range.', 'Check both megohmmeter readings.', 'ir1MinMOhm');
+  }
   const limit = minimumPolarizationIndex(input.insulationClass);
   const rule = `IEEE 43: PI ≥ ${limit.toFixed(1)} for class ${input.insulationClass} insulation`;
   const ir40 = irCorrectedTo40C(input.ir1MinMOhm, input.temperatureC);
