@@ -6,6 +6,7 @@ import { z } from 'zod';
 import { db } from '@/lib/db/client';
 import { verifyPassword } from './password';
 import { SESSION_COOKIE, createSession, deleteSession } from './session-store';
+import { SIGN_IN_FAILED } from './messages';
 
 const signInSchema = z.object({
   email: z.string().trim().toLowerCase().email('Enter your email address.'),
@@ -21,7 +22,6 @@ export interface SignInState {
 
 // A fixed hash to compare against when the email is unknown, so both cases take the same time.
 const DUMMY_HASH = '$2b$11$C6UzMDM.H6dfI/f/IKcEeO5l2A6c7cT3B0vYbE2F8Qv4G5x1nZ9xS';
-export const SIGN_IN_FAILED = 'Email or password is not right.';
 
 export async function signIn(_prev: SignInState, form: FormData): Promise<SignInState> {
   const parsed = signInSchema.safeParse(Object.fromEntries(form));

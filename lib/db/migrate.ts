@@ -6,7 +6,7 @@
  */
 import { createHash, randomUUID } from 'node:crypto';
 import { existsSync, readFileSync, readdirSync } from 'node:fs';
-import { join, resolve } from 'node:path';
+import { join } from 'node:path';
 import type { SqlRunner } from './sql-runner';
 
 const PRISMA_MIGRATE_LOCK = 72707369;
@@ -27,16 +27,16 @@ export class MigrationError extends Error {
 }
 
 export function migrationsDir(): string {
-  return resolve(process.env.COILWRIGHT_MIGRATIONS_DIR ?? 'prisma/migrations');
+  return join(process.cwd(), 'prisma', 'migrations');
 }
 
 export function listMigrations(dir = migrationsDir()): { name: string; sql: Buffer }[] {
-  if (!existsSync(dir)) throw new MigrationError(`No migrations folder at ${dir}.`);
-  return readdirSync(dir, { withFileTypes: true })
+  if (!existsSync(/*turbopackIgnore: true*/ dir)) throw new MigrationError(`No migrations folder at ${dir}.`);
+  return readdirSync(/*turbopackIgnore: true*/ dir, { withFileTypes: true })
     .filter((d) => d.isDirectory())
     .map((d) => d.name)
     .sort()
-    .map((name) => ({ name, sql: readFileSync(join(dir, name, 'migration.sql')) }));
+    .map((name) => ({ name, sql: readFileSync(/*turbopackIgnore: true*/ join(dir, name, 'migration.sql')) }));
 }
 
 /** Returns the names of the migrations it applied (empty when the database was up to date). */

@@ -1,0 +1,155 @@
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { requirePageUser } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/permissions';
+import { getJobByNumber, listStaff, motorHistory } from '@/lib/jobs/job-queries';
+import { MAIN_PATH, STATUS_LABELS, allowedMoves, moveLabel } from '@/lib/jobs/status-flow';
+import { CONNECTION_LABELS } from '@/lib/schemas/motor';
+import { fmt } from '@/lib/format';
+import { polesFromSpeed } from '@/lib/engine/speed';
+import { JobDetailsForm } from './job-details-form';
+import { StatusMoves } from './status-moves';
+import { PhotoUpload } from './photo-upload';
+
+const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
+
+export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
+  return { title: `Job ${(await params).number}` };
+}
+
+export default async function JobPage({ params }: { params: Promise<{ number: string }> }) {
+  const user = await requirePageUser('job.read');
+  const parsed = paramsSchema.safeParse(await params);
+  if (!parsed.success) notFound();
+  const job = await getJobByNumber(parsed.data.number);
+  if (!job) notFound();
+  const [staff, history] = await Promise.all([listStaff(), motorHistory(job.motorId, job.id)]);
+  const m = job.motor;
+  const poles = m.frequencyHz && m.speedRpm ? polesFromSpeed(m.frequencyHz, m.speedRpm) : null;
+  const moves = can(user.role, 'job.move')
+    ? allowedMoves(job.status, job.heldFrom, user.role).map((to) => ({ to, label: moveLabel(job.status, to) }))
+    : [];
+  const currentIndex = MAIN_PATH.indexOf(job.status);
+  const contact = job.customer.contacts[0];
+
+  return (
+    <>
+      <p className="no-print"><Link href="/jobs">← Job board</Link></p>
+      <h1>
+        Job {job.number} · {job.customer.company}
+      </h1>
+      <ol className="status-path" aria-label="Shop path">
+        {MAIN_PATH.map((s, i) => (
+          <li key={s} aria-current={s === job.status ? 'step' : undefined} className={currentIndex > i ? 'done' : undefined}>
+            {STATUS_LABELS[s]}
+          </li>
+        ))}
+        {!MAIN_PATH.includes(job.status) && <li aria-current="step">{STATUS_LABELS[job.status]}{job.heldFrom ? ` (from ${STATUS_LABELS[job.heldFrom]})` : ''}</li>}
+      </ol>
+
+      <section className="card" aria-labelledby="moves-h">
+        <h2 id="moves-h">Status: {STATUS_LABELS[job.status]}</h2>
+        <StatusMoves jobId={job.id} version={job.version} moves={moves} />
+      </section>
+
+      <div className="grid" style={{ gridTemplateColumns: 'repeat(auto-fit, minmax(340px, 1fr))' }}>
+        <section className="card" aria-labelledby="cust-h">
+          <h2 id="cust-h">Customer</h2>
+          <dl className="dl">
+            <dt>Company</dt><dd>{job.customer.company}</dd>
+            <dt>Contact</dt><dd>{contact?.name ?? '—'}</dd>
+            <dt>Phone</dt><dd>{job.customer.phone ?? '—'}</dd>
+            <dt>Email</dt><dd>{job.customer.email ?? '—'}</dd>
+            <dt>Received</dt><dd>{fmt.date(job.receivedAt)}</dd>
+          </dl>
+        </section>
+        <section className="card" aria-labelledby="plate-h">
+          <h2 id="plate-h">Nameplate</h2>
+          <dl className="dl">
+            <dt>Motor</dt><dd>{m.manufacturer} {m.model ?? ''} · S/N {m.serial ?? '—'} · frame {m.frame ?? '—'}</dd>
+            <dt>Output</dt><dd>{fmt.power(m.outputKw)}</dd>
+            <dt>Voltage</dt><dd>{fmt.num(m.ratedVoltageV, 0, 'V')} {m.voltages ? `(plate: ${m.voltages} V)` : ''} · {m.connection ? CONNECTION_LABELS[m.connection as keyof typeof CONNECTION_LABELS] ?? m.connection : 'connection not stated'}</dd>
+            <dt>Current</dt><dd>{fmt.num(m.currentA, 1, 'A')}</dd>
+            <dt>Supply</dt><dd>{m.phases} phase · {fmt.num(m.frequencyHz, 0, 'Hz')}</dd>
+            <dt>Speed</dt><dd>{fmt.num(m.speedRpm, 0, 'rpm')} {poles?.ok ? `(${poles.value} poles)` : ''}</dd>
+            <dt>Insulation / duty</dt><dd>Class {m.insulationClass ?? '—'} · {m.duty ?? '—'} · SF {m.serviceFactor ?? '—'}</dd>
+            <dt>Enclosure</dt><dd>{m.enclosure ?? '—'}</dd>
+            <dt>Efficiency, PF</dt><dd>{fmt.num(m.efficiencyPercent, 1, '%')} · {fmt.num(m.powerFactor, 2)}</dd>
+            <dt>Code / design</dt><dd>{m.codeLetter ?? '—'} / {m.designLetter ?? '—'}</dd>
+            <dt>Bearings</dt><dd>DE {m.bearingDriveEnd ?? '—'} · ODE {m.bearingOppositeEnd ?? '—'}</dd>
+          </dl>
+        </section>
+      </div>
+
+      <section className="card" aria-labelledby="details-h">
+        <h2 id="details-h">Job details</h2>
+        {can(user.role, 'job.edit') ? (
+          <JobDetailsForm
+            key={job.id}
+            staff={staff.map((s) => ({ id: s.id, name: s.name }))}
+            current={{
+              jobId: job.id,
+              version: job.version,
+              promisedAt: job.promisedAt ? fmt.date(job.promisedAt) : '',
+              priority: job.priority,
+              customerPo: job.customerPo ?? '',
+              reportedFault: job.reportedFault ?? '',
+              notes: job.notes ?? '',
+              assigneeId: job.assigneeId ?? '',
+            }}
+          />
+        ) : (
+          <dl className="dl">
+            <dt>Reported fault</dt><dd>{job.reportedFault ?? '—'}</dd>
+            <dt>Promised</dt><dd>{fmt.date(job.promisedAt)}</dd>
+            <dt>Priority</dt><dd>{job.priority.toLowerCase()}</dd>
+            <dt>Customer PO</dt><dd>{job.customerPo ?? '—'}</dd>
+            <dt>Assigned to</dt><dd>{job.assignee?.name ?? '—'}</dd>
+            <dt>Notes</dt><dd>{job.notes ?? '—'}</dd>
+          </dl>
+        )}
+      </section>
+
+      <section className="card" aria-labelledby="photos-h">
+        <h2 id="photos-h">Photos</h2>
+        {job.attachments.length === 0 ? <p className="muted">No photos yet.</p> : (
+          <div className="photos">
+            {job.attachments.map((a) => (
+              <figure key={a.id}>
+                <a href={`/api/attachments/${a.id}`}><img src={`/api/attachments/${a.id}`} alt={`${a.kind.toLowerCase()} photo ${a.filename}`} /></a>
+                <figcaption>{a.kind.toLowerCase()} · {a.filename} · {fmt.bytes(a.sizeBytes)}</figcaption>
+              </figure>
+            ))}
+          </div>
+        )}
+        {can(user.role, 'job.attach') && <PhotoUpload jobId={job.id} />}
+      </section>
+
+      <section className="card" aria-labelledby="timeline-h">
+        <h2 id="timeline-h">Timeline</h2>
+        <ol className="timeline" reversed>
+          {job.events.map((e) => (
+            <li key={e.id}>
+              <span className="muted small">{fmt.dateTime(e.at)} · {e.user?.name ?? 'system'}</span>
+              <div>{e.message}</div>
+            </li>
+          ))}
+        </ol>
+      </section>
+
+      {history.length > 0 && (
+        <section className="card" aria-labelledby="history-h">
+          <h2 id="history-h">Earlier jobs on this motor</h2>
+          <ul>
+            {history.map((h) => (
+              <li key={h.number}>
+                <Link href={`/jobs/${h.number}`}>Job {h.number}</Link> · {fmt.date(h.receivedAt)} · {STATUS_LABELS[h.status]} · {h.reportedFault}
+              </li>
+            ))}
+          </ul>
+        </section>
+      )}
+    </>
+  );
+}

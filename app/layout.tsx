@@ -1,0 +1,47 @@
+import type { Metadata } from 'next';
+import type { ReactNode } from 'react';
+import Link from 'next/link';
+import { currentUser } from '@/lib/auth/guard';
+import { signOut } from '@/lib/auth/auth-actions';
+import { can, ROLE_LABELS } from '@/lib/auth/permissions';
+import './globals.css';
+
+export const metadata: Metadata = {
+  title: { default: 'Coilwright', template: '%s · Coilwright' },
+  description: 'Job tracking, winding data, redesign and test records for motor repair shops.',
+};
+
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  const user = await currentUser();
+  return (
+    <html lang="en">
+      <body>
+        <a className="skip" href="#main">Skip to content</a>
+        <header className="topbar">
+          <Link href="/jobs" className="brand">
+            Coil<span>wright</span>
+          </Link>
+          {user && (
+            <nav aria-label="Main">
+              <ul>
+                <li><Link href="/jobs">Job board</Link></li>
+                {can(user.role, 'job.intake') && <li><Link href="/jobs/new">New intake</Link></li>}
+              </ul>
+            </nav>
+          )}
+          {user && (
+            <div className="who">
+              <span>
+                {user.name} <span className="muted">({ROLE_LABELS[user.role]})</span>
+              </span>
+              <form action={signOut}>
+                <button type="submit">Sign out</button>
+              </form>
+            </div>
+          )}
+        </header>
+        <main id="main">{children}</main>
+      </body>
+    </html>
+  );
+}
