@@ -5,8 +5,9 @@
  * With i_x = I·cos(ωt − β_x) and X_x[n] = Σ polarity·turns·e^{j n θ_s} (slot-star.ts), the MMF step function
  * has, at mechanical order n, a forward wave of amplitude I·|Σ_x e^{−jβ_x} X_x[n]|/(2πn) and a backward wave
  * of amplitude I·|Σ_x e^{+jβ_x} X_x[n]|/(2πn) ampere-turns (working wave: (3/2)·(4/π)·k_w1·N_ph/P per
- * ampere). The current sequence (β_B = ±120°) is chosen so the working wave runs forward. For a balanced winding this gives: triplens cancelled, ν = 6k+1 forward at
- * n_s/ν, ν = 6k−1 backward at n_s/ν, amplitude relative to the working wave (k_wν/ν)/k_w1.
+ * ampere). The current sequence (β_B = ±120°) is chosen so the working wave runs forward. For a balanced
+ * winding this gives: triplens cancelled, ν = 6k+1 forward at n_s/ν, ν = 6k−1 backward at n_s/ν, amplitude
+ * relative to the working wave (k_wν/ν)/k_w1.
  * These are space harmonics; time harmonics of the supply current turn at ν times synchronous speed.
  */
 import { magnitude, PHASES, SlotStar, ZERO_FACTOR, type Phasor } from './slot-star';
@@ -63,6 +64,9 @@ function waveSum(star: SlotStar, n: number, lag: Record<Phase, number>, sign: 1 
   return magnitude({ re, im });
 }
 
+/** v/f1, or 0 when the working wave is missing or v is rounding noise. */
+const relativeTo = (f1: number, v: number): number => (f1 > 0 && v / f1 > ZERO_FACTOR ? v / f1 : 0);
+
 /** The sequence under which the working wave (n = p) runs forward. */
 export function forwardSequence(star: SlotStar): 'ABC' | 'ACB' {
   const p = star.polePairs;
@@ -83,9 +87,8 @@ export function mmfSpectrum(table: SlotTable, supply: { frequencyHz: number }, m
     const present = PHASES.some((ph) => star.factor(ph, n) > 0);
     if (n % p !== 0 && !present) continue;
     const nu = n / p;
-    const rel = (v: number): number => (f1 > 0 && v / n / f1 > ZERO_FACTOR ? v / n / f1 : 0);
-    const forward = rel(waveSum(star, n, lag, -1));
-    const backward = rel(waveSum(star, n, lag, 1));
+    const forward = relativeTo(f1, waveSum(star, n, lag, -1) / n);
+    const backward = relativeTo(f1, waveSum(star, n, lag, 1) / n);
     const direction: MmfDirection = forward > 0 && backward > 0 ? 'both' : forward > 0 ? 'forward' : backward > 0 ? 'backward' : 'cancelled';
     const speedFraction = direction === 'cancelled' ? 0 : (forward >= backward ? 1 : -1) / nu;
     harmonics.push({

@@ -7,7 +7,7 @@
  * divides S/k works. Each allowed a is then confirmed by summing the paths' phasors.
  */
 import { fail, ok, type EngineResult } from './result';
-import { magnitude, PHASES, SlotStar, type Phasor } from './slot-star';
+import { magnitude, PHASES, type Phasor } from './slot-star';
 import { LAYOUT_LIMITS, type CoilSide, type Phase, type SlotTable } from './winding-layout';
 import { slotsPerPolePerPhase } from './closed-form';
 
@@ -43,9 +43,20 @@ function unitsOf(sides: CoilSide[], byCoil: boolean): CoilSide[][] {
   return [...m.values()];
 }
 
+/** Key of one side after a shift of `shift` slots with its polarity times `sign`. */
+const shiftedSideKey = (s: CoilSide, shift: number, sign: number, slots: number): number =>
+  sideKey(((s.slot - 1 + shift) % slots) + 1, s.layer, s.polarity * sign, s.turns);
+
+/** A number naming a unit after a shift of `shift` slots with polarities times `sign` (sides in key order). */
 function unitKey(unit: CoilSide[], shift: number, sign: number, slots: number): number {
-  const keys = unit.map((s) => sideKey(((s.slot - 1 + shift) % slots) + 1, s.layer, s.polarity * sign, s.turns)).sort((a, b) => a - b);
-  return keys.reduce((acc, k) => acc * SIDE_KEYS + k, 0);
+  const [a, b] = unit;
+  if (unit.length === 1 && a) return shiftedSideKey(a, shift, sign, slots);
+  if (unit.length === 2 && a && b) {
+    const ka = shiftedSideKey(a, shift, sign, slots);
+    const kb = shiftedSideKey(b, shift, sign, slots);
+    return ka < kb ? ka * SIDE_KEYS + kb : kb * SIDE_KEYS + ka;
+  }
+  return unit.map((s) => shiftedSideKey(s, shift, sign, slots)).sort((x, y) => x - y).reduce((acc, k) => acc * SIDE_KEYS + k, 0);
 }
 
 /** Smallest valid shift of one phase's units, its polarity factor σ, and the number of sections S/k. */
@@ -59,12 +70,12 @@ function phaseSymmetry(units: CoilSide[][], slots: number, polePairs: number): {
 }
 
 /**
- * Splits one phase's units into `paths` paths along its symmetry (shift k, polarity factor σ) and returns
- * each path's phasor at the working order. Unit u and its images g^i(u) (shifted i·k slots) go to sections
- * 0 … n−1; section i equals section 0 times (σ·e^{j·k·p·360°/S})^i = ±1, and is connected reversed when −1.
+ * Puts one phase's units into sections along its symmetry (shift k, polarity factor σ): unit u and its
+ * images g^i(u) (shifted i·k slots) go to sections 0 … n−1. Section i equals section 0 times
+ * (σ·e^{j·k·p·360°/S})^i = ±1 and is connected reversed when that is −1; returns each unit's section and
+ * its phasor at the working order with that reversal applied.
  */
-function pathPhasors(units: CoilSide[][], star: SlotStar, sym: { shift: number; sign: number }, paths: number): Phasor[] {
-  const { slots, polePairs } = star;
+function sectionedPhasors(units: CoilSide[][], slots: number, polePairs: number, sym: { shift: number; sign: number }): { section: number[]; phasor: Phasor[] } {
   const n = slots / sym.shift;
   const rho = ((2 * sym.shift * polePairs) / slots) % 2 === 0 ? 1 : -1;
   const index = new Map(units.map((u, i) => [unitKey(u, 0, 1, slots), i]));
@@ -77,16 +88,29 @@ function pathPhasors(units: CoilSide[][], star: SlotStar, sym: { shift: number; 
       section[j] = k;
     }
   });
-  const out: Phasor[] = Array.from({ length: paths }, () => ({ re: 0, im: 0 }));
-  units.forEach((u, i) => {
+  const phasor = units.map((u, i) => {
     const k = Math.max(0, section[i] ?? 0);
     const turn = (sym.sign * rho) ** k;
-    const target = out[k % paths];
-    if (!target) return;
+    let re = 0;
+    let im = 0;
     for (const s of u) {
       const th = (2 * Math.PI * (((s.slot - 1) * polePairs) % slots)) / slots;
-      target.re += turn * s.polarity * s.turns * Math.cos(th);
-      target.im += turn * s.polarity * s.turns * Math.sin(th);
+      re += turn * s.polarity * s.turns * Math.cos(th);
+      im += turn * s.polarity * s.turns * Math.sin(th);
+    }
+    return { re, im };
+  });
+  return { section, phasor };
+}
+
+/** Phasor of each of `paths` paths when path j takes the sections i with i mod paths = j. */
+function pathPhasors(split: { section: number[]; phasor: Phasor[] }, paths: number): Phasor[] {
+  const out: Phasor[] = Array.from({ length: paths }, () => ({ re: 0, im: 0 }));
+  split.phasor.forEach((z, i) => {
+    const target = out[Math.max(0, split.section[i] ?? 0) % paths];
+    if (target) {
+      target.re += z.re;
+      target.im += z.im;
     }
   });
   return out;
@@ -98,14 +122,14 @@ function pathPhasors(units: CoilSide[][], star: SlotStar, sym: { shift: number; 
  * count of coils per phase must also divide; whole- and half-coiled single-layer windings then look alike,
  * so the note asks the winder to check. [derived, reference §3]
  */
-export function allowedParallelPaths(table: SlotTable, star: SlotStar = new SlotStar(table)): ParallelPathAnalysis {
+export function allowedParallelPaths(table: SlotTable): ParallelPathAnalysis {
   const byCoil = table.sides.length > 0 && table.sides.every((s) => s.coil !== undefined);
   let sections = 0;
-  const perPhase = new Map<Phase, { units: CoilSide[][]; sym: { shift: number; sign: number } }>();
+  const perPhase = new Map<Phase, { section: number[]; phasor: Phasor[] }>();
   for (const ph of PHASES) {
     const units = unitsOf(table.sides.filter((s) => s.phase === ph), byCoil);
     const sym = phaseSymmetry(units, table.slots, table.poles / 2);
-    perPhase.set(ph, { units, sym });
+    perPhase.set(ph, sectionedPhasors(units, table.slots, table.poles / 2, sym));
     sections = sections === 0 ? table.slots / sym.shift : gcdInt(sections, table.slots / sym.shift);
   }
   const coilsPerPhase = PHASES.map((ph) => table.sides.filter((s) => s.phase === ph).length / 2);
@@ -117,7 +141,7 @@ export function allowedParallelPaths(table: SlotTable, star: SlotStar = new Slot
       const entry = perPhase.get(ph);
       if (!entry) continue;
       // a divides `sections`, which divides this phase's own number of sections.
-      const zs = pathPhasors(entry.units, star, entry.sym, a);
+      const zs = pathPhasors(entry, a);
       const ref = zs[0] ?? { re: 0, im: 0 };
       const m0 = magnitude(ref);
       for (const z of zs) mismatch = Math.max(mismatch, m0 > 0 ? magnitude({ re: z.re - ref.re, im: z.im - ref.im }) / m0 : 0);
@@ -138,8 +162,8 @@ function gcdInt(a: number, b: number): number {
 }
 
 /** Checks a chosen number of parallel paths against the layout; the error names the allowed counts. */
-export function checkParallelPaths(table: SlotTable, paths: number, star?: SlotStar): EngineResult<ParallelPathAnalysis> {
-  const analysis = allowedParallelPaths(table, star);
+export function checkParallelPaths(table: SlotTable, paths: number): EngineResult<ParallelPathAnalysis> {
+  const analysis = allowedParallelPaths(table);
   if (analysis.allowed.includes(paths)) return ok(analysis);
   return fail(
     'parallel-paths-not-allowed',

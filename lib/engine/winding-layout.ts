@@ -271,3 +271,14 @@ export function checkSlotTable(table: SlotTable): EngineResult<SlotTable> {
   }
   return ok({ ...table, sides: [...table.sides].sort((x, y) => x.slot - y.slot || x.layer - y.layer) });
 }
+
+/**
+ * One layer of a slot table as the winder writes it: the phase letter per slot, upper case going (+1),
+ * lower case returning (−1), '·' for an empty slot layer. Index 0 is slot 1.
+ */
+export function slotRow(table: SlotTable, layer: Layer): string[] {
+  const row = new Array<string>(table.slots).fill('·');
+  for (const s of table.sides)
+    if (s.layer === layer && s.slot >= 1 && s.slot <= table.slots) row[s.slot - 1] = s.polarity > 0 ? s.phase : s.phase.toLowerCase();
+  return row;
+}
