@@ -9,8 +9,9 @@
  */
 import { mmToInches, milsToMm } from './units';
 
-/** Lowest and highest gauge numbers held: 4/0 (n = −3) and 44. */
+/** Gauge number of 4/0, the thickest size held. */
 export const AWG_MIN_N = -3;
+/** Gauge number of the finest size held. */
 export const AWG_MAX_N = 44;
 
 /**

@@ -6,10 +6,11 @@
 export const COPPER_RESISTIVITY_20C_OHM_MM2_PER_M = 1 / 58;
 
 /**
- * Inferred zero-resistance temperature of copper, °C below zero: 234.5 (IEEE practice, e.g. IEEE 43 and
- * IEEE 112); IEC 60034 uses 235. R_t2 = R_t1·(k + t2)/(k + t1).
+ * Inferred zero-resistance temperature of copper, °C below zero: 234.5 (IEEE practice, e.g. IEEE 112);
+ * IEC 60034 uses 235. R_t2 = R_t1·(k + t2)/(k + t1).
  */
 export type CopperTempConstant = 234.5 | 235;
+/** 234.5 °C (IEEE practice) and 235 °C (IEC 60034). */
 export const COPPER_TEMP_CONSTANT_IEEE: CopperTempConstant = 234.5;
 export const COPPER_TEMP_CONSTANT_IEC: CopperTempConstant = 235;
 

@@ -5,6 +5,7 @@ import type { Connection } from './resistance';
 import { fail, finiteOr, type EngineResult } from './result';
 import { ampsPerMm2ToCmilPerAmp } from './units';
 
+/** Inputs for the current density of one winding. */
 export interface CurrentDensityInput {
   /** Full-load line current, A. */
   lineCurrentA: number;
@@ -15,6 +16,7 @@ export interface CurrentDensityInput {
   conductorAreaPerTurnMm2: number;
 }
 
+/** Phase and path current and the resulting current density. */
 export interface CurrentDensity {
   /** Star: I_line; delta: I_line/√3. */
   phaseCurrentA: number;
@@ -55,6 +57,7 @@ export function currentDensityChecked(input: CurrentDensityInput): EngineResult<
   return finiteOr(result.ampsPerMm2 > 0 && result.circularMilsPerAmp > 0 ? product : Number.NaN, () => result, 'Current density');
 }
 
+/** A typical current-density range with its source. */
 export interface CurrentDensityRange {
   minAPerMm2: number;
   maxAPerMm2: number;

@@ -4,9 +4,12 @@
  */
 import { fail, ok, type EngineResult } from './result';
 
+/** Which hipot level: new winding, repeat of a new-winding test, or reconditioned winding. */
 export type HipotCase = 'new' | 'repeat' | 'reconditioned';
+/** Rule set: NEMA MG 1 with ANSI/EASA AR100-2020, or IEC 60034-1. */
 export type HipotPractice = 'nema' | 'iec';
 
+/** What the user picks for a hipot test. */
 export interface HipotInput {
   /** Rated line voltage, V. */
   ratedVoltageV: number;
@@ -16,6 +19,7 @@ export interface HipotInput {
   ratedOutputHp?: number;
 }
 
+/** Test voltages and the rule used. */
 export interface HipotLevels {
   /** AC test voltage, V rms, applied for 1 minute. */
   acV: number;

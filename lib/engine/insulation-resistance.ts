@@ -42,6 +42,7 @@ const CATEGORY_TEXT: Readonly<Record<IrMinimumCategory, string>> = {
   'random-wound': '5 MΩ (random-wound, or below 1 kV)',
 };
 
+/** Recommended IR/PI test voltage range, V DC, with the rule text. */
 export interface IrTestVoltage {
   minV: number;
   maxV: number;

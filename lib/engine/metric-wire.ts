@@ -9,6 +9,7 @@
 
 export type RenardSeries = 'R20' | 'R40';
 
+/** One nominal size of the metric series. */
 export interface MetricNominalSize {
   /** Nominal bare diameter, mm. */
   diameterMm: number;
@@ -22,6 +23,7 @@ const R40_MANTISSAS: readonly number[] = [
   3.35, 3.55, 3.75, 4.0, 4.25, 4.5, 4.75, 5.0, 5.3, 5.6, 6.0, 6.3, 6.7, 7.1, 7.5, 8.0, 8.5, 9.0, 9.5,
 ];
 
+/** Smallest and largest nominal bare diameters held, mm [from memory]. */
 export const METRIC_MIN_DIAMETER_MM = 0.05;
 export const METRIC_MAX_DIAMETER_MM = 5.0;
 

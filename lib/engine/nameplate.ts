@@ -4,10 +4,12 @@
  */
 import { fail, finiteOr, ok, type EngineResult } from './result';
 
+/** NEMA locked-rotor code letters (MG 1 10.37.2); I, O and Q are not used. */
 export type CodeLetter =
   | 'A' | 'B' | 'C' | 'D' | 'E' | 'F' | 'G' | 'H' | 'J' | 'K'
   | 'L' | 'M' | 'N' | 'P' | 'R' | 'S' | 'T' | 'U' | 'V';
 
+/** A code letter's locked-rotor kVA/hp range. */
 export interface KvaPerHpRange {
   /** Lower bound, kVA/hp, included. */
   minKvaPerHp: number;
@@ -24,6 +26,7 @@ export const CODE_LETTER_UPPER_BOUNDS: Readonly<Record<CodeLetter, number | null
   L: 10.0, M: 11.2, N: 12.5, P: 14.0, R: 16.0, S: 18.0, T: 20.0, U: 22.4, V: null,
 };
 
+/** Code letters in ascending kVA/hp order. */
 export const CODE_LETTERS = Object.keys(CODE_LETTER_UPPER_BOUNDS) as CodeLetter[];
 
 /** The kVA/hp range of a code letter (NEMA MG 1 10.37.2); the lower bound is the previous letter's upper. */
@@ -63,11 +66,13 @@ export function lockedRotorCurrentRangeA(letter: CodeLetter, hp: number, lineVol
   return { minA: amps(minKvaPerHp), maxA: maxKvaPerHp === null ? null : amps(maxKvaPerHp) };
 }
 
+/** Insulation thermal classes handled (IEC 60085 letters). */
 export type InsulationClass = 'A' | 'B' | 'F' | 'H';
 
 /** Thermal class temperature, °C: A 105, B 130, F 155, H 180 (IEC 60085; NEMA MG 1). */
 export const INSULATION_CLASS_TEMP_C: Readonly<Record<InsulationClass, number>> = { A: 105, B: 130, F: 155, H: 180 };
 
+/** IEC 60034-1 duty types. */
 export type DutyType = 'S1' | 'S2' | 'S3' | 'S4' | 'S5' | 'S6' | 'S7' | 'S8' | 'S9' | 'S10';
 
 /** Duty types of IEC 60034-1, labels in our own words [from memory]. */
@@ -84,6 +89,7 @@ export const DUTY_TYPES: Readonly<Record<DutyType, string>> = {
   S10: 'Discrete constant loads and speeds',
 };
 
+/** IEC 60034-30-1 efficiency classes. */
 export type EfficiencyClass = 'IE1' | 'IE2' | 'IE3' | 'IE4' | 'IE5';
 
 /** Efficiency classes of IEC 60034-30-1 and their common names [from memory]. */

@@ -11,6 +11,7 @@ import {
 import { fail, finiteOr, type EngineResult } from './result';
 import type { Verdict } from './verdict';
 
+/** Three-phase winding connection. */
 export type Connection = 'star' | 'delta';
 
 /** One wire size in hand: bare area of one strand and how many strands of it make up a turn. */
@@ -19,6 +20,7 @@ export interface StrandGroup {
   count: number;
 }
 
+/** Winding data for a phase-resistance prediction. */
 export interface PhaseResistanceInput {
   /** Coils in one phase, C (double layer: S/3; single layer: S/6). */
   coilsPerPhase: number;
@@ -92,6 +94,7 @@ export function phaseFromLineToLineOhm(rLineToLine: number, connection: Connecti
   return connection === 'star' ? rLineToLine / 2 : 1.5 * rLineToLine;
 }
 
+/** Spread of a set of resistance readings. */
 export interface ResistanceUnbalance {
   maxOhm: number;
   minOhm: number;
@@ -110,6 +113,7 @@ export function resistanceUnbalance(readings: readonly number[]): ResistanceUnba
   return { maxOhm, minOhm, averageOhm, unbalanceFraction };
 }
 
+/** Random-wound (round wire) or form-wound (pre-formed coils), as AR100 distinguishes them. */
 export type WindingKind = 'random' | 'form';
 
 /** Largest acceptable resistance unbalance: 2 % random-wound, 1 % form-wound (ANSI/EASA AR100-2020). */

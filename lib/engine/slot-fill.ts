@@ -7,6 +7,7 @@
  */
 import { fail, finiteOr, type EngineResult } from './result';
 
+/** Usable slot outline, mm. */
 export interface SlotShape {
   /** Depth from the top of the usable slot to its deepest point, mm (includes the round bottom). */
   depthMm: number;
@@ -17,6 +18,7 @@ export interface SlotShape {
   roundBottom?: boolean;
 }
 
+/** Insulation that takes slot area away from the wire, mm. */
 export interface SlotInsulation {
   /** Slot liner (cell) thickness, mm, on the sides and bottom. */
   linerThicknessMm: number;
@@ -81,6 +83,7 @@ export function netSlotAreaMm2(s: SlotShape, ins: SlotInsulation): EngineResult<
   return finiteOr(net, (a) => a, 'Net slot area');
 }
 
+/** What sits in one slot, and the slot areas to divide by. */
 export interface SlotFillInput {
   /** Conductors (turn sides) per slot, Z_s: double layer 2·N_c, single layer N_c. */
   conductorsPerSlot: number;
@@ -90,6 +93,7 @@ export interface SlotFillInput {
   netSlotAreaMm2: number;
 }
 
+/** Slot fill by both definitions, as fractions. */
 export interface SlotFill {
   /** Bare copper fill: Z_s·Σ count·(π/4)·d_bare² ÷ gross slot area (a copper space factor). */
   bareCopperOverGross: number;

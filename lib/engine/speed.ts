@@ -20,6 +20,7 @@ export const MAX_POLES_FROM_SPEED = 128;
 /** Largest slip this module treats as "normal" when inferring poles from speed [common practice]. */
 export const MAX_NORMAL_SLIP = 0.15;
 
+/** Error messages of polesFromSpeed, pinned by the tests. */
 export const POLES_FROM_SPEED_MESSAGES = {
   invalid: 'Frequency and speed must be positive numbers.',
   tooFast: 'The speed is above the synchronous speed of a 2-pole machine at this frequency.',

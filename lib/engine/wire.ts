@@ -23,9 +23,12 @@ import { fail, finiteOr, ok, type EngineResult } from './result';
 import { mm2ToCircularMils, mmToInches, M_PER_FOOT } from './units';
 import { COPPER_RESISTIVITY_20C_OHM_MM2_PER_M } from './copper';
 
+/** Enamel grade 1/2/3 (IEC grade, or AWG single/heavy/triple build). */
 export type { EnamelGrade } from './enamel-build';
+/** How the size is named: AWG gauge (ASTM B258) or metric nominal diameter (IEC 60317-0-1). */
 export type WireStandard = 'awg' | 'metric';
 
+/** A wire as written on a job sheet. */
 export interface WireSize {
   standard: WireStandard;
   /** AWG gauge label ("18", "4/0") or metric nominal bare diameter in mm ("0.85"). */
@@ -47,6 +50,7 @@ export interface WireTableRow {
   circularMils: number;
 }
 
+/** An AWG row: formula values (ASTM B258) with the published rounded diameter alongside. */
 export interface AwgTableRow extends WireTableRow {
   standard: 'awg';
   /** Gauge number, 4/0 = −3. */
@@ -55,6 +59,7 @@ export interface AwgTableRow extends WireTableRow {
   bareInPublished: number;
 }
 
+/** A metric row: nominal diameter and its Renard series [from memory]. */
 export interface MetricTableRow extends WireTableRow {
   standard: 'metric';
   series: RenardSeries;
@@ -67,6 +72,7 @@ export interface NearestWire<Row extends WireTableRow> {
   difference: number;
 }
 
+/** Error message tails for 'unknown-wire', pinned by the tests. */
 export const UNKNOWN_AWG_MESSAGE = 'is not an AWG size between 4/0 and 44.';
 export const UNKNOWN_METRIC_MESSAGE = 'is not a nominal metric wire diameter between 0.050 and 5.000 mm.';
 
@@ -159,7 +165,9 @@ export function nearestAwgForAreaMm2(areaMm2Asked: number): EngineResult<Nearest
   if (!(areaMm2Asked > 0) || !Number.isFinite(areaMm2Asked)) {
     return fail('invalid-input', 'The conductor area must be a positive number.', 'Enter the area in mm².', 'area');
   }
-  const n = Math.min(AWG_MAX_N, Math.max(AWG_MIN_N, Math.round(awgNumberForDiameterMm(Math.sqrt((4 * areaMm2Asked) / Math.PI)))));
+  // Gauge number is linear in log(diameter), so rounding the continuous gauge is nearest on a log scale.
+  const continuous = awgNumberForDiameterMm(Math.sqrt((4 * areaMm2Asked) / Math.PI));
+  const n = Math.min(AWG_MAX_N, Math.max(AWG_MIN_N, Math.round(continuous)));
   const row = AWG_ROWS[n - AWG_MIN_N];
   return row
     ? finiteOr(row.areaMm2 / areaMm2Asked - 1, (difference) => ({ row, difference }), 'Area difference')
