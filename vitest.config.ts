@@ -19,6 +19,7 @@ export default defineConfig({
         test: {
           name: 'integration',
           include: ['tests/integration/**/*.test.ts'],
+          setupFiles: ['tests/support/next-mocks.ts'],
           environment: 'node',
           maxWorkers: 2,
           testTimeout: 60_000,

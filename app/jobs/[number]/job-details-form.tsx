@@ -63,16 +63,30 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
     <form onSubmit={onSubmit} noValidate aria-label="Job details">
       <FormStatus message={summary?.text} tone={summary?.tone ?? 'ok'} />
       {conflict && (
-        <div className="notice warn" data-testid="conflict">
-          <p><strong>Saved by someone else</strong> (now version {current.version}). Their values:</p>
-          <ul className="small">
-            <li>Promised: {current.promisedAt || '—'} · Priority: {current.priority.toLowerCase()} · PO: {current.customerPo || '—'}</li>
-            <li>Reported fault: {current.reportedFault}</li>
-            <li>Notes: {current.notes || '—'}</li>
-          </ul>
-          <button type="button" className="btn secondary" onClick={() => { setBaseVersion(current.version); setConflict(false); setSummary({ tone: 'warn', text: 'Your changes are still in the form. Save again to apply them over the current version.' }); }}>
-            Keep my changes and retry on the current version
-          </button>
+        <div className="notice warn" data-testid="conflict" aria-live="polite">
+          {current.version === baseVersion ? (
+            <p>Loading the values saved by the other person…</p>
+          ) : (
+            <>
+              <p><strong>Saved by someone else</strong> (now version {current.version}). Their values:</p>
+              <ul className="small">
+                <li>Promised: {current.promisedAt || '—'} · Priority: {current.priority.toLowerCase()} · PO: {current.customerPo || '—'}</li>
+                <li>Reported fault: {current.reportedFault}</li>
+                <li>Notes: {current.notes || '—'}</li>
+              </ul>
+              <button
+                type="button"
+                className="btn secondary"
+                onClick={() => {
+                  setBaseVersion(current.version);
+                  setConflict(false);
+                  setSummary({ tone: 'warn', text: 'Your changes are still in the form. Save again to apply them over the current version.' });
+                }}
+              >
+                Keep my changes and retry on the current version
+              </button>
+            </>
+          )}
         </div>
       )}
       <input type="hidden" {...register('jobId')} />

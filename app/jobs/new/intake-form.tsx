@@ -27,7 +27,7 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(null);
   const [matches, setMatches] = useState<Match[] | null>(null);
   const photosRef = useRef<HTMLInputElement>(null);
-  const form = useForm<IntakeInput, unknown, Intake>({ resolver: zodResolver(intakeSchema), defaultValues: DEFAULTS, mode: 'onTouched' });
+  const form = useForm<IntakeInput, unknown, Intake>({ resolver: zodResolver(intakeSchema), defaultValues: DEFAULTS });
   const { register, handleSubmit, watch, setValue, setError, formState: { errors } } = form;
   const anyRegister = register as unknown as UseFormRegister<Record<string, unknown>>;
   const anyErrors = errors as FieldErrors<Record<string, unknown>>;

@@ -2,6 +2,7 @@
 import type { CoreGeometry } from '@/lib/engine/flux';
 import type { EngineResult } from '@/lib/engine/result';
 import { buildStandardLayout, type SlotTable, type WindingSpec } from '@/lib/engine/winding-layout';
+import type { WindingSheet } from '@/lib/schemas/winding-sheet';
 
 export function value<T>(r: EngineResult<T>): T {
   if (!r.ok) throw new Error(`expected ok, got ${r.error.code} at ${r.error.field ?? '-'}: ${r.error.message}`);
@@ -52,3 +53,13 @@ export const BALANCED_COMBINATIONS: readonly { slots: number; poles: number }[] 
 
 /** Integral-q combinations (q = S/(3P) whole). */
 export const INTEGRAL_COMBINATIONS = BALANCED_COMBINATIONS.filter(({ slots, poles }) => slots % (3 * poles) === 0);
+
+/** Example A as a winding data sheet: MLT 560 mm, 2 × 0.85 mm wire, 5 A rated, readings 2.86/2.85/2.87 Ω at 20 °C. */
+export const EXAMPLE_A_SHEET: WindingSheet = {
+  core: { boreMm: 150, coreLengthMm: 120, outsideDiameterMm: 240, slots: 36, slotDepthMm: 20, slotWidthTopMm: 7, slotWidthBottomMm: 9, toothWidthMm: 6.5, stackingFactor: 0.95 },
+  winding: { layers: 2, style: 'lap', spans: [7], turnsPerCoil: [14], parallelPaths: 1, connection: 'star', meanTurnLengthMm: 560 },
+  wires: [{ standard: 'metric', size: '0.85', count: 2, enamelGrade: 2 }],
+  insulation: { thermalClass: 'F' },
+  supply: { lineVoltageV: 400, frequencyHz: 50, poles: 4, ratedCurrentA: 5 },
+  resistance: { readings: [2.86, 2.85, 2.87], temperatureC: 20, between: 'line-to-line' },
+};
