@@ -22,7 +22,7 @@ const file = (name: string, text: string): string => {
   return path;
 };
 
-describe('calc winding', () => {
+describe('calc winding', { timeout: 30_000 }, () => {
   it('prints k_d, k_p and k_w for orders 1 to 25 and the MMF spectrum (36/4, span 7)', () => {
     const r = calc('winding', '--slots', '36', '--poles', '4', '--span', '7');
     expect(r.code).toBe(0);
@@ -70,7 +70,7 @@ describe('calc winding', () => {
   });
 });
 
-describe('calc sheet', () => {
+describe('calc sheet', { timeout: 30_000 }, () => {
   const exported = JSON.stringify(makeWindingSheetExport(windingSheetSchema.parse(EXAMPLE_A_SHEET)));
 
   it('analyses an exported sheet and prints flux, resistance, current density and slot fill', () => {

@@ -32,7 +32,7 @@ describe('analyseSheet on example A as a data sheet', () => {
     expect(a.conductorAreaPerTurnMm2).toBeCloseTo(area, 12);
     expect(a.currentDensity?.ampsPerMm2).toBeCloseTo(5 / area, 9);
     expect(a.slotFill.conductorsPerSlot).toBe(28);
-    expect(a.slotFill.bareCopperOverGross).toBeCloseTo((28 * area) / 2 / ((20 * (7 + 9)) / 2), 9);
+    expect(a.slotFill.bareCopperOverGross).toBeCloseTo((28 * area) / ((20 * (7 + 9)) / 2), 9);
     expect(a.synchronousRpm).toBe(1500);
   });
 
