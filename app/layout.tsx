@@ -26,6 +26,8 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
               <ul>
                 <li><Link href="/jobs">Job board</Link></li>
                 {can(user.role, 'job.intake') && <li><Link href="/jobs/new">New intake</Link></li>}
+                <li><Link href="/library">Winding library</Link></li>
+                {can(user.role, 'stock.manage') && <li><Link href="/stock">Wire stock</Link></li>}
               </ul>
             </nav>
           )}

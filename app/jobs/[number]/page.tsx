@@ -53,6 +53,16 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
         <StatusMoves jobId={job.id} version={job.version} moves={moves} />
       </section>
 
+      <nav className="card no-print" aria-label="Workshop records">
+        <h2>Workshop records</h2>
+        <ul className="row" style={{ listStyle: 'none', padding: 0, gap: '1.5rem' }}>
+          <li><Link href={`/jobs/${job.number}/sheet`}>As-found data sheet</Link></li>
+          <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link></li>
+          <li><Link href={`/jobs/${job.number}/tests`}>Final tests</Link></li>
+          <li><Link href={`/jobs/${job.number}/job-sheet`}>Job sheet</Link></li>
+        </ul>
+      </nav>
+
       <div className="grid" style={{ gridTemplateColumns: 'repeat(auto-fit, minmax(340px, 1fr))' }}>
         <section className="card" aria-labelledby="cust-h">
           <h2 id="cust-h">Customer</h2>
