@@ -38,6 +38,7 @@ export function windingInputFromSheet(sheet: WindingSheet): AnalyseWindingInput 
   };
 }
 
+/** One wire size in hand with its looked-up diameters and area. */
 export interface WireRow {
   standard: 'awg' | 'metric';
   size: string;
@@ -47,6 +48,7 @@ export interface WireRow {
   areaMm2: number;
 }
 
+/** Predicted resistance, and the readings against it when the sheet has them. */
 export interface SheetResistance {
   /** Predicted phase resistance at 20 °C from MLT, turns, paths and wire: R_ph = ρ·(C·N_c·MLT)/(a²·A). */
   predictedPhaseOhm20: number;
@@ -60,6 +62,7 @@ export interface SheetResistance {
   } | null;
 }
 
+/** Everything analyseSheet finds. */
 export interface SheetAnalysis {
   winding: WindingAnalysis;
   synchronousRpm: number;

@@ -12,6 +12,7 @@ import { fail, ok, type EngineResult } from './result';
 import { harmonicWindingFactors, SlotStar, type HarmonicWindingFactor } from './slot-star';
 import { windingLayout, type SlotTable, type WindingSpec } from './winding-layout';
 
+/** One winding on one core and supply. */
 export interface AnalyseWindingInput {
   winding: WindingSpec;
   supply: { lineVoltageV: number; frequencyHz: number };
@@ -27,6 +28,7 @@ export interface AnalyseWindingInput {
   };
 }
 
+/** Closed form beside the slot-star sum at one odd order. */
 export interface ClosedFormCheck {
   order: number;
   /** Closed-form factors (signed); kd and kp are absent for concentric groups, whose formula is one sum. */
@@ -37,6 +39,7 @@ export interface ClosedFormCheck {
   difference: number;
 }
 
+/** Everything analyseWinding finds. */
 export interface WindingAnalysis {
   layout: SlotTable;
   q: SlotsPerPolePerPhase;

@@ -15,6 +15,7 @@ export interface Timing {
   minMs: number;
 }
 
+/** Warm-up and measuring times. */
 export interface TimeItOptions {
   /** Time spent warming up before measuring, ms (default 200). */
   warmupMs?: number;
@@ -26,6 +27,7 @@ export interface TimeItOptions {
 
 /** Keeps results alive so the optimiser cannot drop the call being timed. */
 let sink: unknown;
+/** The last result, for callers that want to check it. */
 export const benchSink = (): unknown => sink;
 
 /** Calls in one batch: enough for the batch to take about `targetMs`. */

@@ -71,6 +71,7 @@ export function concentricPitchFactor(spans: readonly number[], turns: readonly 
   return den === 0 ? 0 : num / den;
 }
 
+/** Signed closed-form factors at one order ν. */
 export interface ClosedFormFactors {
   nu: number;
   kd: number;

@@ -10,6 +10,7 @@ import type { SlotTable } from './winding-layout';
 /** The 4.44 of E = 4.44·f·N·k_w·Φ is √2·π = 4.4429 (rms of a sinusoid of peak 2πf·N·k_w·Φ). */
 export const EMF_CONSTANT = Math.SQRT2 * Math.PI;
 
+/** Stator core dimensions, metres. */
 export interface CoreGeometry {
   boreM: number;
   coreLengthM: number;
@@ -24,16 +25,19 @@ export interface CoreGeometry {
   ventDuctWidthM?: number;
 }
 
+/** A range of flux density, tesla. */
 export interface FluxRange {
   low: number;
   high: number;
 }
 
+/** Typical range and, where the sources give one, a conservative range. */
 export interface FluxLimit {
   typical: FluxRange;
   conservative?: FluxRange;
 }
 
+/** Limits for each density checked. */
 export interface FluxLimits {
   gapAverage: FluxLimit;
   gapPeak: FluxLimit;
@@ -56,6 +60,7 @@ export const DEFAULT_FLUX_LIMITS: FluxLimits = {
 /** 'high' above the typical range, 'above-conservative' inside it but above the conservative one. */
 export type FluxVerdict = 'low' | 'ok' | 'above-conservative' | 'high';
 
+/** One density in tesla and kilolines/in², labelled, judged against its limit. */
 export interface FluxDensity {
   kind: 'average' | 'peak' | 'max';
   tesla: number;
@@ -97,6 +102,7 @@ export const fluxPerPoleWb = (emfV: number, frequencyHz: number, seriesTurnsPerP
 export const netIronLengthM = (core: CoreGeometry): number =>
   (core.coreLengthM - (core.ventDucts ?? 0) * (core.ventDuctWidthM ?? 0)) * core.stackingFactor;
 
+/** Densities in tesla with the slot pitch and back-iron depth used. */
 export interface FluxDensities {
   gapAverageT: number;
   gapPeakT: number;
@@ -123,6 +129,7 @@ export function fluxDensities(core: CoreGeometry, poles: number, fluxWb: number)
   return { gapAverageT, gapPeakT, toothMaxT, yokeT, slotPitchM, yokeDepthM };
 }
 
+/** What the flux calculation needs; turns and winding factor come from the layout. */
 export interface FluxInput {
   core: CoreGeometry;
   poles: number;
@@ -136,6 +143,7 @@ export interface FluxInput {
   limits?: FluxLimits;
 }
 
+/** Flux per pole and the judged densities. */
 export interface FluxAnalysis {
   phaseVoltageV: number;
   emfV: number;

@@ -13,8 +13,10 @@
 import { magnitude, PHASES, SlotStar, ZERO_FACTOR, type Phasor } from './slot-star';
 import type { Phase, SlotTable } from './winding-layout';
 
+/** Direction of a space harmonic relative to the working wave ("both": pulsating, only in unbalanced layouts). */
 export type MmfDirection = 'forward' | 'backward' | 'both' | 'cancelled';
 
+/** One order of the three-phase MMF. */
 export interface MmfHarmonic {
   /** Electrical order ν = n/p. */
   order: number;
@@ -33,6 +35,7 @@ export interface MmfHarmonic {
   speedRpm: number;
 }
 
+/** The whole spectrum, with the working-wave amplitude and synchronous speed. */
 export interface MmfSpectrum {
   /** Working-wave amplitude in ampere-turns per ampere (peak) of coil current. */
   fundamentalAmpereTurnsPerAmp: number;
@@ -106,6 +109,7 @@ export function mmfSpectrum(table: SlotTable, supply: { frequencyHz: number }, m
   return { fundamentalAmpereTurnsPerAmp: f1 / (2 * Math.PI), currentSequence: sequence, synchronousRpm, harmonics };
 }
 
+/** A vertex of the MMF staircase. */
 export interface MmfPoint {
   /** Mechanical angle round the bore from the centre of slot 1, degrees. */
   angleDeg: number;

@@ -11,12 +11,14 @@ import { magnitude, PHASES, type Phasor } from './slot-star';
 import { LAYOUT_LIMITS, type CoilSide, type Phase, type SlotTable } from './winding-layout';
 import { slotsPerPolePerPhase } from './closed-form';
 
+/** One allowed path count and how closely its paths' phasors agree. */
 export interface PathCheck {
   paths: number;
   /** max |E_path − E_path1| / |E_path1| at the working order: 0 up to rounding for an allowed count. */
   mismatch: number;
 }
 
+/** What the layout allows, and on what basis. */
 export interface ParallelPathAnalysis {
   /** Every allowed number of parallel paths, ascending. */
   allowed: number[];

@@ -5,6 +5,7 @@
 import { angleDeg, magnitude, PHASES, type Phasor } from './slot-star';
 import type { Phase } from './winding-layout';
 
+/** How far from perfect balance a layout may be. */
 export interface BalanceTolerance {
   /** Largest allowed (max − min)/mean of the three magnitudes. */
   magnitude: number;
@@ -15,6 +16,7 @@ export interface BalanceTolerance {
 /** A correct layout balances to rounding error; these leave room for nothing more. */
 export const DEFAULT_BALANCE_TOLERANCE: BalanceTolerance = { magnitude: 0.001, angleDeg: 0.1 };
 
+/** Magnitudes, angles and the verdict. */
 export interface PhaseBalance {
   /** |Σ polarity·turns·e^{jθ}| of each phase: proportional to its EMF. */
   magnitudes: Record<Phase, number>;

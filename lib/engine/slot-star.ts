@@ -10,13 +10,16 @@
  */
 import type { Phase, SlotTable } from './winding-layout';
 
+/** Phases in order. */
 export const PHASES: readonly Phase[] = ['A', 'B', 'C'];
 
+/** A complex number (phasor), real and imaginary parts. */
 export interface Phasor {
   re: number;
   im: number;
 }
 
+/** |z|. */
 export const magnitude = (z: Phasor): number => Math.hypot(z.re, z.im);
 /** Angle in degrees, −180 < θ ≤ 180. */
 export const angleDeg = (z: Phasor): number => (Math.atan2(z.im, z.re) * 180) / Math.PI;
@@ -100,6 +103,7 @@ export class SlotStar {
   }
 }
 
+/** One phase at one order: its winding factor and EMF angle. */
 export interface PhaseFactor {
   /** k_wν of this phase alone. */
   kw: number;
@@ -107,6 +111,7 @@ export interface PhaseFactor {
   angleDeg: number;
 }
 
+/** Winding factors of the three phases at one order. */
 export interface HarmonicWindingFactor {
   /** Electrical order ν = n/p. */
   order: number;

@@ -7,6 +7,7 @@ import { fail, ok, type EngineResult } from './result';
 import { SlotStar } from './slot-star';
 import { windingLayout, type WindingSpec } from './winding-layout';
 
+/** What sets the flux of one winding on one supply. */
 export interface FluxBasis {
   lineVoltageV: number;
   frequencyHz: number;
@@ -16,6 +17,7 @@ export interface FluxBasis {
   poles: number;
 }
 
+/** How far the densities may move before the verdict changes. */
 export interface RatioTolerance {
   /** Largest allowed rise of any density, as a fraction (0.05 = +5 %). */
   over: number;
@@ -29,6 +31,7 @@ export interface RatioTolerance {
  */
 export const DEFAULT_RATIO_TOLERANCE: RatioTolerance = { over: 0.05, under: 0.1 };
 
+/** Old-to-new ratios and the verdict. */
 export interface FluxRatio {
   /** Φ_new/Φ_old. */
   fluxRatio: number;
@@ -64,11 +67,13 @@ export function fluxRatio(old: FluxBasis, next: FluxBasis, tolerance: RatioToler
   return { fluxRatio: ratio, gapToothRatio, yokeRatio: ratio, verdict, polesChanged, notes, tolerance };
 }
 
+/** One winding on one supply. */
 export interface ScalingCase {
   winding: WindingSpec;
   supply: { lineVoltageV: number; frequencyHz: number };
 }
 
+/** The ratios with both bases they came from. */
 export interface SupplyScaling extends FluxRatio {
   old: FluxBasis;
   next: FluxBasis;

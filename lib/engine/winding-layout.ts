@@ -7,7 +7,9 @@
 import { canBalance, gcd, slotsPerPolePerPhase } from './closed-form';
 import { fail, ok, type EngineResult } from './result';
 
+/** The three phases. */
 export type Phase = 'A' | 'B' | 'C';
+/** Direction of a coil side's current: +1 going, −1 returning. */
 export type Polarity = 1 | -1;
 /** Layer 1 is the top of the slot (next to the gap), layer 2 the bottom. Single-layer windings use 1. */
 export type Layer = 1 | 2;
@@ -25,6 +27,7 @@ export interface CoilSide {
   coil?: number;
 }
 
+/** A layout: every coil side with its slot, layer, phase, polarity and turns. */
 export interface SlotTable {
   slots: number;
   poles: number;
@@ -34,6 +37,7 @@ export interface SlotTable {
   sides: CoilSide[];
 }
 
+/** A winding as the data sheet describes it; `slotTable` overrides the standard layout. */
 export interface WindingSpec {
   slots: number;
   poles: number;

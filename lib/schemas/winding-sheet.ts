@@ -28,9 +28,12 @@ function measure(label: string, { unit, int, min = 0, above = true, max }: Measu
 
 const text = (label: string, max: number) => z.string({ error: `${label} must be text.` }).max(max, `${label}: at most ${max} characters.`);
 
+/** Insulation thermal classes (A 105, B 130, F 155, H 180 °C). */
 export const THERMAL_CLASSES = ['A', 'B', 'F', 'H'] as const;
+/** How the wire size is given. */
 export const WIRE_STANDARDS = ['awg', 'metric'] as const;
 
+/** Stator core as measured, mm. */
 export const coreSchema = z.object({
   boreMm: measure('Bore', { unit: 'mm', max: 5000 }),
   coreLengthMm: measure('Core length', { unit: 'mm', max: 5000 }),
@@ -48,6 +51,7 @@ export const coreSchema = z.object({
   airGapMm: measure('Air gap', { unit: 'mm', max: 50 }).optional(),
 });
 
+/** One coil side of a slot table drawn by the winder. */
 export const coilSideSchema = z.object({
   slot: measure('Slot number', { int: true, min: 1, above: false, max: 600 }),
   layer: z.union([z.literal(1), z.literal(2)], { error: 'Layer is 1 (top) or 2 (bottom).' }),
@@ -57,6 +61,7 @@ export const coilSideSchema = z.object({
   coil: measure('Coil number', { int: true, min: 1, above: false, max: 10_000 }).optional(),
 });
 
+/** The winding as found: layers, style, spans ("1–8" is 7), turns, paths, connection. */
 export const windingSchema = z.object({
   layers: z.union([z.literal(1), z.literal(2)], { error: 'Layers: 1 (single) or 2 (double).' }),
   style: z.enum(['lap', 'concentric'], { error: 'Style is lap or concentric.' }),
@@ -82,6 +87,7 @@ export const windingSchema = z.object({
   copperWeightKg: measure('Copper weight', { unit: 'kg', max: 20_000 }).optional(),
 });
 
+/** One wire size in hand; 1 to 4 rows per sheet. */
 export const wireSchema = z
   .object({
     standard: z.enum(WIRE_STANDARDS, { error: 'Wire standard is AWG or metric.' }),
@@ -97,6 +103,7 @@ export const wireSchema = z
       ctx.addIssue({ code: 'custom', path: ['size'], message: `${w.size} mm is not a nominal metric wire diameter (e.g. 0.85, 1.06).` });
   });
 
+/** Insulation system. */
 export const insulationSchema = z.object({
   thermalClass: z.enum(THERMAL_CLASSES, { error: 'Thermal class is A, B, F or H.' }),
   slotLiner: text('Slot liner', 200).optional(),
@@ -104,6 +111,7 @@ export const insulationSchema = z.object({
   varnish: text('Varnish', 200).optional(),
 });
 
+/** Supply and rating. */
 export const supplySchema = z.object({
   lineVoltageV: measure('Line voltage', { unit: 'V', max: 15_000 }),
   frequencyHz: measure('Frequency', { unit: 'Hz', max: 400 }),
@@ -112,6 +120,7 @@ export const supplySchema = z.object({
   ratedOutputKw: measure('Rated output', { unit: 'kW', max: 100_000 }).optional(),
 });
 
+/** Three resistance readings and the winding temperature they were taken at. */
 export const resistanceSchema = z.object({
   readings: z.tuple(
     [measure('Reading 1', { unit: 'Ω', max: 1e6 }), measure('Reading 2', { unit: 'Ω', max: 1e6 }), measure('Reading 3', { unit: 'Ω', max: 1e6 })],
@@ -154,6 +163,7 @@ function sheetRules(value: unknown, ctx: z.RefinementCtx): void {
     });
 }
 
+/** The whole as-found winding data sheet. */
 export const windingSheetSchema = z
   .object({
     core: coreSchema,
@@ -166,12 +176,17 @@ export const windingSheetSchema = z
   })
   .superRefine(sheetRules, { when: (payload) => typeof payload.value === 'object' && payload.value !== null });
 
+/** What a form holds (defaults may be missing). */
 export type WindingSheetInput = z.input<typeof windingSheetSchema>;
+/** A checked sheet. */
 export type WindingSheet = z.output<typeof windingSheetSchema>;
 
+/** Format tag of an export file. */
 export const WINDING_SHEET_FORMAT = 'coilwright.winding-sheet';
+/** Version of the export format this program writes and reads. */
 export const WINDING_SHEET_VERSION = 1;
 
+/** An export file: format tag, version, time of export and the sheet. */
 export const windingSheetExportSchema = z.object({
   format: z.literal(WINDING_SHEET_FORMAT, { error: `Not a winding data sheet (format must be "${WINDING_SHEET_FORMAT}").` }),
   version: z.literal(WINDING_SHEET_VERSION, { error: `Unsupported sheet version (this program reads version ${WINDING_SHEET_VERSION}).` }),
@@ -179,6 +194,7 @@ export const windingSheetExportSchema = z.object({
   sheet: windingSheetSchema,
 });
 
+/** A checked export file. */
 export type WindingSheetExport = z.output<typeof windingSheetExportSchema>;
 
 /** Wraps a sheet for download. */
@@ -189,12 +205,14 @@ export const makeWindingSheetExport = (sheet: WindingSheet, now: Date = new Date
   sheet,
 });
 
+/** One problem found in a sheet or file. */
 export interface SheetIssue {
   /** Dotted path, e.g. "sheet.core.boreMm" or "sheet.wires.0.size"; "" for the file as a whole. */
   path: string;
   message: string;
 }
 
+/** A checked export, or every problem found. */
 export type SheetParseResult = { ok: true; value: WindingSheetExport } | { ok: false; issues: SheetIssue[] };
 
 /** Parses an export (already JSON-decoded), reporting every problem with its path. */

@@ -5,6 +5,7 @@
 import { parseArgs } from 'node:util';
 import type { AnalyseWindingInput } from '../analyse-winding';
 
+/** Usage text for --help. */
 export const CALC_USAGE = `Usage:
   npm run calc -- winding --slots 36 --poles 4 --span 7 [--layers 1|2] [--json]
       [--style lap|concentric] [--spans 11,9,7] [--turns 14 | 10,10,10] [--coiling whole|half]
@@ -12,11 +13,13 @@ export const CALC_USAGE = `Usage:
   npm run calc -- sheet FILE.json [--orders 25] [--json]
 Spans are slot pitches: a coil in slots 1 and 8 has span 7.`;
 
+/** A parsed command line. */
 export type CalcCommand =
   | { kind: 'winding'; input: AnalyseWindingInput; orders: number; json: boolean }
   | { kind: 'sheet'; file: string; orders: number; json: boolean }
   | { kind: 'help' };
 
+/** A command, or one line saying what is wrong. */
 export type ArgsResult = { ok: true; value: CalcCommand } | { ok: false; message: string };
 
 const OPTIONS = {

@@ -36,6 +36,22 @@ describe('analyseSheet on example A as a data sheet', () => {
     expect(a.synchronousRpm).toBe(1500);
   });
 
+  // Reference §3: CM/A = 1973.5 / J [derived]; textbook J 3–5 A/mm² (Sawhney) or 3–8 A/mm² for totally
+  // enclosed machines (Pyrhönen) [from memory].
+  it('gives current density in A/mm² and CM/A = 1973.5/J, beside the textbook ranges', () => {
+    const j = a.currentDensity;
+    expect((j?.circularMilsPerAmp ?? NaN) * (j?.ampsPerMm2 ?? NaN)).toBeCloseTo(1973.5, 1);
+    expect(j?.typical.map((t) => [t.minAPerMm2, t.maxAPerMm2])).toEqual([[3, 5], [3, 8]]);
+    expect(j?.typical.map((t) => t.source).join(' ')).toMatch(/Sawhney.*Pyrhönen/);
+  });
+
+  // Reference §3: hand insertion of round wire typically ≤ 0.65–0.75 insulated fill of net area
+  // [common practice, from memory]; say which definition.
+  it('names its slot-fill definitions and shows the hand-insertion limit', () => {
+    expect(a.slotFill.handInsertionLimit).toEqual({ low: 0.65, high: 0.75 });
+    expect(a.slotFill.insulatedOverGross).toBeGreaterThan(a.slotFill.bareCopperOverGross);
+  });
+
   it('warns about a resistance unbalance over the limit', () => {
     const r = value(analyseSheet({ ...EXAMPLE_A_SHEET, resistance: { readings: [2.7, 2.86, 2.9], temperatureC: 20, between: 'line-to-line' } }));
     expect(r.warnings.join(' ')).toMatch(/unbalance/);

@@ -9,6 +9,7 @@ const input = (over: Partial<AnalyseWindingInput> = {}): AnalyseWindingInput => 
 describe('analyseWinding on worked example A (reference §1 and §2, [derived])', () => {
   const a = value(analyseWinding(input()));
 
+  // Reference §1 notation: α = 180°·P/S electrical; q = S/(3P); τ = S/P.
   it('reports q, pole pitch and slot angle: q = 3, τ = 9, α = 20°', () => {
     expect(a.q).toMatchObject({ z: 3, d: 1 });
     expect(a.polePitchSlots).toBe(9);

@@ -75,6 +75,18 @@ describe('units and constants', () => {
 });
 
 describe('flux limits and verdicts', () => {
+  // [from memory: Pyrhönen et al., Design of Rotating Electrical Machines, Table 6.3; Sawhney, A Course in
+  // Electrical Machine Design]: gap peak 0.7–0.9 T (average 0.3–0.6 T); stator teeth 1.4–2.1 T (≤ 1.7 T
+  // conservative); stator yoke 1.4–1.7 T (1.2–1.5 T conservative).
+  it('defaults to the typical ranges of the reference', () => {
+    expect(DEFAULT_FLUX_LIMITS.gapPeak.typical).toEqual({ low: 0.7, high: 0.9 });
+    expect(DEFAULT_FLUX_LIMITS.gapAverage.typical).toEqual({ low: 0.3, high: 0.6 });
+    expect(DEFAULT_FLUX_LIMITS.tooth.typical).toEqual({ low: 1.4, high: 2.1 });
+    expect(DEFAULT_FLUX_LIMITS.tooth.conservative?.high).toBe(1.7);
+    expect(DEFAULT_FLUX_LIMITS.yoke.typical).toEqual({ low: 1.4, high: 1.7 });
+    expect(DEFAULT_FLUX_LIMITS.yoke.conservative).toEqual({ low: 1.2, high: 1.5 });
+  });
+
   it.each([
     { t: 1.0, limit: 'yoke' as const, verdict: 'low' },
     { t: 1.3, limit: 'yoke' as const, verdict: 'ok' },
