@@ -6,6 +6,7 @@ import type { PrismaClient } from '../generated/client';
 import type { JobStatus, Priority, Role } from '../generated/enums';
 import { hashPassword } from '@/lib/auth/password';
 import { FIRST_JOB_NUMBER } from '@/lib/jobs/job-writes';
+import { demoSheet } from './demo-sheets';
 import { DEMO_CUSTOMERS, DEMO_FAULTS, DEMO_MANUFACTURERS, DEMO_RATINGS, DEMO_USERS } from './demo-data';
 
 /** A small seeded generator (mulberry32) so demo data is the same on every machine. */
@@ -25,6 +26,8 @@ const STATUS_SPREAD: JobStatus[] = [
   'TESTING', 'TESTING', 'TESTING', 'READY', 'READY', 'READY', 'SHIPPED', 'SHIPPED', 'SHIPPED', 'SHIPPED', 'ON_HOLD', 'ON_HOLD',
   'RETURNED_UNREPAIRED', 'INSPECTION', 'WINDING', 'RECEIVED', 'TESTING', 'QUOTE_SENT', 'READY', 'CUSTOMER_APPROVED', 'WINDING',
 ];
+/** Jobs past inspection have had their winding recorded. */
+const SHEET_STATUSES: JobStatus[] = ['QUOTE_SENT', 'CUSTOMER_APPROVED', 'WINDING', 'TESTING', 'READY', 'SHIPPED'];
 const PRIORITIES: Priority[] = ['NORMAL', 'NORMAL', 'NORMAL', 'HIGH', 'LOW', 'URGENT'];
 
 export async function isEmpty(prisma: PrismaClient): Promise<boolean> {
@@ -86,7 +89,7 @@ export async function seedDemoShop(prisma: PrismaClient, now = new Date()): Prom
     const receivedAt = new Date(now.getTime() - (40 - i) * day * 0.9);
     const promisedAt = new Date(receivedAt.getTime() + (7 + Math.floor(rand() * 21)) * day);
     const number = FIRST_JOB_NUMBER + i;
-    await prisma.job.create({
+    const job = await prisma.job.create({
       data: {
         number,
         customerId: customer.id,
@@ -109,6 +112,16 @@ export async function seedDemoShop(prisma: PrismaClient, now = new Date()): Prom
         },
       },
     });
+    if (SHEET_STATUSES.includes(status)) {
+      const sheet = demoSheet({ kw, volts, hz, poles, connection, amps });
+      await prisma.windingSheet.create({
+        data: {
+          jobId: job.id, data: sheet as object, slots: sheet.core.slots, poles: sheet.supply.poles, boreMm: sheet.core.boreMm,
+          coreLengthMm: sheet.core.coreLengthMm, lineVoltageV: volts, frequencyHz: hz, outputKw: kw, manufacturer, model: motor.model,
+          updatedById: pick(staff).id,
+        },
+      });
+    }
   }
   await prisma.jobCounter.upsert({
     where: { id: 'job' },
