@@ -5,7 +5,7 @@
  * from the sheet become metres here, once.
  */
 import type { WindingSheet } from '@/lib/schemas/winding-sheet';
-import { analyseWinding, type AnalyseWindingInput, type WindingAnalysis } from './analyse-winding';
+import { analyseWinding, isAllFinite, type AnalyseWindingInput, type WindingAnalysis } from './analyse-winding';
 import { currentDensityChecked, TYPICAL_CURRENT_DENSITY, type CurrentDensity, type CurrentDensityRange } from './current-density';
 import type { FluxLimits } from './flux';
 import {
@@ -155,7 +155,7 @@ export function analyseSheet(sheet: WindingSheet, options?: { limits?: FluxLimit
   if (fill.insulatedOverNet > HAND_INSERTION_FILL_LIMIT.high)
     warnings.push(`Insulated wire fills ${(fill.insulatedOverNet * 100).toFixed(0)} % of the gross slot area: above hand-insertion practice even before liner and wedge.`);
 
-  return ok({
+  const analysis: SheetAnalysis = {
     winding: w,
     synchronousRpm: synchronousSpeedRpm(sheet.supply.frequencyHz, sheet.supply.poles),
     wires: wires.value,
@@ -168,5 +168,8 @@ export function analyseSheet(sheet: WindingSheet, options?: { limits?: FluxLimit
       insulatedOverGross: fill.insulatedOverNet, handInsertionLimit: { ...HAND_INSERTION_FILL_LIMIT },
     },
     warnings,
-  });
+  };
+  return isAllFinite(analysis)
+    ? ok(analysis)
+    : fail('non-finite-result', 'Part of the sheet analysis did not come out as a finite number.', 'Check the slot, wire and resistance data for zero or missing values.');
 }

@@ -147,20 +147,20 @@ export function analyseWinding(input: AnalyseWindingInput): EngineResult<Winding
     flux,
     warnings,
   };
-  return allFinite(analysis)
+  return isAllFinite(analysis)
     ? ok(analysis)
     : fail('non-finite-result', 'Part of the winding analysis did not come out as a finite number.', 'Check the inputs for zero or missing values.');
 }
 
-/** The engine's promise: no NaN or Infinity anywhere in a result. */
-function allFinite(value: unknown): boolean {
+/** The engine's promise, checked on whole results: no NaN or Infinity anywhere in `value`. */
+export function isAllFinite(value: unknown): boolean {
   if (typeof value === 'number') return Number.isFinite(value);
   if (value === null || typeof value !== 'object') return true;
   if (Array.isArray(value)) {
-    for (const v of value) if (!allFinite(v)) return false;
+    for (const v of value) if (!isAllFinite(v)) return false;
     return true;
   }
   const record = value as Record<string, unknown>;
-  for (const k in record) if (!allFinite(record[k])) return false;
+  for (const k in record) if (!isAllFinite(record[k])) return false;
   return true;
 }
