@@ -85,11 +85,11 @@ function basisOf(c: ScalingCase, which: 'old' | 'new'): EngineResult<FluxBasis> 
     return fail('invalid-input', `The ${which} line voltage must be more than zero.`, 'Enter the supply voltage.', `${which}.supply.lineVoltageV`);
   if (!(Number.isFinite(frequencyHz) && frequencyHz > 0))
     return fail('invalid-input', `The ${which} frequency must be more than zero.`, 'Enter 50 or 60 Hz.', `${which}.supply.frequencyHz`);
-  const a = c.winding.parallelPaths;
-  if (!(Number.isInteger(a) && a >= 1 && a <= c.winding.poles * 2))
-    return fail('invalid-input', `The ${which} parallel path count must be a whole number from 1 up.`, 'Count the circuits per phase.', `${which}.winding.parallelPaths`);
   const layout = windingLayout(c.winding);
   if (!layout.ok) return fail(layout.error.code, layout.error.message, layout.error.hint, `${which}.${layout.error.field ?? 'winding'}`);
+  const a = c.winding.parallelPaths;
+  if (!(Number.isInteger(a) && a >= 1 && a <= layout.value.sides.length / 6))
+    return fail('invalid-input', `The ${which} parallel path count must be a whole number from 1 to the coils per phase.`, 'Count the circuits per phase.', `${which}.winding.parallelPaths`);
   const star = new SlotStar(layout.value);
   const p = layout.value.poles / 2;
   const windingFactor = (star.factor('A', p) + star.factor('B', p) + star.factor('C', p)) / 3;
