@@ -31,7 +31,7 @@ export interface AnalyseWindingInput {
 /** Closed form beside the slot-star sum at one odd order. */
 export interface ClosedFormCheck {
   order: number;
-  /** Closed-form factors (signed); kd and kp are absent for concentric groups, whose formula is one sum. */
+  /** Closed-form factors (signed); kd and kp are absent for double-layer concentric groups, whose formula is one sum. */
   kd?: number;
   kp?: number;
   kw: number;
@@ -48,7 +48,10 @@ export interface WindingAnalysis {
   slotAngleDeg: number;
   windingFactor: number;
   factors: HarmonicWindingFactor[];
-  /** Closed forms at odd whole orders, for standard layouts only (empty for a slot table from the winder). */
+  /**
+   * Closed forms at odd whole orders, for standard layouts only: empty for a slot table from the winder and for
+   * double-layer concentric groups whose coils do not share a centre line.
+   */
   closedForm: { checks: ClosedFormCheck[]; maxDifference: number };
   balance: PhaseBalance;
   parallelPaths: ParallelPathAnalysis & { requested: number; requestedAllowed: boolean };
@@ -64,12 +67,17 @@ function closedFormChecks(spec: WindingSpec, layout: SlotTable, factors: Harmoni
   const { slots, poles } = spec;
   const tau = slots / poles;
   const { z } = slotsPerPolePerPhase(slots, poles);
+  // The concentric group formula needs coils on one centre line: spans stepping by exactly 2.
+  const sorted = [...spec.spans].sort((x, y) => y - x);
+  const nested = sorted.every((y, i) => i === 0 || (sorted[i - 1] ?? 0) - y === 2);
+  if (spec.layers === 2 && spec.style === 'concentric' && !nested) return [];
   const checks: ClosedFormCheck[] = [];
   for (const f of factors) {
     if (!Number.isInteger(f.order) || f.order % 2 === 0) continue;
     let c: { kd?: number; kp?: number; kw: number } | null;
-    if (spec.style === 'concentric') c = { kw: concentricPitchFactor(spec.spans, spec.turnsPerCoil, tau, f.order) };
-    else if (spec.layers === 1) c = { kd: distributionFactor(z, f.order), kp: 1, kw: distributionFactor(z, f.order) };
+    // Single layer: k_w = k_d whatever the end-turn shape [derived, reference §1].
+    if (spec.layers === 1) c = { kd: distributionFactor(z, f.order), kp: 1, kw: distributionFactor(z, f.order) };
+    else if (spec.style === 'concentric') c = { kw: concentricPitchFactor(spec.spans, spec.turnsPerCoil, tau, f.order) };
     else c = closedFormFactors(slots, poles, spec.spans[0] ?? 0, f.order);
     if (c) checks.push({ order: f.order, ...c, slotStarKw: f.kw, difference: Math.abs(Math.abs(c.kw) - f.kw) });
   }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseWinding, type AnalyseWindingInput } from '@/lib/engine/analyse-winding';
-import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, value } from './winding-fixtures';
+import type { WindingSpec } from '@/lib/engine/winding-layout';
+import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, singleLayer, value } from './winding-fixtures';
 
 const input = (over: Partial<AnalyseWindingInput> = {}): AnalyseWindingInput => ({
   winding: EXAMPLE_A_SPEC, supply: EXAMPLE_A_SUPPLY, core: EXAMPLE_A_CORE, ...over,
@@ -72,5 +73,17 @@ describe('analyseWinding findings and errors', () => {
     { name: 'zero voltage', over: { supply: { lineVoltageV: 0, frequencyHz: 50 } }, field: 'supply.lineVoltageV' },
   ])('returns an error for $name at $field', ({ over, field }) => {
     expect(errorOf(analyseWinding(input(over as Partial<AnalyseWindingInput>))).field).toBe(field);
+  });
+});
+
+describe('closed-form cross-check by winding style (reference §1)', () => {
+  it.each([
+    ['double-layer concentric 9, 7, 5 (coils on one centre line) [derived]', lap(36, 4, 7, { style: 'concentric', spans: [9, 7, 5], turnsPerCoil: [10, 10, 10] }), 25],
+    ['double-layer concentric 9, 9, 6 (no common centre): no closed form', lap(36, 4, 7, { style: 'concentric', spans: [9, 9, 6], turnsPerCoil: [10, 10, 10] }), 0],
+    ['single-layer concentric, k_w = k_d [derived]', singleLayer(36, 4, [11, 9, 7]), 25],
+  ] as [string, WindingSpec, number][])('%s', (_name, winding, count) => {
+    const a = value(analyseWinding({ winding, supply: EXAMPLE_A_SUPPLY }));
+    expect(a.closedForm.checks).toHaveLength(count);
+    expect(a.closedForm.maxDifference).toBeLessThan(1e-12);
   });
 });
