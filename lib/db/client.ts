@@ -5,6 +5,7 @@
  */
 import { mkdirSync } from 'node:fs';
 import { PGlite } from '@electric-sql/pglite';
+import { pg_trgm } from '@electric-sql/pglite/contrib/pg_trgm';
 import { PrismaPg } from '@prisma/adapter-pg';
 import { PrismaPGlite } from 'pglite-prisma-adapter';
 import { PrismaClient } from './generated/client';
@@ -29,7 +30,8 @@ function open(config: DbConfig): DbHandle {
   }
   const inMemory = config.dataDir === 'memory://';
   if (!inMemory) mkdirSync(config.dataDir, { recursive: true });
-  const pglite = inMemory ? new PGlite() : new PGlite(config.dataDir);
+  // Extensions the migrations create must be loaded into the embedded engine up front.
+  const pglite = new PGlite({ ...(inMemory ? {} : { dataDir: config.dataDir }), extensions: { pg_trgm } });
   const prisma = new PrismaClient({ adapter: new PrismaPGlite(pglite) });
   return {
     config,

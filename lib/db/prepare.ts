@@ -11,6 +11,9 @@ export function prepareDatabase(): Promise<void> {
   return prepareOnce(async () => {
     const applied = await withSqlRunner((sql) => applyMigrations(sql));
     if (applied.length) console.log(`[coilwright] applied migrations: ${applied.join(', ')}`);
+    // The embedded engine runs no autovacuum: refresh planner statistics once per start so the board's
+    // queries keep good plans as the shop's data grows.
+    if (dbEngine() === 'pglite') await withSqlRunner((sql) => sql.exec('ANALYZE'));
     const wantDemo = dbEngine() === 'pglite' ? process.env.COILWRIGHT_SEED_DEMO !== '0' : process.env.COILWRIGHT_SEED_DEMO === '1';
     if (wantDemo && (await isEmpty(db()))) {
       await seedDemoShop(db());

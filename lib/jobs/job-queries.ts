@@ -22,15 +22,9 @@ export function boardWhere(q: BoardQuery, now = new Date()): Prisma.JobWhereInpu
   if (q.due === 'today') and.push({ promisedAt: { gte: today, lt: new Date(today.getTime() + 86_400_000) } });
   if (q.due === 'week') and.push({ promisedAt: { gte: today, lt: new Date(today.getTime() + 7 * 86_400_000) } });
   if (q.q) {
-    const text = q.q;
-    const contains = { contains: text, mode: 'insensitive' as const };
-    const or: Prisma.JobWhereInput[] = [
-      { customer: { company: contains } },
-      { motor: { serial: contains } },
-      { motor: { model: contains } },
-      { motor: { manufacturer: contains } },
-      { customerPo: contains },
-    ];
+    // One trigram-indexed column holds number, customer, motor and PO (kept by database triggers).
+    const text = q.q.toLowerCase();
+    const or: Prisma.JobWhereInput[] = [{ searchText: { contains: text } }];
     const digits = text.replace(/^#/, '');
     if (/^\d{1,9}$/.test(digits)) or.unshift({ number: Number(digits) });
     and.push({ OR: or });

@@ -3,6 +3,7 @@ import { mkdtempSync, mkdirSync, readFileSync, writeFileSync, cpSync } from 'nod
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
+import { pg_trgm } from '@electric-sql/pglite/contrib/pg_trgm';
 import { describe, expect, it } from 'vitest';
 import { applyMigrations, listMigrations, migrationsDir, MigrationError } from '@/lib/db/migrate';
 import { pgliteRunner } from '@/lib/db/sql-runner';
@@ -14,7 +15,7 @@ describe('migrations', () => {
   });
 
   it('are recorded in Prisma’s own table with the sha256 of each file, and a second run applies nothing', async () => {
-    const pglite = new PGlite();
+    const pglite = new PGlite({ extensions: { pg_trgm } });
     const sql = pgliteRunner(pglite);
     const first = await applyMigrations(sql);
     expect(first).toEqual(listMigrations().map((m) => m.name));
@@ -36,7 +37,7 @@ describe('migrations', () => {
     cpSync(migrationsDir(), dir, { recursive: true });
     mkdirSync(join(dir, '99990101000000_broken'));
     writeFileSync(join(dir, '99990101000000_broken', 'migration.sql'), 'ALTER TABLE "NoSuchTable" ADD COLUMN x int;');
-    const pglite = new PGlite();
+    const pglite = new PGlite({ extensions: { pg_trgm } });
     const sql = pgliteRunner(pglite);
     await expect(applyMigrations(sql, dir)).rejects.toBeInstanceOf(MigrationError);
     const [row] = await sql.query<{ finished_at: Date | null; logs: string | null }>(

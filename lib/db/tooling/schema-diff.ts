@@ -8,6 +8,7 @@ import { createRequire } from 'node:module';
 import { dirname, join, resolve } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { PGlite } from '@electric-sql/pglite';
+import { pg_trgm } from '@electric-sql/pglite/contrib/pg_trgm';
 import { PrismaPGlite } from 'pglite-prisma-adapter';
 import { bindMigrationAwareSqlAdapterFactory } from '@prisma/driver-adapter-utils';
 import type { DiffTarget, SchemaEngine } from '@prisma/schema-engine-wasm';
@@ -44,6 +45,13 @@ export function migrationsTarget(dir = MIGRATIONS_DIR): DiffTarget {
   };
 }
 
+/** The adapter's shadow database is a bare PGlite; ours loads the extensions the migrations create. */
+class PGliteWithExtensions extends PrismaPGlite {
+  override connectToShadowDb() {
+    return new PrismaPGlite(new PGlite({ extensions: { pg_trgm } })).connect();
+  }
+}
+
 async function loadEngine(pglite: PGlite): Promise<SchemaEngine> {
   const pkgDir = dirname(require.resolve('@prisma/schema-engine-wasm'));
   const bg = (await import(pathToFileURL(join(pkgDir, 'schema_engine_bg.js')).href)) as typeof import('@prisma/schema-engine-wasm/schema_engine_bg') & {
@@ -55,12 +63,12 @@ async function loadEngine(pglite: PGlite): Promise<SchemaEngine> {
   const start = instance.exports.__wbindgen_start;
   if (typeof start === 'function') start();
   const datamodels = schemaFiles().map((f): [string, string] => [f.path, f.content]);
-  return bg.SchemaEngine.new({ datamodels }, () => {}, bindMigrationAwareSqlAdapterFactory(new PrismaPGlite(pglite)));
+  return bg.SchemaEngine.new({ datamodels }, () => {}, bindMigrationAwareSqlAdapterFactory(new PGliteWithExtensions(pglite)));
 }
 
 /** SQL that takes the database from `from` to the current schema files (empty string when none). */
 export async function diffToSchema(from: DiffTarget): Promise<string> {
-  const pglite = new PGlite();
+  const pglite = new PGlite({ extensions: { pg_trgm } });
   try {
     const engine = await loadEngine(pglite);
     const result = await engine.diff({
