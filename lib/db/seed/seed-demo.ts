@@ -87,7 +87,7 @@ export async function seedDemoShop(prisma: PrismaClient, now = new Date()): Prom
       },
     });
     const receivedAt = new Date(now.getTime() - (40 - i) * day * 0.9);
-    const promisedAt = new Date(receivedAt.getTime() + (7 + Math.floor(rand() * 21)) * day);
+    const promisedAt = new Date(receivedAt.getTime() + (14 + Math.floor(rand() * 30)) * day);
     const number = FIRST_JOB_NUMBER + i;
     const job = await prisma.job.create({
       data: {
