@@ -28,6 +28,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
                 {can(user.role, 'job.intake') && <li><Link href="/jobs/new">New intake</Link></li>}
                 <li><Link href="/library">Winding library</Link></li>
                 {can(user.role, 'stock.manage') && <li><Link href="/stock">Wire stock</Link></li>}
+                {can(user.role, 'settings.manage') && <li><Link href="/admin/users">People</Link></li>}
               </ul>
             </nav>
           )}

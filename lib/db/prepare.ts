@@ -6,6 +6,7 @@
 import { db, dbEngine, prepareOnce, withSqlRunner } from './client';
 import { applyMigrations } from './migrate';
 import { isEmpty, seedDemoShop } from './seed/seed-demo';
+import { bootstrapAdmin } from '@/lib/users/user-writes';
 
 export function prepareDatabase(): Promise<void> {
   return prepareOnce(async () => {
@@ -18,6 +19,8 @@ export function prepareDatabase(): Promise<void> {
     if (wantDemo && (await isEmpty(db()))) {
       await seedDemoShop(db());
       console.log('[coilwright] seeded the demo shop (see README for the demo sign-ins)');
+    } else if (await bootstrapAdmin()) {
+      console.log('[coilwright] created the first administrator from COILWRIGHT_ADMIN_EMAIL');
     }
   });
 }

@@ -1,0 +1,31 @@
+import { requirePageUser } from '@/lib/auth/guard';
+import { db } from '@/lib/db/client';
+import { AddUserForm } from './add-user-form';
+import { UserRow } from './user-row';
+
+export const metadata = { title: 'People' };
+
+export default async function UsersPage() {
+  const me = await requirePageUser('settings.manage');
+  const users = await db().user.findMany({ orderBy: [{ active: 'desc' }, { name: 'asc' }], select: { id: true, name: true, email: true, role: true, active: true } });
+  return (
+    <>
+      <h1>People who sign in</h1>
+      <section className="card" aria-labelledby="people-h">
+        <h2 id="people-h">Everyone</h2>
+        <table>
+          <thead>
+            <tr><th scope="col">Name</th><th scope="col">Email</th><th scope="col">Role</th><th scope="col">Active</th><th scope="col">New password</th><th scope="col"><span className="sr-only">Save</span></th></tr>
+          </thead>
+          <tbody>
+            {users.map((u) => <UserRow key={u.id} user={u} self={u.id === me.id} />)}
+          </tbody>
+        </table>
+      </section>
+      <section className="card" aria-labelledby="add-h">
+        <h2 id="add-h">Add a person</h2>
+        <AddUserForm />
+      </section>
+    </>
+  );
+}
