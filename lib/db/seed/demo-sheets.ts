@@ -18,12 +18,15 @@ interface DemoRating {
   amps: number;
 }
 
-const LAYOUT: Record<number, { slots: number; span: number; odRatio: number; depthRatio: number }> = {
-  2: { slots: 24, span: 10, odRatio: 1.8, depthRatio: 0.11 },
-  4: { slots: 36, span: 7, odRatio: 1.55, depthRatio: 0.12 },
-  6: { slots: 36, span: 5, odRatio: 1.45, depthRatio: 0.12 },
-  8: { slots: 48, span: 5, odRatio: 1.4, depthRatio: 0.11 },
+/** Slots, span and back-iron depth as a fraction of the bore (which keeps the yoke near 1.1–1.4 T). */
+const LAYOUT: Record<number, { slots: number; span: number; yokeRatio: number }> = {
+  2: { slots: 24, span: 10, yokeRatio: 0.29 },
+  4: { slots: 36, span: 7, yokeRatio: 0.155 },
+  6: { slots: 36, span: 5, yokeRatio: 0.105 },
+  8: { slots: 48, span: 5, yokeRatio: 0.09 },
 };
+/** Insulated copper over gross slot area the demo slots are sized for (hand insertion). */
+const DEMO_FILL = 0.5;
 
 const round = (v: number, step: number) => Math.round(v / step) * step;
 
@@ -31,9 +34,9 @@ export function demoSheet(r: DemoRating): WindingSheet {
   const lay = LAYOUT[r.poles] ?? LAYOUT[4]!;
   const bore = round(80 * (r.kw / 0.75) ** 0.3, 1);
   const length = round(bore * 0.8, 1);
-  const od = round(bore * lay.odRatio, 1);
-  const depth = round(bore * lay.depthRatio, 0.5);
   const slotPitch = (Math.PI * bore) / lay.slots;
+  const widthTop = round(slotPitch * 0.5, 0.1);
+  const widthBottom = round(slotPitch * 0.7, 0.1);
   const connection = r.connection === 'star' ? 'star' : 'delta';
   const vph = connection === 'star' ? r.volts / Math.sqrt(3) : r.volts;
   const kw1 = closedFormFactors(lay.slots, r.poles, lay.span, 1)?.kw ?? 0.9;
@@ -52,6 +55,10 @@ export function demoSheet(r: DemoRating): WindingSheet {
       break;
     }
   }
+  // The slot is made deep enough for the copper at the demo fill; the core outside diameter follows.
+  const insulatedArea = 2 * turns * strands * (Math.PI / 4) * (size.bareMm * 1.07) ** 2;
+  const depth = round(insulatedArea / DEMO_FILL / ((widthTop + widthBottom) / 2), 0.5);
+  const od = round(bore + 2 * (depth + bore * lay.yokeRatio), 1);
   const mlt = round(2 * length + 2.6 * ((Math.PI * (bore + depth) * lay.span) / lay.slots) + 40, 5);
   const rph = phaseResistanceOhm({
     coilsPerPhase: lay.slots / 3,
@@ -66,7 +73,7 @@ export function demoSheet(r: DemoRating): WindingSheet {
   return {
     core: {
       boreMm: bore, coreLengthMm: length, outsideDiameterMm: od, slots: lay.slots, slotDepthMm: depth,
-      slotWidthTopMm: round(slotPitch * 0.45, 0.1), slotWidthBottomMm: round(slotPitch * 0.6, 0.1),
+      slotWidthTopMm: widthTop, slotWidthBottomMm: widthBottom,
       toothWidthMm: round(slotPitch * 0.5, 0.1), stackingFactor: 0.95,
     },
     winding: { layers: 2, style: 'lap', spans: [lay.span], turnsPerCoil: [turns], parallelPaths: 1, connection, meanTurnLengthMm: mlt, leads: 6 },
