@@ -142,8 +142,10 @@ export function redesignReport(original: RedesignOriginal, request: RedesignRequ
   row({ key: 'conductorsPerSlot', group: 'copper', label: 'Conductors per slot', original: String(b.conductorsPerSlot), candidate: String(candidate.conductorsPerSlot), ...nums(b.conductorsPerSlot, candidate.conductorsPerSlot) });
   row({
     key: 'slotFill', group: 'copper', label: 'Slot fill (insulated wire / gross slot area)', original: pct(b.slotFill), candidate: pct(candidate.slotFill), ...nums(b.slotFill, candidate.slotFill),
-    status: candidate.slotFill > limits.slotFillMax + 1e-12 ? 'out' : 'ok', originalStatus: b.slotFill > limits.slotFillMax ? 'out' : 'ok',
-    note: `limit ${pct(limits.slotFillMax)}`,
+    status: candidate.slotFill > Math.max(limits.slotFillMax, b.slotFill) + 1e-12 ? 'out' : 'ok', originalStatus: b.slotFill > limits.slotFillMax ? 'out' : 'ok',
+    note: b.slotFill > limits.slotFillMax
+      ? `shop limit ${pct(limits.slotFillMax)}; the original already fills ${pct(b.slotFill)}, so the new winding may fill as much, never more — check the slot dimensions on the sheet`
+      : `limit ${pct(limits.slotFillMax)}`,
   });
   const mlt = meanTurnLengths(original, candidate);
   if (mlt) {

@@ -105,6 +105,10 @@ export function searchRedesign(original: RedesignOriginal, request: RedesignRequ
   const perSlot = new Map<number, number>();
   for (const s of old.value.layout.sides) perSlot.set(s.slot, (perSlot.get(s.slot) ?? 0) + s.turns);
   const oldZs = Math.max(0, ...perSlot.values());
+  const oldFill = (oldZs * oldInsulated) / original.grossSlotAreaMm2;
+  // The as-found winding proves what the slot holds: when it already fills more than the shop limit, the
+  // new winding may fill as much as it did, never more.
+  const fillLimit = Math.max(limits.slotFillMax, oldFill);
   const oldJ = original.ratedCurrentA
     ? currentDensity({ lineCurrentA: original.ratedCurrentA, connection: ow.connection, parallelPaths: ow.parallelPaths, conductorAreaPerTurnMm2: oldArea }).ampsPerMm2
     : null;
@@ -147,18 +151,19 @@ export function searchRedesign(original: RedesignOriginal, request: RedesignRequ
         const pathRatio = expected.lineCurrentRatio * (phasePerLine(connection) / phasePerLine(ow.connection)) * (ow.parallelPaths / a);
         const idealArea = oldArea * pathRatio;
         let minArea = idealArea / (1 + limits.currentDensityRise);
-        if (oldJ !== null) minArea = Math.max(minArea, (oldJ * idealArea) / oldArea / limits.currentDensityMaxAPerMm2);
+        // I_path,new = J_old·A_old·(path ratio) = J_old·idealArea; it may not exceed the absolute limit.
+        if (oldJ !== null) minArea = Math.max(minArea, (oldJ * idealArea) / limits.currentDensityMaxAPerMm2);
         const wireFailures: string[] = [];
         let found = 0;
         for (const turns of turnsToTry(r1, poleRatio, range, TURNS_PER_FAMILY)) {
           const zs = layout.sidesPerSlot * turns;
-          const cap = (limits.slotFillMax * original.grossSlotAreaMm2) / zs;
+          const cap = (fillLimit * original.grossSlotAreaMm2) / zs;
           const pick = pickWires(sets, minArea, idealArea, cap);
           wireSetsConsidered += pick.looked;
           if (pick.picks.length === 0) {
             wireFailures.push(
               pick.leastFill
-                ? `at ${turns} turns the leanest set that carries the current (${pick.leastFill.label}) fills ${((zs * pick.leastFill.insulatedAreaMm2) / original.grossSlotAreaMm2 * 100).toFixed(0)} % of the slot (limit ${(limits.slotFillMax * 100).toFixed(0)} %)`
+                ? `at ${turns} turns the leanest set that carries the current (${pick.leastFill.label}) fills ${((zs * pick.leastFill.insulatedAreaMm2) / original.grossSlotAreaMm2 * 100).toFixed(0)} % of the slot (limit ${(fillLimit * 100).toFixed(0)} %)`
                 : `at ${turns} turns the stock cannot make ${minArea.toFixed(3)} mm² per turn with up to ${limits.maxStrandsInHand} wires in hand`,
             );
             continue;
@@ -181,7 +186,7 @@ export function searchRedesign(original: RedesignOriginal, request: RedesignRequ
     expected,
     originalBasis: {
       seriesTurnsPerPhase: oldNph, windingFactor: oldKw, conductorAreaMm2: oldArea, conductorsPerSlot: oldZs,
-      slotFill: (oldZs * oldInsulated) / original.grossSlotAreaMm2, currentDensityAPerMm2: oldJ,
+      slotFill: oldFill, slotFillLimit: fillLimit, currentDensityAPerMm2: oldJ,
     },
   });
 }

@@ -37,7 +37,7 @@ export interface RedesignLimits {
   currentDensityRise: number;
   /** Largest current density at all, A/mm² (used when the rated current is known). */
   currentDensityMaxAPerMm2: number;
-  /** Largest insulated-wire fill of the gross slot area, fraction. */
+  /** Largest insulated-wire fill of the gross slot area, fraction (or the original's fill, if higher). */
   slotFillMax: number;
   /** Most wires in hand in one conductor. */
   maxStrandsInHand: number;
@@ -146,7 +146,16 @@ export interface RedesignSearch {
   /** Ratios that hold for every candidate (from the supply change alone). */
   expected: ExpectedRating;
   /** The original's own figures for comparison. */
-  originalBasis: { seriesTurnsPerPhase: number; windingFactor: number; conductorAreaMm2: number; conductorsPerSlot: number; slotFill: number; currentDensityAPerMm2: number | null };
+  originalBasis: {
+    seriesTurnsPerPhase: number;
+    windingFactor: number;
+    conductorAreaMm2: number;
+    conductorsPerSlot: number;
+    slotFill: number;
+    /** The fill limit applied: the shop limit, or the original's own fill when that is higher (it was wound). */
+    slotFillLimit: number;
+    currentDensityAPerMm2: number | null;
+  };
 }
 
 /** Rating the new winding is expected to carry, from the stated assumptions. */

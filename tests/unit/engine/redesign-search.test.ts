@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { layoutFamilies } from '@/lib/engine/redesign/families';
 import { searchRedesign } from '@/lib/engine/redesign/search';
+import { stockWire } from '@/lib/engine/redesign/from-sheet';
 import type { Candidate } from '@/lib/engine/redesign/types';
 import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from './redesign-fixtures';
 import { errorOf, value } from './winding-fixtures';
@@ -71,10 +72,19 @@ describe('families that fail say why', () => {
     expect(r.rejected.every((x) => /yoke \(back-iron\) flux density \+\d+\.\d % is over/.test(x.reason))).toBe(true);
   });
 
-  it('a slot-fill limit below the original fill: no wire combination fits, with the fill it would need', () => {
+  it('a fill limit below the original’s lets the new winding fill as much as the original did, never more', () => {
     const r = search({ lineVoltageV: 460, frequencyHz: 60 }, { slotFillMax: 0.1 });
+    expect(r.originalBasis.slotFillLimit).toBeCloseTo(r.originalBasis.slotFill, 12);
+    expect(r.candidates.length).toBeGreaterThan(0);
+    expect(r.candidates.every((c) => c.slotFill <= r.originalBasis.slotFill + 1e-12)).toBe(true);
+  });
+
+  it('when only thin, thick-enamelled wire is on hand and the fill is tight, no wire combination fits, and the reason gives the fill', () => {
+    // Thin grade-3 wire packs less copper per insulated area than the original 2 × 0.85 mm grade 2.
+    const grade3 = METRIC_STOCK.filter((w) => w.bareMm <= 0.6).map((w) => value(stockWire({ standard: w.standard, size: w.size, enamelGrade: 3 })));
+    const r = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor({ parallelPaths: [1] }, { slotFillMax: 0.1 }), grade3));
     expect(r.candidates).toHaveLength(0);
-    expect(r.rejected[0]?.reason).toMatch(/No wire combination from stock fits the slot: at \d+ turns the leanest set .* fills \d+ % of the slot \(limit 10 %\)/);
+    expect(r.rejected[0]?.reason).toMatch(/No wire combination from stock fits the slot: at \d+ turns the leanest set .* fills \d+ % of the slot \(limit 23 %\)/);
   });
 
   it('a stock too thin for the current says it cannot make the area', () => {
