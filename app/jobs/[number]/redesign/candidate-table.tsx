@@ -1,0 +1,75 @@
+import type { Candidate, RedesignSearch } from '@/lib/engine/redesign/types';
+import { ChooseButton } from './choose-button';
+
+const pct = (r: number): string => `${r >= 1 ? '+' : '−'}${Math.abs((r - 1) * 100).toFixed(1)} %`;
+const spanText = (spans: readonly number[]): string => spans.map((y) => `1–${y + 1}`).join(', ');
+
+/** How many candidates show before the "more" fold. */
+const SHOWN = 12;
+
+function Row({ c, choose, chosen }: { c: Candidate; choose: { redesignId: string; version: number } | null; chosen: boolean }) {
+  const w = c.winding;
+  return (
+    <tr className={chosen ? 'chosen' : undefined} data-key={c.key}>
+      <td className="num">{c.rank}{chosen && <span className="tag" style={{ marginLeft: '0.3rem' }}>chosen</span>}</td>
+      <td className="num">{w.turnsPerCoil.join('/')}</td>
+      <td>{w.connection === 'star' ? 'Y' : 'Δ'}</td>
+      <td className="num">{w.parallelPaths}</td>
+      <td>{spanText(w.spans)}{w.layers === 1 ? ' (single)' : ''}</td>
+      <td>{c.wires.label}</td>
+      <td className="num">{pct(c.ratios.gap)} / {pct(c.ratios.tooth)} / {pct(c.ratios.yoke)}</td>
+      <td className="num">{c.currentDensity.aPerMm2 !== null ? `${c.currentDensity.aPerMm2.toFixed(2)} A/mm² ` : ''}({pct(c.currentDensity.ratio)})</td>
+      <td className="num">{(c.slotFill * 100).toFixed(0)} %</td>
+      <td className="small">{c.fractional ? '⚠ fractional slot; ' : ''}{c.changes.join('; ') || 'no change'}</td>
+      <td>{choose && !chosen ? <ChooseButton redesignId={choose.redesignId} version={choose.version} candidateKey={c.key} rank={c.rank} /> : null}</td>
+    </tr>
+  );
+}
+
+/** The ranked candidates of a draft, with the families the search gave up on and why. */
+export function CandidateTable({ search, choose, chosenKey }: { search: RedesignSearch; choose: { redesignId: string; version: number } | null; chosenKey: string | null }) {
+  const head = (
+    <thead>
+      <tr>
+        <th scope="col" className="num">Rank</th><th scope="col" className="num">Turns / coil</th><th scope="col">Conn.</th><th scope="col" className="num">Circuits</th>
+        <th scope="col">Span</th><th scope="col">Wires in hand</th><th scope="col" className="num">Gap / tooth / yoke change</th>
+        <th scope="col" className="num">Current density</th><th scope="col" className="num">Fill</th><th scope="col">What changes</th><th scope="col"><span className="sr-only">Choose</span></th>
+      </tr>
+    </thead>
+  );
+  const first = search.candidates.slice(0, SHOWN);
+  const rest = search.candidates.slice(SHOWN);
+  return (
+    <>
+      <p className="small muted">
+        {search.candidates.length} candidate{search.candidates.length === 1 ? '' : 's'} from {search.familiesTried} families ({search.wireSetsConsidered} wire combinations looked at).
+        Ranked by how closely they keep the as-found flux densities and current density (2 % bands), then by how simple they are to wind.
+      </p>
+      {search.candidates.length > 0 && (
+        <div className="scroll">
+          <table className="candidates" aria-label="Candidate windings">
+            {head}
+            <tbody>{first.map((c) => <Row key={c.key} c={c} choose={choose} chosen={c.key === chosenKey} />)}</tbody>
+          </table>
+        </div>
+      )}
+      {rest.length > 0 && (
+        <details>
+          <summary>{rest.length} more candidates</summary>
+          <div className="scroll">
+            <table className="candidates" aria-label="More candidate windings">
+              {head}
+              <tbody>{rest.map((c) => <Row key={c.key} c={c} choose={choose} chosen={c.key === chosenKey} />)}</tbody>
+            </table>
+          </div>
+        </details>
+      )}
+      {search.rejected.length > 0 && (
+        <details open={search.candidates.length === 0}>
+          <summary>Families that failed, and why ({search.rejected.length})</summary>
+          <ul className="small">{search.rejected.map((r) => <li key={r.family + r.reason}><strong>{r.family}:</strong> {r.reason}</li>)}</ul>
+        </details>
+      )}
+    </>
+  );
+}
