@@ -1,7 +1,7 @@
 import type { Candidate, RedesignSearch } from '@/lib/engine/redesign/types';
 import { ChooseButton } from './choose-button';
 
-const pct = (r: number): string => `${r >= 1 ? '+' : '−'}${Math.abs((r - 1) * 100).toFixed(1)} %`;
+const pct = (r: number): string => (Math.abs(r - 1) < 0.0005 ? '±0.0 %' : `${r >= 1 ? '+' : '−'}${Math.abs((r - 1) * 100).toFixed(1)} %`);
 const spanText = (spans: readonly number[]): string => spans.map((y) => `1–${y + 1}`).join(', ');
 
 /** How many candidates show before the "more" fold. */
@@ -11,14 +11,13 @@ function Row({ c, choose, chosen }: { c: Candidate; choose: { redesignId: string
   const w = c.winding;
   return (
     <tr className={chosen ? 'chosen' : undefined} data-key={c.key}>
-      <td className="num">{c.rank}{chosen && <span className="tag" style={{ marginLeft: '0.3rem' }}>chosen</span>}</td>
-      <td className="num">{w.turnsPerCoil.join('/')}</td>
-      <td>{w.connection === 'star' ? 'Y' : 'Δ'}</td>
-      <td className="num">{w.parallelPaths}</td>
-      <td>{spanText(w.spans)}{w.layers === 1 ? ' (single)' : ''}</td>
-      <td>{c.wires.label}</td>
+      <td className="num">{c.rank}{chosen && <><br /><span className="tag">chosen</span></>}</td>
+      <td>
+        <strong>{w.turnsPerCoil.join('/')} turns</strong> · {w.connection === 'star' ? 'star (Y)' : 'delta (Δ)'} · {w.parallelPaths} circuit{w.parallelPaths === 1 ? '' : 's'} · {spanText(w.spans)}{w.layers === 1 ? ' single layer' : ''}
+        <br /><span className="small">{c.wires.label}</span>
+      </td>
       <td className="num">{pct(c.ratios.gap)} / {pct(c.ratios.tooth)} / {pct(c.ratios.yoke)}</td>
-      <td className="num">{c.currentDensity.aPerMm2 !== null ? `${c.currentDensity.aPerMm2.toFixed(2)} A/mm² ` : ''}({pct(c.currentDensity.ratio)})</td>
+      <td className="num">{c.currentDensity.aPerMm2 !== null ? <>{c.currentDensity.aPerMm2.toFixed(2)} A/mm²<br /></> : null}<span className="small">({pct(c.currentDensity.ratio)})</span></td>
       <td className="num">{(c.slotFill * 100).toFixed(0)} %</td>
       <td className="small">{c.fractional ? '⚠ fractional slot; ' : ''}{c.changes.join('; ') || 'no change'}</td>
       <td>{choose && !chosen ? <ChooseButton redesignId={choose.redesignId} version={choose.version} candidateKey={c.key} rank={c.rank} /> : null}</td>
@@ -31,9 +30,8 @@ export function CandidateTable({ search, choose, chosenKey }: { search: Redesign
   const head = (
     <thead>
       <tr>
-        <th scope="col" className="num">Rank</th><th scope="col" className="num">Turns / coil</th><th scope="col">Conn.</th><th scope="col" className="num">Circuits</th>
-        <th scope="col">Span</th><th scope="col">Wires in hand</th><th scope="col" className="num">Gap / tooth / yoke change</th>
-        <th scope="col" className="num">Current density</th><th scope="col" className="num">Fill</th><th scope="col">What changes</th><th scope="col"><span className="sr-only">Choose</span></th>
+        <th scope="col" className="num">Rank</th><th scope="col">Winding and wires in hand</th><th scope="col" className="num">Gap / tooth / yoke change</th>
+        <th scope="col" className="num">Current density</th><th scope="col" className="num">Slot fill</th><th scope="col">What changes</th><th scope="col"><span className="sr-only">Choose</span></th>
       </tr>
     </thead>
   );
