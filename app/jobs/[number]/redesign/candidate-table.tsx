@@ -7,7 +7,7 @@ const spanText = (spans: readonly number[]): string => spans.map((y) => `1–${y
 /** How many candidates show before the "more" fold. */
 const SHOWN = 12;
 
-function Row({ c, choose, chosen }: { c: Candidate; choose: { redesignId: string; version: number } | null; chosen: boolean }) {
+function Row({ c, choose, chosen, fillLimit }: { c: Candidate; choose: { redesignId: string; version: number } | null; chosen: boolean; fillLimit: number }) {
   const w = c.winding;
   return (
     <tr className={chosen ? 'chosen' : undefined} data-key={c.key}>
@@ -18,7 +18,11 @@ function Row({ c, choose, chosen }: { c: Candidate; choose: { redesignId: string
       </td>
       <td className="num">{pct(c.ratios.gap)} / {pct(c.ratios.tooth)} / {pct(c.ratios.yoke)}</td>
       <td className="num">{c.currentDensity.aPerMm2 !== null ? <>{c.currentDensity.aPerMm2.toFixed(2)} A/mm²<br /></> : null}<span className="small">({pct(c.currentDensity.ratio)})</span></td>
-      <td className="num">{(c.slotFill * 100).toFixed(0)} %</td>
+      <td className="num">
+        {c.slotFill > fillLimit
+          ? <span className="out"><span aria-hidden="true">⚠ </span>{(c.slotFill * 100).toFixed(0)} %<br /><span className="small">over the {(fillLimit * 100).toFixed(0)} % shop limit, as the as-found winding is</span></span>
+          : `${(c.slotFill * 100).toFixed(0)} %`}
+      </td>
       <td className="small">{c.fractional ? '⚠ fractional slot; ' : ''}{c.changes.join('; ') || 'no change'}</td>
       <td>{choose && !chosen ? <ChooseButton redesignId={choose.redesignId} version={choose.version} candidateKey={c.key} rank={c.rank} /> : null}</td>
     </tr>
@@ -26,7 +30,7 @@ function Row({ c, choose, chosen }: { c: Candidate; choose: { redesignId: string
 }
 
 /** The ranked candidates of a draft, with the families the search gave up on and why. */
-export function CandidateTable({ search, choose, chosenKey }: { search: RedesignSearch; choose: { redesignId: string; version: number } | null; chosenKey: string | null }) {
+export function CandidateTable({ search, choose, chosenKey, fillLimit }: { search: RedesignSearch; choose: { redesignId: string; version: number } | null; chosenKey: string | null; fillLimit: number }) {
   const head = (
     <thead>
       <tr>
@@ -47,7 +51,7 @@ export function CandidateTable({ search, choose, chosenKey }: { search: Redesign
         <div className="scroll">
           <table className="candidates" aria-label="Candidate windings">
             {head}
-            <tbody>{first.map((c) => <Row key={c.key} c={c} choose={choose} chosen={c.key === chosenKey} />)}</tbody>
+            <tbody>{first.map((c) => <Row key={c.key} c={c} choose={choose} chosen={c.key === chosenKey} fillLimit={fillLimit} />)}</tbody>
           </table>
         </div>
       )}
@@ -57,7 +61,7 @@ export function CandidateTable({ search, choose, chosenKey }: { search: Redesign
           <div className="scroll">
             <table className="candidates" aria-label="More candidate windings">
               {head}
-              <tbody>{rest.map((c) => <Row key={c.key} c={c} choose={choose} chosen={c.key === chosenKey} />)}</tbody>
+              <tbody>{rest.map((c) => <Row key={c.key} c={c} choose={choose} chosen={c.key === chosenKey} fillLimit={fillLimit} />)}</tbody>
             </table>
           </div>
         </details>

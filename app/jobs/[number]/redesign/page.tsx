@@ -170,7 +170,7 @@ function DraftRevision({ r, ctx, canEdit, mayApprove }: { r: RedesignRevision; c
       <section className="card" aria-labelledby="cand-h" id="candidates">
         <h2 id="cand-h">Revision {r.revision} (draft): candidates for {t.lineVoltageV} V {t.frequencyHz} Hz, {t.poles} poles, {t.connection === 'either' ? 'star or delta' : t.connection}</h2>
         {r.sheetRevision !== ctx.sheet.revision && <p className="notice warn">{REDESIGN_MESSAGES.sheetChanged}</p>}
-        <CandidateTable search={searched.value} choose={canEdit ? { redesignId: r.id, version: r.version } : null} chosenKey={r.chosenKey} />
+        <CandidateTable search={searched.value} choose={canEdit ? { redesignId: r.id, version: r.version } : null} chosenKey={r.chosenKey} fillLimit={r.request.limits.slotFillMax} />
       </section>
       {r.chosenKey && !chosen && <p className="notice bad">{REDESIGN_MESSAGES.candidateGone}</p>}
       {chosen && report?.ok && (
