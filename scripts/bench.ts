@@ -53,7 +53,7 @@ const REDESIGN_ORIGINAL: RedesignOriginal = {
   grossSlotAreaMm2: 150,
   wires: [{ label: '1.120 mm', enamelGrade: 2, bareMm: 1.12, overallMm: 1.18, areaMm2: (Math.PI / 4) * 1.12 ** 2, count: 2 }],
   meanTurnLengthMm: 700,
-  ratedCurrentA: 20,
+  ratedCurrentA: 9,
 };
 
 /** 40 sizes: metric 0.30–2.00 mm (34) and AWG 15–20 (6), grade 2. */
