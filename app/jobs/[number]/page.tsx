@@ -8,6 +8,7 @@ import { MAIN_PATH, STATUS_LABELS, allowedMoves, moveLabel } from '@/lib/jobs/st
 import { CONNECTION_LABELS } from '@/lib/schemas/motor';
 import { fmt } from '@/lib/format';
 import { polesFromSpeed } from '@/lib/engine/speed';
+import { getApprovedRedesign } from '@/lib/redesign/redesign-queries';
 import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
 import { PhotoUpload } from './photo-upload';
@@ -24,7 +25,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
   if (!parsed.success) notFound();
   const job = await getJobByNumber(parsed.data.number);
   if (!job) notFound();
-  const [staff, history] = await Promise.all([listStaff(), motorHistory(job.motorId, job.id)]);
+  const [staff, history, redesign] = await Promise.all([listStaff(), motorHistory(job.motorId, job.id), getApprovedRedesign(job.id)]);
   const m = job.motor;
   const poles = m.frequencyHz && m.speedRpm ? polesFromSpeed(m.frequencyHz, m.speedRpm) : null;
   const moves = can(user.role, 'job.move')
@@ -57,7 +58,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
         <h2>Workshop records</h2>
         <ul className="row" style={{ listStyle: 'none', padding: 0, gap: '1.5rem' }}>
           <li><Link href={`/jobs/${job.number}/sheet`}>As-found data sheet</Link></li>
-          <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link></li>
+          <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>{redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}</li>
           <li><Link href={`/jobs/${job.number}/tests`}>Final tests</Link></li>
           <li><Link href={`/jobs/${job.number}/job-sheet`}>Job sheet</Link></li>
         </ul>

@@ -7,6 +7,7 @@ import type { JobStatus, Priority, Role } from '../generated/enums';
 import { hashPassword } from '@/lib/auth/password';
 import { FIRST_JOB_NUMBER } from '@/lib/jobs/job-writes';
 import { demoSheet } from './demo-sheets';
+import { seedStock } from './seed-stock';
 import { DEMO_CUSTOMERS, DEMO_FAULTS, DEMO_MANUFACTURERS, DEMO_RATINGS, DEMO_USERS } from './demo-data';
 
 /** A small seeded generator (mulberry32) so demo data is the same on every machine. */
@@ -123,6 +124,7 @@ export async function seedDemoShop(prisma: PrismaClient, now = new Date()): Prom
       });
     }
   }
+  await seedStock(prisma);
   await prisma.jobCounter.upsert({
     where: { id: 'job' },
     create: { id: 'job', value: FIRST_JOB_NUMBER + STATUS_SPREAD.length - 1 },

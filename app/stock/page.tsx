@@ -1,0 +1,71 @@
+import { requirePageUser } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/permissions';
+import { DEFAULT_REDESIGN_LIMITS } from '@/lib/engine/redesign/from-sheet';
+import { mmToInches } from '@/lib/engine/units';
+import { fmt } from '@/lib/format';
+import { limitsToForm } from '@/lib/schemas/redesign';
+import { getShopLimits } from '@/lib/settings/settings-queries';
+import { listStock } from '@/lib/stock/stock-queries';
+import { AddStockForm, RemoveStockButton } from './stock-forms';
+import { SettingsForm } from './settings-form';
+
+export const metadata = { title: 'Wire stock and shop limits' };
+
+/** The wire sizes on hand (the redesign search picks only from these) and the shop's redesign limits. */
+export default async function StockPage() {
+  const user = await requirePageUser('stock.manage');
+  const [stock, settings] = await Promise.all([listStock(), getShopLimits()]);
+  const l = settings.limits;
+  const mayEditSettings = can(user.role, 'settings.manage');
+  return (
+    <>
+      <h1>Wire stock and shop limits</h1>
+      <section className="card" aria-labelledby="stock-h">
+        <h2 id="stock-h">Sizes on hand ({stock.length})</h2>
+        <p className="muted small">The redesign search uses only these sizes. Insulated diameters are typical for the enamel grade (an approximation): measure a sample when the fill is tight.</p>
+        <AddStockForm />
+        <div style={{ overflowX: 'auto' }}>
+          <table aria-label="Wire sizes on hand">
+            <thead>
+              <tr><th scope="col">Size</th><th scope="col">Grade</th><th scope="col" className="num">Bare</th><th scope="col" className="num">Insulated (typ.)</th><th scope="col" className="num">Area</th><th scope="col" className="num">On hand</th><th scope="col">Note</th><th scope="col"><span className="sr-only">Remove</span></th></tr>
+            </thead>
+            <tbody>
+              {stock.map((s) => (
+                <tr key={s.id}>
+                  <th scope="row">{s.wire?.label ?? `${s.standard} ${s.size}`}</th>
+                  <td>{s.enamelGrade}{s.standard === 'awg' ? ` (${['single', 'heavy', 'triple'][s.enamelGrade - 1]} build)` : ''}</td>
+                  <td className="num">{s.wire ? `${s.wire.bareMm.toFixed(3)} mm (${mmToInches(s.wire.bareMm).toFixed(4)} in)` : '—'}</td>
+                  <td className="num">{s.wire ? `${s.wire.overallMm.toFixed(3)} mm` : '—'}</td>
+                  <td className="num">{s.wire ? `${s.wire.areaMm2.toFixed(4)} mm² (${fmt.num(s.wire.areaMm2 * 1973.525, 0)} CM)` : '—'}</td>
+                  <td className="num">{fmt.num(s.quantityKg, 1, 'kg')}</td>
+                  <td>{s.note ?? ''}</td>
+                  <td><RemoveStockButton id={s.id} label={s.wire?.label ?? s.size} /></td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </section>
+      <section className="card" aria-labelledby="limits-h">
+        <h2 id="limits-h">Redesign limits</h2>
+        <p className="muted small">
+          Defaults for every redesign request (the engineer may change them per job). Starting values: flux densities +5 % / −10 % of the original
+          (yoke −50 %), a cautious shop habit; current density +5 % and at most 6 A/mm² [from memory: textbook stator ranges 3–5 A/mm², 3–8 for
+          totally enclosed machines]; insulated wire at most 60 % of the gross slot area [common practice, from memory]; up to 10 wires in hand,
+          3 sizes within a diameter ratio of 1.3 [common practice]. {settings.updatedAt ? `Last saved ${fmt.dateTime(settings.updatedAt)}.` : 'Not saved yet: the starting values apply.'}
+        </p>
+        {mayEditSettings ? (
+          <SettingsForm version={settings.version} defaults={limitsToForm(l)} starting={limitsToForm(DEFAULT_REDESIGN_LIMITS)} />
+        ) : (
+          <dl className="dl">
+            <dt>Gap / tooth / yoke</dt><dd>+{(l.gap.over * 100).toFixed(1)}/−{(l.gap.under * 100).toFixed(1)} % · +{(l.tooth.over * 100).toFixed(1)}/−{(l.tooth.under * 100).toFixed(1)} % · +{(l.yoke.over * 100).toFixed(1)}/−{(l.yoke.under * 100).toFixed(1)} %</dd>
+            <dt>Current density</dt><dd>+{(l.currentDensityRise * 100).toFixed(1)} %, at most {l.currentDensityMaxAPerMm2} A/mm²</dd>
+            <dt>Slot fill</dt><dd>at most {(l.slotFillMax * 100).toFixed(1)} % of the gross slot area</dd>
+            <dt>Wires in hand</dt><dd>up to {l.maxStrandsInHand}, {l.maxWireSizes} size(s), diameter ratio ≤ {l.mixedSizeRatioMax}</dd>
+            <dt>Changed by</dt><dd>an administrator</dd>
+          </dl>
+        )}
+      </section>
+    </>
+  );
+}

@@ -1,0 +1,13 @@
+'use server';
+
+/** Shop settings: only an administrator may change them ('settings.manage'). */
+import { guardedAction } from '@/lib/auth/guard';
+import { success } from '@/lib/errors/action-result';
+import { limitsFromForm, shopSettingsSchema } from '@/lib/schemas/redesign';
+import { saveShopLimits } from './settings-writes';
+
+export async function saveShopSettings(raw: unknown) {
+  return guardedAction('settings.manage', 'change the shop settings', shopSettingsSchema, async (user, input) =>
+    success(await saveShopLimits(user.id, input.version, limitsFromForm(input.limits)), 'Shop settings saved. New redesign requests start from these limits.'),
+  )(raw);
+}
