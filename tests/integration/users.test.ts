@@ -43,6 +43,7 @@ describe('people who sign in', () => {
   });
 
   it('creates the first administrator from the environment only when nobody exists yet', async () => {
-    expect(await bootstrapAdmin({ COILWRIGHT_ADMIN_EMAIL: 'boss@example.com', COILWRIGHT_ADMIN_PASSWORD: 'a-long-password' })).toBe(false);
+    const env = { COILWRIGHT_ADMIN_EMAIL: 'boss@example.com', COILWRIGHT_ADMIN_PASSWORD: 'a-long-password' } as NodeJS.ProcessEnv;
+    expect(await bootstrapAdmin(env)).toBe(false);
   });
 });
