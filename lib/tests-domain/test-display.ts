@@ -5,7 +5,7 @@
  */
 import { celsiusToFahrenheit, mmToInches } from '@/lib/engine/units';
 import { fmt } from '@/lib/format';
-import type { CheckStatus, OverallVerdict, SectionStatus } from './test-verdicts';
+import type { Check, CheckStatus, OverallVerdict, SectionStatus } from './test-verdicts';
 
 /** Vibration velocity mm/s → in/s: the same length conversion, 1 in = 25.4 mm exactly. */
 export const mmPerSecondToInchesPerSecond = (mmS: number): number => mmToInches(mmS);
@@ -60,4 +60,22 @@ export function statusText(s: CheckStatus | SectionStatus): string {
 
 export function overallText(v: OverallVerdict): string {
   return v === 'PASS' ? '✓ PASS' : v === 'FAIL' ? '⚠ FAIL' : '… INCOMPLETE';
+}
+
+/** A check's value against its limit in the check's own unit, e.g. "250 MΩ (minimum 5 MΩ)". */
+export function checkValueText(check: Check): string {
+  const v = check.verdict;
+  if (!v) return '';
+  switch (check.key) {
+    case 'ir':
+      return `${megohmText(v.value)} (minimum ${megohmText(v.limit)})`;
+    case 'pi':
+      return `${v.value.toFixed(2)} (minimum ${v.limit.toFixed(1)})`;
+    case 'unbalance':
+      return `${percentText(v.value)} (limit ${percentText(v.limit, 0)})`;
+    case 'vibration':
+      return `${velocityText(v.value)} (limit ${velocityText(v.limit)})`;
+    default:
+      return `${v.value} (limit ${v.limit})`;
+  }
 }

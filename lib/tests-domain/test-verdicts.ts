@@ -123,7 +123,7 @@ function judgeHipot(d: TestDataValues, irStatus: SectionStatus, derived: TestJud
     ...(basis.ratedOutputKw === undefined ? {} : { ratedOutputHp: kwToHp(basis.ratedOutputKw) }),
   });
   if (levels.ok) derived.hipotLevels = levels.value;
-  const check = operator('hipot', 'Winding held the test voltage', hipot.result, levels.ok ? levels.value.rule : 'Hipot: no breakdown at the test voltage.');
+  const check = operator('hipot', 'Winding held the test voltage', hipot.result, 'Hipot: no breakdown, leakage steady, for the test time.');
   if (levels.ok && hipot.appliedV !== undefined) {
     const proposed = hipot.kind === 'ac' ? levels.value.acV : levels.value.dcV;
     if (Math.abs(hipot.appliedV - proposed) > HIPOT_LEVEL_TOLERANCE * proposed) {
