@@ -36,7 +36,9 @@ export async function saveTestRecord(userId: string, input: TestRecordForm): Pro
   const judgement = judgeTestRecord(input.data);
   const testedAt = new Date(`${input.testedAt.length === 16 ? `${input.testedAt}:00` : input.testedAt}Z`);
   const columns = {
-    data: input.data as Prisma.InputJsonObject,
+    // JSON has no undefined: a blank reading inside a tuple (e.g. one phase current) is stored as null,
+    // which the schema reads back as blank; blank fields of objects are simply left out.
+    data: JSON.parse(JSON.stringify(input.data)) as Prisma.InputJsonObject,
     verdict: judgement.overall,
     testedAt,
     testedById: input.testedById,

@@ -58,6 +58,19 @@ describe('recording final tests', () => {
     expect((await db().testRecord.findUniqueOrThrow({ where: { id: current!.id } })).verdict).toBe('FAIL');
   });
 
+  it('stores blank readings inside a set (one phase current missing) and reads them back as blank', async () => {
+    await actAs(WINDER.email);
+    const [current] = await listTestRecords(jobId);
+    const partial = form({ recordId: current!.id, version: current!.version, previousSequence: 1 });
+    partial.data.run.currentsA = [2.9, '', ''];
+    partial.data.surge.phases = [{ result: 'pass', notes: '' }, { result: '' }, { result: '' }];
+    const result = await saveTestRecordAction(partial);
+    expect(result).toMatchObject({ ok: true, data: { verdict: 'INCOMPLETE' } });
+    const [after] = await listTestRecords(jobId);
+    expect(after!.data.run.currentsA).toEqual([2.9, undefined, undefined]);
+    expect(after!.data.surge.phases[1]).toEqual({});
+  });
+
   it('refuses a stale edit and keeps the newer save', async () => {
     await actAs(ENGINEER.email);
     const [current] = await listTestRecords(jobId);
