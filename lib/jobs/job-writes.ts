@@ -128,7 +128,7 @@ export async function updateJob(userId: string, input: JobEdit): Promise<{ versi
 type StatusMove = z.output<typeof statusMoveSchema>;
 
 export async function moveJobStatus(userId: string, role: Role, input: StatusMove): Promise<{ version: number; status: JobStatus }> {
-  return db().$transaction(async (tx) => {
+  const moved = await db().$transaction(async (tx) => {
     const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true, heldFrom: true, version: true } });
     if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
     if (job.version !== input.version) throw new DomainError('stale', MESSAGES.stale);
@@ -159,6 +159,18 @@ export async function moveJobStatus(userId: string, role: Role, input: StatusMov
     });
     return { version: input.version + 1, status: input.to };
   });
+  // A shipped job keeps the job sheet it shipped with. Rendering the PDF takes a second or so, so it runs
+  // after the commit instead of holding the job's row lock; if it fails, the move still stands and the
+  // first download of the sheet stores it (lib/job-sheet/job-sheet-snapshot.ts).
+  if (moved.status === 'SHIPPED') {
+    try {
+      const { snapshotShippedJobSheet } = await import('@/lib/job-sheet/job-sheet-snapshot');
+      await snapshotShippedJobSheet(input.jobId);
+    } catch (err) {
+      console.error('[coilwright] storing the shipped job sheet failed; it will be stored on first download', err);
+    }
+  }
+  return moved;
 }
 
 /** Records any event on a job's timeline (used by the sheet, redesign and test modules too). */

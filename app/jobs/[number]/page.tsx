@@ -61,6 +61,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
           <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>{redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}</li>
           <li><Link href={`/jobs/${job.number}/tests`}>Final tests</Link></li>
           <li><Link href={`/jobs/${job.number}/job-sheet`}>Job sheet</Link></li>
+          <li><a className="btn secondary" href={`/jobs/${job.number}/job-sheet/pdf`} download>Download job sheet (PDF)</a></li>
         </ul>
       </nav>
 

@@ -1,0 +1,31 @@
+import { z } from 'zod';
+import { currentUser } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/permissions';
+import { jobSheetPdf } from '@/lib/job-sheet/job-sheet-snapshot';
+
+const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
+
+/**
+ * The job sheet PDF for a signed-in user whose role may read jobs: a download by default, shown in the
+ * browser with ?inline=1. Shipped jobs get the copy stored when they shipped.
+ */
+export async function GET(req: Request, { params }: { params: Promise<{ number: string }> }): Promise<Response> {
+  const user = await currentUser();
+  if (!user) return new Response('Sign in first.', { status: 401 });
+  if (!can(user.role, 'job.read')) return new Response('Not allowed.', { status: 403 });
+  const parsed = paramsSchema.safeParse(await params);
+  if (!parsed.success) return new Response('Not found.', { status: 404 });
+  const sheet = await jobSheetPdf(parsed.data.number);
+  if (!sheet) return new Response('Not found.', { status: 404 });
+  const inline = new URL(req.url).searchParams.get('inline') === '1';
+  return new Response(new Uint8Array(sheet.pdf), {
+    headers: {
+      'Content-Type': 'application/pdf',
+      'Content-Disposition': `${inline ? 'inline' : 'attachment'}; filename="${sheet.filename}"`,
+      'Content-Length': String(sheet.pdf.length),
+      'Cache-Control': 'private, no-store',
+      'X-Content-Type-Options': 'nosniff',
+      'X-Job-Sheet-Source': sheet.snapshot ? 'shipped-snapshot' : 'generated',
+    },
+  });
+}

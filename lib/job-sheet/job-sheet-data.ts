@@ -1,0 +1,163 @@
+/**
+ * Everything the job sheet prints, gathered once and formatted once into plain strings. The PDF and the
+ * print view both render this object and nothing else, so the two always show the same numbers.
+ */
+import { db } from '@/lib/db/client';
+import { STATUS_LABELS } from '@/lib/jobs/status-flow';
+import { CONNECTION_LABELS } from '@/lib/schemas/motor';
+import { getAsFoundSheet } from '@/lib/sheets/sheet-queries';
+import type { WindingSheet } from '@/lib/schemas/winding-sheet';
+import { listTestRecords } from '@/lib/tests-domain/test-record-queries';
+import { readingSections, type ReadingSection } from '@/lib/tests-domain/test-readings';
+import { judgeTestRecord, type OverallVerdict, type SectionJudgement } from '@/lib/tests-domain/test-verdicts';
+import { temperatureText } from '@/lib/tests-domain/test-display';
+import { mmToInches } from '@/lib/engine/units';
+import { fmt } from '@/lib/format';
+import { getApprovedRedesignSummary, type ApprovedRedesignSummary } from './redesign-summary';
+import { CLOSING_STATEMENT, SAFETY_NOTICES, type SafetyNotice } from './safety-notices';
+import { shopDetails, type ShopDetails } from './shop-details';
+
+export interface Row {
+  label: string;
+  value: string;
+}
+
+export interface JobSheetTests {
+  sequence: number;
+  /** What the verdicts were judged against, in one line. */
+  basis: string;
+  testedAt: string;
+  testedBy: string;
+  instruments: string;
+  verdict: OverallVerdict;
+  sections: SectionJudgement[];
+  readings: ReadingSection[];
+  notes: string | null;
+  earlier: { sequence: number; testedAt: string; verdict: OverallVerdict }[];
+}
+
+export interface JobSheetData {
+  shop: ShopDetails;
+  job: { id: string; number: number; status: string; shipped: boolean; rows: Row[] };
+  customer: Row[];
+  nameplate: Row[];
+  asFound: { revision: number; updatedAt: string; rows: Row[] } | null;
+  redesign: (Omit<ApprovedRedesignSummary, 'approvedAt'> & { approvedAt: string }) | null;
+  tests: JobSheetTests | null;
+  notices: readonly SafetyNotice[];
+  closing: string;
+  /** Lines for handwritten signatures and dates. */
+  signatures: readonly string[];
+  /** Number of recorded changes to the job (its timeline events): any change gives a new revision. */
+  revision: number;
+  /** When the job, its as-found sheet or its tests last changed. */
+  revisionDate: string;
+}
+
+export const SIGNATURE_LINES = ['Tested by (name, initials)', 'Checked by (qualified person)', 'Released by', 'Received by (customer)'] as const;
+
+const mmIn = (mm: number | undefined, digits = 1) => (mm === undefined ? '—' : `${fmt.num(mm, digits, 'mm')} (${mmToInches(mm).toFixed(3)} in)`);
+const dash = (v: string | null | undefined) => (v && v.trim() ? v : '—');
+
+function asFoundRows(s: WindingSheet): Row[] {
+  const w = s.winding;
+  const spans = w.spans.map((y) => `1–${y + 1}`).join(', ');
+  const wires = s.wires.map((x) => `${x.count} × ${x.standard === 'awg' ? `AWG ${x.size}` : `${x.size} mm`} (grade ${x.enamelGrade})`).join(' + ');
+  const rows: Row[] = [
+    { label: 'Core', value: `${s.core.slots} slots · bore ${mmIn(s.core.boreMm)} · length ${mmIn(s.core.coreLengthMm)} · OD ${mmIn(s.core.outsideDiameterMm)}` },
+    { label: 'Winding', value: `${w.layers === 2 ? 'double' : 'single'}-layer ${w.style} · span ${spans} · ${w.turnsPerCoil.join(', ')} turns per coil · ${w.parallelPaths} path(s) · ${w.connection}` },
+    { label: 'Wire', value: wires },
+    { label: 'Insulation', value: `class ${s.insulation.thermalClass}${s.insulation.varnish ? ` · ${s.insulation.varnish}` : ''}` },
+    { label: 'Supply', value: `${fmt.num(s.supply.lineVoltageV, 0, 'V')} · ${fmt.num(s.supply.frequencyHz, 0, 'Hz')} · ${s.supply.poles} poles` },
+  ];
+  if (w.meanTurnLengthMm !== undefined) rows.push({ label: 'Mean turn', value: mmIn(w.meanTurnLengthMm, 0) });
+  if (s.resistance) {
+    rows.push({
+      label: 'Resistance as found',
+      value: `${s.resistance.readings.map((r) => `${Number(r.toPrecision(4))} Ω`).join(' / ')} ${s.resistance.between} at ${temperatureText(s.resistance.temperatureC)}`,
+    });
+  }
+  return rows;
+}
+
+const latest = (dates: (Date | null | undefined)[]): Date =>
+  new Date(Math.max(...dates.filter((d): d is Date => d instanceof Date).map((d) => d.getTime())));
+
+/** The job sheet of a job, or null when there is no such job. */
+export async function loadJobSheet(number: number): Promise<JobSheetData | null> {
+  const job = await db().job.findUnique({
+    where: { number },
+    include: { customer: { include: { contacts: true } }, motor: true, assignee: { select: { name: true } } },
+  });
+  if (!job) return null;
+  const [sheet, records, redesign, events] = await Promise.all([
+    getAsFoundSheet(job.id),
+    listTestRecords(job.id),
+    getApprovedRedesignSummary(job.id),
+    db().jobEvent.aggregate({ where: { jobId: job.id }, _count: { _all: true }, _max: { at: true } }),
+  ]);
+  const m = job.motor;
+  const contact = job.customer.contacts[0];
+  const current = records[0];
+  let tests: JobSheetTests | null = null;
+  if (current) {
+    const j = judgeTestRecord(current.data);
+    tests = {
+      sequence: current.sequence,
+      basis: (readingSections(current.data, j).find((r) => r.key === 'basis')?.rows ?? []).map((r) => `${r.label} ${r.value}`).join('; '),
+      testedAt: fmt.dateTime(current.testedAt),
+      testedBy: current.testedBy?.name ?? '—',
+      instruments: current.instrumentSerials.join(', ') || '—',
+      verdict: current.verdict,
+      sections: j.sections,
+      readings: readingSections(current.data, j),
+      notes: current.data.notes ?? null,
+      earlier: records.slice(1).map((r) => ({ sequence: r.sequence, testedAt: fmt.dateTime(r.testedAt), verdict: r.verdict })),
+    };
+  }
+  return {
+    shop: shopDetails(),
+    job: {
+      id: job.id,
+      number: job.number,
+      status: STATUS_LABELS[job.status],
+      shipped: job.status === 'SHIPPED',
+      rows: [
+        { label: 'Job', value: String(job.number) },
+        { label: 'Status', value: STATUS_LABELS[job.status] },
+        { label: 'Received', value: fmt.date(job.receivedAt) },
+        { label: 'Promised', value: fmt.date(job.promisedAt) },
+        { label: 'Customer PO', value: dash(job.customerPo) },
+        { label: 'Reported fault', value: dash(job.reportedFault) },
+        { label: 'Assigned to', value: dash(job.assignee?.name) },
+      ],
+    },
+    customer: [
+      { label: 'Company', value: job.customer.company },
+      { label: 'Contact', value: dash(contact?.name) },
+      { label: 'Phone', value: dash(job.customer.phone) },
+      { label: 'Email', value: dash(job.customer.email) },
+      { label: 'Address', value: dash(job.customer.address) },
+    ],
+    nameplate: [
+      { label: 'Motor', value: `${m.manufacturer} ${m.model ?? ''}`.trim() },
+      { label: 'Serial / frame', value: `${dash(m.serial)} / ${dash(m.frame)}` },
+      { label: 'Output', value: fmt.power(m.outputKw) },
+      { label: 'Voltage', value: `${fmt.num(m.ratedVoltageV, 0, 'V')}${m.connection ? ` · ${CONNECTION_LABELS[m.connection as keyof typeof CONNECTION_LABELS] ?? m.connection}` : ''}` },
+      { label: 'Current', value: fmt.num(m.currentA, 1, 'A') },
+      { label: 'Supply', value: `${m.phases} phase · ${fmt.num(m.frequencyHz, 0, 'Hz')}` },
+      { label: 'Speed', value: fmt.num(m.speedRpm, 0, 'rpm') },
+      { label: 'Insulation / duty / SF', value: `class ${dash(m.insulationClass)} · ${dash(m.duty)} · SF ${m.serviceFactor ?? '—'}` },
+      { label: 'Enclosure', value: dash(m.enclosure) },
+      { label: 'Bearings', value: `DE ${dash(m.bearingDriveEnd)} · ODE ${dash(m.bearingOppositeEnd)}` },
+    ],
+    asFound: sheet ? { revision: sheet.revision, updatedAt: fmt.date(sheet.updatedAt), rows: asFoundRows(sheet.sheet) } : null,
+    redesign: redesign ? { ...redesign, approvedAt: fmt.date(redesign.approvedAt) } : null,
+    tests,
+    notices: SAFETY_NOTICES,
+    closing: CLOSING_STATEMENT,
+    signatures: SIGNATURE_LINES,
+    revision: events._count._all,
+    revisionDate: fmt.date(latest([events._max.at, job.updatedAt, sheet?.updatedAt, ...records.map((r) => r.updatedAt)])),
+  };
+}
