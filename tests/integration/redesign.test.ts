@@ -1,6 +1,7 @@
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { db } from '@/lib/db/client';
 import { DEFAULT_REDESIGN_LIMITS } from '@/lib/engine/redesign/from-sheet';
+import { getApprovedRedesignSummary } from '@/lib/job-sheet/redesign-summary';
 import { approveRedesignRevision, chooseCandidate, submitRedesignRequest } from '@/lib/redesign/redesign-actions';
 import { loadRedesignContext, runSearch } from '@/lib/redesign/redesign-context';
 import { getApprovedRedesign, listRedesigns } from '@/lib/redesign/redesign-queries';
@@ -123,6 +124,14 @@ describe('redesign request, choice and approval', () => {
     expect(approved?.snapshot.report.candidate.key).toBe(await firstCandidateKey(redesignId));
     expect(approved?.snapshot.report.warnings.map((w) => w.topic)).toEqual(expect.arrayContaining(['speed', 'frequency', 'certification', 'review']));
     expect(await db().jobEvent.count({ where: { jobId, kind: 'REDESIGN_APPROVED' } })).toBe(1);
+  });
+
+  it('the job sheet prints what was approved: changed rows and the proposed nameplate', async () => {
+    const summary = await getApprovedRedesignSummary(jobId);
+    expect(summary).toMatchObject({ revision: 1, approvedBy: ENGINEER.name });
+    expect(summary?.changes.length).toBeGreaterThan(0);
+    expect(summary?.changes.every((c) => c.original !== c.redesigned)).toBe(true);
+    expect(summary?.proposedNameplate).toEqual(expect.arrayContaining([{ label: 'Voltage, connection', value: '460 V, star (Y)' }]));
   });
 
   it('refuses to change the approved revision through the actions', async () => {

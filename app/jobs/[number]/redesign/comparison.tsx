@@ -1,5 +1,6 @@
+import { Fragment } from 'react';
+import { nameplateLines } from '@/lib/redesign/nameplate-lines';
 import type { ComparisonRow, RedesignReport } from '@/lib/engine/redesign/report';
-import { fmt } from '@/lib/format';
 
 const GROUPS: [ComparisonRow['group'], string][] = [
   ['winding', 'Winding'],
@@ -52,12 +53,9 @@ export function NameplateProposal({ report }: { report: RedesignReport }) {
   return (
     <>
       <dl className="dl">
-        <dt>Voltage, connection</dt><dd>{p.lineVoltageV} V, {p.connection === 'star' ? 'star (Y)' : 'delta (Δ)'}</dd>
-        <dt>Frequency, poles</dt><dd>{p.frequencyHz} Hz, {p.poles} poles</dd>
-        <dt>Speed</dt><dd>{p.speedRpm ? `${fmt.num(p.speedRpm, 0, 'rpm')} (estimated)` : '—'} · synchronous {fmt.num(p.synchronousRpm, 0, 'rpm')}</dd>
-        <dt>Current</dt><dd>{fmt.num(p.currentA, 1, 'A')}</dd>
-        <dt>Output</dt><dd>{fmt.power(p.outputKw)}</dd>
-        <dt>Torque</dt><dd>{p.torqueNm ? `${fmt.num(p.torqueNm, 1, 'N·m')} (${fmt.num(p.torqueNm * 0.737562, 1, 'lbf·ft')})` : '—'}</dd>
+        {nameplateLines(p).map((l) => (
+          <Fragment key={l.label}><dt>{l.label}</dt><dd>{l.value}</dd></Fragment>
+        ))}
       </dl>
       <ul className="small">{p.notes.map((n) => <li key={n}>{n}</li>)}</ul>
     </>
