@@ -40,7 +40,7 @@ export async function updateUser(actorId: string, input: z.output<typeof userUpd
  * First start on a real PostgreSQL: no demo people, so an administrator is created from
  * COILWRIGHT_ADMIN_EMAIL / COILWRIGHT_ADMIN_PASSWORD when the user table is empty.
  */
-export async function bootstrapAdmin(env: NodeJS.ProcessEnv = process.env): Promise<boolean> {
+export async function bootstrapAdmin(env: Record<string, string | undefined> = process.env): Promise<boolean> {
   const email = env.COILWRIGHT_ADMIN_EMAIL?.trim().toLowerCase();
   const password = env.COILWRIGHT_ADMIN_PASSWORD;
   if (!email || !password || (await db().user.count()) > 0) return false;

@@ -43,7 +43,7 @@ describe('people who sign in', () => {
   });
 
   it('creates the first administrator from the environment only when nobody exists yet', async () => {
-    const env = { COILWRIGHT_ADMIN_EMAIL: 'boss@example.com', COILWRIGHT_ADMIN_PASSWORD: 'a-long-password' } as NodeJS.ProcessEnv;
+    const env = { COILWRIGHT_ADMIN_EMAIL: 'boss@example.com', COILWRIGHT_ADMIN_PASSWORD: 'a-long-password' };
     expect(await bootstrapAdmin(env)).toBe(false);
   });
 });
