@@ -24,9 +24,11 @@ export const libraryQuerySchema = z.object({
   voltsTolPct: optNum(100),
   q: z.string().trim().max(80).optional().catch(undefined),
   forJob: z.coerce.number().int().positive().max(2_000_000_000).optional().catch(undefined),
+  /** Up to 3 sheet ids to show side by side (extra ones are dropped). */
   compare: z
-    .preprocess((v) => (Array.isArray(v) ? v : typeof v === 'string' && v ? v.split(',') : []), z.array(z.uuid()).max(3))
+    .preprocess((v) => (Array.isArray(v) ? v : typeof v === 'string' && v ? v.split(',') : []).slice(0, 3), z.array(z.uuid()))
     .catch([]),
+  unit: z.enum(['mm', 'in']).optional().catch(undefined),
 });
 export type LibraryQuery = z.output<typeof libraryQuerySchema>;
 

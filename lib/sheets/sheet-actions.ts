@@ -57,7 +57,7 @@ export async function chooseLengthUnit(raw: unknown) {
  * N, with the supply from job N's own nameplate and no resistance readings (those belong to the old motor).
  * The sheet page then opens with that draft; nothing is saved until the winder saves.
  */
-export async function useLibrarySheetForJob(raw: unknown) {
+export async function copyLibrarySheetToJob(raw: unknown) {
   const schema = z.object({ jobNumber: z.number().int().positive(), sheetId: z.uuid() });
   return guardedAction('sheet.edit', 'record or change data sheets', schema, async (user, input) => {
     const [job, source] = await Promise.all([

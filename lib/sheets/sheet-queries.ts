@@ -45,3 +45,22 @@ export async function listSheetRevisions(sheetId: string) {
     take: 50,
   });
 }
+
+/** What the sheet screens need of a job: status, customer, nameplate, photos. */
+export async function getJobForSheet(number: number) {
+  return db().job.findUnique({
+    where: { number },
+    select: {
+      id: true, number: true, status: true, heldFrom: true,
+      customer: { select: { company: true } },
+      motor: {
+        select: {
+          manufacturer: true, model: true, serial: true, frame: true, ratedVoltageV: true, frequencyHz: true, speedRpm: true, currentA: true,
+          outputKw: true, connection: true, insulationClass: true,
+        },
+      },
+      attachments: { orderBy: { createdAt: 'asc' }, select: { id: true, kind: true, filename: true } },
+    },
+  });
+}
+export type JobForSheet = NonNullable<Awaited<ReturnType<typeof getJobForSheet>>>;
