@@ -1,10 +1,12 @@
 /**
  * `npm run bench`: engine timings. Each section is a BenchSection (lib/engine/bench-timer.ts); add a
- * section (e.g. a redesign search) to SECTIONS below. `--quick` shortens the runs.
+ * section (e.g. a redesign search) to SECTIONS below; sections may be async (the library search seeds an
+ * in-memory database). `--quick` shortens the runs.
  */
 import { analyseWinding, type AnalyseWindingInput } from '@/lib/engine/analyse-winding';
 import { formatTiming, timeIt, type BenchSection, type TimeItOptions } from '@/lib/engine/bench-timer';
 import { closedFormFactors } from '@/lib/engine/closed-form';
+import { librarySection } from './bench/library-search';
 
 /** 96 slots, 4 poles, double-layer lap 1–21 (y = 20 of τ = 24), orders to 49, with a core for the flux. */
 const BENCH_WINDING: AnalyseWindingInput = {
@@ -41,12 +43,15 @@ const windingSection: BenchSection = {
   },
 };
 
-const SECTIONS: BenchSection[] = [windingSection];
+const SECTIONS: BenchSection[] = [windingSection, librarySection];
 
-function main(argv: readonly string[]): void {
+async function main(argv: readonly string[]): Promise<void> {
   const options: TimeItOptions = argv.includes('--quick') ? { warmupMs: 50, measureMs: 200, batches: 10 } : {};
   process.stdout.write(`Node ${process.version}, ${process.platform}/${process.arch}\n`);
-  for (const section of SECTIONS) process.stdout.write(`\n${section.title}\n${section.run(options).join('\n')}\n`);
+  for (const section of SECTIONS) {
+    process.stdout.write(`\n${section.title}\n`);
+    process.stdout.write(`${(await section.run(options)).join('\n')}\n`);
+  }
 }
 
-main(process.argv.slice(2));
+await main(process.argv.slice(2));

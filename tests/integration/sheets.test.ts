@@ -4,7 +4,7 @@ import { allocateJobNumber } from '@/lib/jobs/job-writes';
 import type { JobStatus } from '@/lib/db/generated/enums';
 import type { WindingSheet } from '@/lib/schemas/winding-sheet';
 import { MAX_DRAFT_BYTES } from '@/lib/schemas/sheet-draft';
-import { chooseLengthUnit, discardSheetDraft, saveAsFoundSheet, saveSheetDraft, useLibrarySheetForJob } from '@/lib/sheets/sheet-actions';
+import { chooseLengthUnit, discardSheetDraft, saveAsFoundSheet, saveSheetDraft, copyLibrarySheetToJob } from '@/lib/sheets/sheet-actions';
 import { getAsFoundSheet, getLengthUnit, getSheetDraft, listSheetRevisions } from '@/lib/sheets/sheet-queries';
 import { searchLibrary } from '@/lib/sheets/library-queries';
 import { SHEET_MESSAGES } from '@/lib/sheets/sheet-messages';
@@ -199,7 +199,7 @@ describe('the winding library', () => {
     const user = await db().user.findUniqueOrThrow({ where: { email: WINDER.email } });
     const source = await db().windingSheet.findFirstOrThrow({ include: { job: true } });
     const target = await jobWithoutSheet();
-    const r = await useLibrarySheetForJob({ jobNumber: target.number, sheetId: source.id });
+    const r = await copyLibrarySheetToJob({ jobNumber: target.number, sheetId: source.id });
     expect(r).toMatchObject({ ok: true, data: { jobNumber: target.number } });
     const draft = (await getSheetDraft(target.id, user.id))?.data as { values: ReturnType<typeof sheetToForm> };
     expect(draft.values.core.slots).toBe(String(source.slots));
@@ -207,6 +207,6 @@ describe('the winding library', () => {
     expect(draft.values.supply.lineVoltageV).toBe(motor.ratedVoltageV === null ? '' : String(motor.ratedVoltageV));
     expect(draft.values.resistance.readings).toEqual(['', '', '']);
     await actAs(FRONT_DESK.email);
-    expect(await useLibrarySheetForJob({ jobNumber: target.number, sheetId: source.id })).toMatchObject({ ok: false, code: 'forbidden' });
+    expect(await copyLibrarySheetToJob({ jobNumber: target.number, sheetId: source.id })).toMatchObject({ ok: false, code: 'forbidden' });
   });
 });

@@ -22,8 +22,6 @@ function FluxRow({ name, d }: { name: string; d: FluxDensity }) {
   );
 }
 
-const label = (path: string): string => path.replace(/^winding\.(spans|turnsPerCoil)/, 'winding.coils').replace(/\./g, ' › ') || 'sheet';
-
 export function AnalysisPanel({ live }: { live: LiveAnalysis }) {
   const a = live.full;
   const w = live.winding;
@@ -52,7 +50,7 @@ export function AnalysisPanel({ live }: { live: LiveAnalysis }) {
         <div className="notice warn small">
           <p style={{ margin: 0 }}>Full analysis once these are filled in ({live.issues.length}):</p>
           <ul className="issue-list">
-            {live.issues.slice(0, 6).map((i) => <li key={`${i.path}:${i.message}`}><span className="muted">{label(i.path)}:</span> {i.message}</li>)}
+            {live.issues.slice(0, 6).map((i) => <li key={`${i.path}:${i.message}`}>{i.message}</li>)}
             {live.issues.length > 6 && <li>… and {live.issues.length - 6} more</li>}
           </ul>
         </div>

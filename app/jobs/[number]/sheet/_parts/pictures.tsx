@@ -1,7 +1,7 @@
 'use client';
 
 /** The slot diagram (with its table alternative) and the MMF plots, drawn from the live analysis. */
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import type { LiveAnalysis } from '@/lib/sheets/live-analysis';
 import { MmfCharts } from './mmf-charts';
 import { SlotDiagram, SlotTableView } from './slot-diagram';
@@ -9,6 +9,9 @@ import { SlotDiagram, SlotTableView } from './slot-diagram';
 
 export function Pictures({ live }: { live: LiveAnalysis }) {
   const [showTable, setShowTable] = useState(false);
+  // Charts measure their container, which only exists in the browser: draw them after hydration.
+  const [mounted, setMounted] = useState(false);
+  useEffect(() => setMounted(true), []);
   const w = live.winding;
   const style = live.sheet?.winding.style ?? '';
   const spans = live.sheet?.winding.spans;
@@ -32,7 +35,7 @@ export function Pictures({ live }: { live: LiveAnalysis }) {
           </button>
           <div id="slot-table" hidden={!showTable}>{showTable && <SlotTableView table={w.layout} />}</div>
         </figure>
-        <MmfCharts waveform={w.waveform} mmf={w.mmf} />
+        {mounted ? <MmfCharts waveform={w.waveform} mmf={w.mmf} /> : <p className="muted">Drawing the MMF…</p>}
       </div>
     </section>
   );

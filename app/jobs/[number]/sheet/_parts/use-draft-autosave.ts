@@ -57,7 +57,8 @@ export function useDraftAutosave(jobId: string, enabled: boolean, snapshot: () =
     setState({ kind: 'saving' });
     try {
       const r = await saveSheetDraft({ jobId, draft: snap.current() });
-      if (r.ok) setState({ kind: 'saved', at: new Date(r.data.savedAt) });
+      // Changes typed while this draft was in flight are not in it: do not claim they are saved.
+      if (r.ok) setState(dirty.current ? { kind: 'pending' } : { kind: 'saved', at: new Date(r.data.savedAt) });
       else {
         setState({ kind: 'failed', message: r.message });
         if (r.code !== 'frozen' && r.code !== 'forbidden') {
