@@ -131,12 +131,13 @@ describe('a winder records an as-found sheet', () => {
     await page.getByLabel('inches').check();
     // 130 mm = 5.1181 in (1 in = 25.4 mm exactly).
     await expect.poll(() => field(page, 'Bore (in)').inputValue()).toBe('5.1181');
+    // The unit switch itself may already have been kept as a draft: wait for the note to be pending, then saved.
     await field(page, 'Notes').fill('Leads re-sleeved at the box.');
+    await expect.poll(() => page.getByTestId('draft-status').textContent()).toMatch(/Unsaved changes|Saving draft/);
     await expect.poll(() => page.getByTestId('draft-status').textContent(), { timeout: 15_000 }).toMatch(/Draft saved \d/);
     await page.reload();
-    const restored = await field(page, 'Notes').inputValue();
-    if (restored !== 'Leads re-sleeved at the box.') console.log('DEBUG', await page.locator('main').textContent());
-    expect(restored).toBe('Leads re-sleeved at the box.');
+    // The form fills its inputs when it hydrates, so poll rather than read once.
+    await expect.poll(() => field(page, 'Notes').inputValue()).toBe('Leads re-sleeved at the box.');
     expect(await field(page, 'Bore (in)').inputValue()).toBe('5.1181');
     expect(await page.getByRole('status').filter({ hasText: 'Restored your unsaved draft' }).count()).toBe(1);
     await page.close();
