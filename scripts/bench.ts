@@ -1,6 +1,7 @@
 /**
  * `npm run bench`: engine timings. Each section is a BenchSection (lib/engine/bench-timer.ts); add a
- * section (e.g. a redesign search) to SECTIONS below. `--quick` shortens the runs.
+ * section (e.g. a redesign search) to SECTIONS below; sections may be async (the library search seeds an
+ * in-memory database). `--quick` shortens the runs.
  */
 import { analyseWinding, type AnalyseWindingInput } from '@/lib/engine/analyse-winding';
 import { formatTiming, timeIt, type BenchSection, type TimeItOptions } from '@/lib/engine/bench-timer';
@@ -9,6 +10,7 @@ import { DEFAULT_REDESIGN_LIMITS, stockWire } from '@/lib/engine/redesign/from-s
 import { searchRedesign } from '@/lib/engine/redesign/search';
 import type { RedesignOriginal, RedesignRequest, StockWire } from '@/lib/engine/redesign/types';
 import { listAwgSizes, listMetricSizes } from '@/lib/engine/wire';
+import { librarySection } from './bench/library-search';
 
 /** 96 slots, 4 poles, double-layer lap 1–21 (y = 20 of τ = 24), orders to 49, with a core for the flux. */
 const BENCH_WINDING: AnalyseWindingInput = {
@@ -103,12 +105,15 @@ const redesignSection: BenchSection = {
   },
 };
 
-const SECTIONS: BenchSection[] = [windingSection, redesignSection];
+const SECTIONS: BenchSection[] = [windingSection, redesignSection, librarySection];
 
-function main(argv: readonly string[]): void {
+async function main(argv: readonly string[]): Promise<void> {
   const options: TimeItOptions = argv.includes('--quick') ? { warmupMs: 50, measureMs: 200, batches: 10 } : {};
   process.stdout.write(`Node ${process.version}, ${process.platform}/${process.arch}\n`);
-  for (const section of SECTIONS) process.stdout.write(`\n${section.title}\n${section.run(options).join('\n')}\n`);
+  for (const section of SECTIONS) {
+    process.stdout.write(`\n${section.title}\n`);
+    process.stdout.write(`${(await section.run(options)).join('\n')}\n`);
+  }
 }
 
-main(process.argv.slice(2));
+await main(process.argv.slice(2));

@@ -70,8 +70,23 @@ export function timeIt(name: string, fn: () => unknown, options: TimeItOptions =
 export const formatTiming = (t: Timing): string =>
   `${t.name.padEnd(44)} median ${(t.medianMs * 1000).toFixed(1).padStart(8)} µs   mean ${(t.meanMs * 1000).toFixed(1).padStart(8)} µs   (${t.iterations} calls)`;
 
+/** Times an async call (e.g. a database query): `runs` calls after `warmup`, one at a time. */
+export async function timeItAsync(name: string, fn: () => Promise<unknown>, { warmup = 3, runs = 25 }: { warmup?: number; runs?: number } = {}): Promise<Timing> {
+  for (let i = 0; i < warmup; i++) sink = await fn();
+  const times: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const t0 = performance.now();
+    sink = await fn();
+    times.push(performance.now() - t0);
+  }
+  const sorted = [...times].sort((x, y) => x - y);
+  const mid = sorted.length >> 1;
+  const medianMs = sorted.length % 2 ? (sorted[mid] ?? 0) : ((sorted[mid - 1] ?? 0) + (sorted[mid] ?? 0)) / 2;
+  return { name, iterations: runs, medianMs, meanMs: times.reduce((a, t) => a + t, 0) / times.length, minMs: sorted[0] ?? 0 };
+}
+
 /** A section of `npm run bench`: returns the lines it prints. Add new sections to the list in scripts/bench.ts. */
 export interface BenchSection {
   title: string;
-  run: (options: TimeItOptions) => string[];
+  run: (options: TimeItOptions) => string[] | Promise<string[]>;
 }

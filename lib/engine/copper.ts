@@ -16,3 +16,6 @@ export const COPPER_TEMP_CONSTANT_IEC: CopperTempConstant = 235;
 
 /** Reference temperature of ρ20, °C. */
 export const REFERENCE_TEMPERATURE_C = 20;
+
+/** Density of annealed copper at 20 °C, 8890 kg/m³ (IEC 60028: 8.89 g/cm³). */
+export const COPPER_DENSITY_KG_PER_M3 = 8890;

@@ -24,3 +24,43 @@ export async function getAsFoundSheet(jobId: string): Promise<StoredSheet | null
   }
   return { id: row.id, jobId: row.jobId, revision: row.revision, updatedAt: row.updatedAt, sheet: parsed.data };
 }
+
+/** The signed-in user's draft of a job's sheet, if any. */
+export async function getSheetDraft(jobId: string, userId: string): Promise<{ data: unknown; updatedAt: Date } | null> {
+  return db().sheetDraft.findUnique({ where: { jobId_userId: { jobId, userId } }, select: { data: true, updatedAt: true } });
+}
+
+/** How the user types lengths on the sheet form (millimetres unless they chose inches). */
+export async function getLengthUnit(userId: string): Promise<'mm' | 'in'> {
+  const pref = await db().userPreference.findUnique({ where: { userId }, select: { lengthUnit: true } });
+  return pref?.lengthUnit === 'in' ? 'in' : 'mm';
+}
+
+/** Saved revisions of a sheet, newest first (without their data). */
+export async function listSheetRevisions(sheetId: string) {
+  return db().windingSheetRevision.findMany({
+    where: { sheetId },
+    orderBy: { revision: 'desc' },
+    select: { revision: true, savedAt: true, savedById: true },
+    take: 50,
+  });
+}
+
+/** What the sheet screens need of a job: status, customer, nameplate, photos. */
+export async function getJobForSheet(number: number) {
+  return db().job.findUnique({
+    where: { number },
+    select: {
+      id: true, number: true, status: true, heldFrom: true,
+      customer: { select: { company: true } },
+      motor: {
+        select: {
+          manufacturer: true, model: true, serial: true, frame: true, ratedVoltageV: true, frequencyHz: true, speedRpm: true, currentA: true,
+          outputKw: true, connection: true, insulationClass: true,
+        },
+      },
+      attachments: { orderBy: { createdAt: 'asc' }, select: { id: true, kind: true, filename: true } },
+    },
+  });
+}
+export type JobForSheet = NonNullable<Awaited<ReturnType<typeof getJobForSheet>>>;

@@ -1,0 +1,84 @@
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { z } from 'zod';
+import { requirePageUser } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/permissions';
+import { STATUS_LABELS } from '@/lib/jobs/status-flow';
+import { draftPayloadSchema } from '@/lib/schemas/sheet-draft';
+import { restoreDraftValues } from '@/lib/sheets/draft-values';
+import { prefillFromNameplate } from '@/lib/sheets/prefill';
+import { sheetToForm } from '@/lib/sheets/sheet-form';
+import { SHEET_MESSAGES } from '@/lib/sheets/sheet-messages';
+import { getAsFoundSheet, getJobForSheet, getLengthUnit, getSheetDraft } from '@/lib/sheets/sheet-queries';
+import { isSheetFrozen } from '@/lib/sheets/sheet-writes';
+import { fmt } from '@/lib/format';
+import { PhotoUpload } from '../photo-upload';
+import { SheetEditor, type SheetEditorProps } from './_parts/sheet-editor';
+import './sheet.css';
+
+const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
+
+export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
+  return { title: `Data sheet · job ${(await params).number}` };
+}
+
+export default async function SheetPage({ params }: { params: Promise<{ number: string }> }) {
+  const user = await requirePageUser('job.read');
+  const parsed = paramsSchema.safeParse(await params);
+  if (!parsed.success) notFound();
+  const job = await getJobForSheet(parsed.data.number);
+  if (!job) notFound();
+  const frozen = isSheetFrozen(job.status, job.heldFrom);
+  const mayEdit = can(user.role, 'sheet.edit');
+  const editable = mayEdit && !frozen;
+  const [saved, draftRow, unit] = await Promise.all([getAsFoundSheet(job.id), editable ? getSheetDraft(job.id, user.id) : null, getLengthUnit(user.id)]);
+  const draft = draftRow ? draftPayloadSchema.safeParse(draftRow.data) : null;
+
+  let initial: SheetEditorProps['initial'];
+  if (draft?.success && draftRow) {
+    initial = { values: restoreDraftValues(draft.data.values), unit: draft.data.unit, slotTable: draft.data.slotTable, source: 'draft', draftSavedAt: draftRow.updatedAt.toISOString() };
+  } else if (saved) {
+    initial = { values: sheetToForm(saved.sheet, unit), unit, slotTable: saved.sheet.winding.slotTable, source: 'saved' };
+  } else {
+    initial = { values: prefillFromNameplate(job.motor), unit, source: 'nameplate' };
+  }
+  const readOnlyReason = frozen
+    ? SHEET_MESSAGES.frozen(STATUS_LABELS[job.status])
+    : !mayEdit ? 'Your role can read this data sheet; winders and engineers record it.' : null;
+  const m = job.motor;
+
+  return (
+    <>
+      <p className="no-print"><Link href={`/jobs/${job.number}`}>← Job {job.number}</Link></p>
+      <h1>As-found data sheet · job {job.number}</h1>
+      <p className="muted">
+        {job.customer.company} · {m.manufacturer} {m.model ?? ''} · S/N {m.serial ?? '—'} · {fmt.power(m.outputKw)} · {fmt.num(m.ratedVoltageV, 0, 'V')} · {fmt.num(m.speedRpm, 0, 'rpm')} ·
+        status {STATUS_LABELS[job.status]} · {saved ? `saved revision ${saved.revision}, ${fmt.dateTime(saved.updatedAt)}` : 'not recorded yet'}
+      </p>
+      {!saved && initial.source === 'nameplate' && editable && <p className="notice small">New sheet: supply and rating are filled in from the nameplate. Check them against the winding you find.</p>}
+      <SheetEditor
+        key={job.id}
+        jobId={job.id}
+        jobNumber={job.number}
+        editable={editable}
+        readOnlyReason={readOnlyReason}
+        savedRevision={saved?.revision ?? null}
+        initial={initial}
+      />
+      <section className="card" aria-labelledby="sheet-photos-h">
+        <h2 id="sheet-photos-h">Photos</h2>
+        {job.attachments.length === 0 ? <p className="muted">No photos yet. Photograph the connections, the lead markings and a coil group before stripping.</p> : (
+          <div className="photos">
+            {job.attachments.map((a) => (
+              <figure key={a.id}>
+                <a href={`/api/attachments/${a.id}`}><img src={`/api/attachments/${a.id}`} alt={`${a.kind.toLowerCase()} photo ${a.filename}`} /></a>
+                <figcaption>{a.kind.toLowerCase()} · {a.filename}</figcaption>
+              </figure>
+            ))}
+          </div>
+        )}
+        {can(user.role, 'job.attach') && <PhotoUpload jobId={job.id} />}
+      </section>
+    </>
+  );
+}
