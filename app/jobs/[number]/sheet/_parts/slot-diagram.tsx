@@ -91,7 +91,8 @@ export function SlotDiagram({ table, caption, id = 'slot-diagram' }: SlotDiagram
   const beltText = belts.map((b) => `${b.label} slots ${((b.first - 1 + S) % S) + 1}–${b.last}`).join('; ');
   return (
     <svg viewBox="-265 -265 530 580" role="img" aria-labelledby={`${id}-title ${id}-desc`} className="slot-diagram" id={id}>
-      <title id={`${id}-title`}>Slot diagram: {S} slots, {table.poles} poles, {caption}</title>
+      {/* One string child: React renders a <title> with several children as empty on the server. */}
+      <title id={`${id}-title`}>{`Slot diagram: ${S} slots, ${table.poles} poles, ${caption}`}</title>
       <desc id={`${id}-desc`}>
         Each slot shows its coil sides by phase and direction (top layer next to the bore{table.layers === 2 ? ', bottom layer outside it' : ''}).
         Phase belts round the top layer: {beltText}. {group.length ? `First A+ group spans: ${group.map(([a, b]) => `${a}–${b}`).join(', ')}.` : ''} The table below lists every slot.
