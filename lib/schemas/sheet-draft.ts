@@ -25,6 +25,9 @@ export const draftPayloadSchema = z.object({
     notes: typed,
   }),
   slotTable: z.array(coilSideSchema).max(2400).optional(),
+  /** The saved revision the draft was started from (null: none was saved), so a save made from a restored
+   * draft is refused as stale when someone saved a newer revision meanwhile. Older drafts lack it. */
+  baseRevision: z.number().int().positive().nullable().optional(),
 });
 export type DraftPayload = z.output<typeof draftPayloadSchema>;
 

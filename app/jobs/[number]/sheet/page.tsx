@@ -36,7 +36,11 @@ export default async function SheetPage({ params }: { params: Promise<{ number: 
 
   let initial: SheetEditorProps['initial'];
   if (draft?.success && draftRow) {
-    initial = { values: restoreDraftValues(draft.data.values), unit: draft.data.unit, slotTable: draft.data.slotTable, source: 'draft', draftSavedAt: draftRow.updatedAt.toISOString() };
+    initial = {
+      values: restoreDraftValues(draft.data.values), unit: draft.data.unit, slotTable: draft.data.slotTable, source: 'draft',
+      draftSavedAt: draftRow.updatedAt.toISOString(),
+      ...(draft.data.baseRevision !== undefined ? { baseRevision: draft.data.baseRevision } : {}),
+    };
   } else if (saved) {
     initial = { values: sheetToForm(saved.sheet, unit), unit, slotTable: saved.sheet.winding.slotTable, source: 'saved' };
   } else {

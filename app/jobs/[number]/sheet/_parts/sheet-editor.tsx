@@ -31,7 +31,15 @@ export interface SheetEditorProps {
   readOnlyReason: string | null;
   /** The saved revision on the server now (null: none saved). */
   savedRevision: number | null;
-  initial: { values: SheetFormValues; unit: LengthUnit; slotTable?: CoilSide[]; source: 'draft' | 'saved' | 'nameplate'; draftSavedAt?: string };
+  initial: {
+    values: SheetFormValues;
+    unit: LengthUnit;
+    slotTable?: CoilSide[];
+    source: 'draft' | 'saved' | 'nameplate';
+    draftSavedAt?: string;
+    /** For a restored draft: the revision it was started from (see the draft schema). */
+    baseRevision?: number | null;
+  };
 }
 
 const ANALYSIS_DELAY_MS = 250;
@@ -44,7 +52,9 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   const [slotTable, setSlotTable] = useState<CoilSide[] | undefined>(initial.slotTable);
   const slotRef = useRef(slotTable);
   slotRef.current = slotTable;
-  const [baseRevision, setBaseRevision] = useState<number | null>(savedRevision);
+  const [baseRevision, setBaseRevision] = useState<number | null>(initial.baseRevision !== undefined ? initial.baseRevision : savedRevision);
+  const baseRef = useRef(baseRevision);
+  baseRef.current = baseRevision;
   const [conflict, setConflict] = useState(false);
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(
     initial.source === 'draft' ? { tone: 'warn', text: `Restored your unsaved draft from ${new Date(initial.draftSavedAt ?? Date.now()).toLocaleString()}. Save the sheet to keep it, or discard the draft.` } : null,
@@ -56,7 +66,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   const form = useForm<SheetFormValues, unknown, WindingSheet>({ resolver, defaultValues: initial.values, mode: 'onSubmit' });
   const { handleSubmit, setError, watch, getValues, setValue, reset } = form;
 
-  const autosave = useDraftAutosave(jobId, editable, () => ({ unit: unitRef.current, values: getValues(), ...(slotRef.current ? { slotTable: slotRef.current } : {}) }));
+  const autosave = useDraftAutosave(jobId, editable, () => ({ unit: unitRef.current, values: getValues(), baseRevision: baseRef.current, ...(slotRef.current ? { slotTable: slotRef.current } : {}) }));
   const [live, setLive] = useState<LiveAnalysis>(() => liveAnalysis(initial.values, initial.unit, initial.slotTable));
   const analysisTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const reanalyse = useCallback(() => {
