@@ -1,26 +1,17 @@
 import { readFileSync, writeFileSync, mkdtempSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { startApp, type AppServer } from '../support/app-server';
-import { openBrowser, signIn } from '../support/browser';
+import { useAppInBrowser } from '../support/e2e-session';
+import { signIn } from '../support/browser';
 import { FRONT_DESK, WINDER } from '../support/demo-users';
 
-let app: AppServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 const dir = mkdtempSync(join(tmpdir(), 'cw-sheet-e2e-'));
 /** Job 1005 is a demo job in inspection (no sheet yet): 5.5 kW, 400 V, 50 Hz, 960 rpm → 6 poles. */
 const JOB = 1005;
 
-beforeAll(async () => {
-  app = await startApp();
-  browser = await openBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
+const e2e = useAppInBrowser();
 
 const field = (page: Page, name: string) => page.getByLabel(name, { exact: true });
 
@@ -35,9 +26,9 @@ describe('a winder records an as-found sheet', () => {
   let exported = '';
 
   it('records a concentric winding with two wire sizes, sees the analysis and the inconsistency, and saves', async () => {
-    const page = await browser.context.newPage();
-    await signIn(page, app.baseUrl, WINDER.email, WINDER.password);
-    await page.goto(`${app.baseUrl}/jobs/${JOB}`);
+    const page = await e2e.browser.context.newPage();
+    await signIn(page, e2e.app.baseUrl, WINDER.email, WINDER.password);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}`);
     await page.getByRole('link', { name: 'As-found data sheet' }).click();
     await page.waitForURL(/\/sheet$/);
     // A new sheet starts from the nameplate: poles from 960 rpm at 50 Hz (reference §6: 6 poles).
@@ -83,8 +74,8 @@ describe('a winder records an as-found sheet', () => {
   });
 
   it('prints the saved sheet on a bench-ready page', async () => {
-    const page = await browser.context.newPage();
-    await page.goto(`${app.baseUrl}/jobs/${JOB}/sheet`);
+    const page = await e2e.browser.context.newPage();
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/sheet`);
     await page.getByRole('link', { name: 'Print view' }).click();
     await page.waitForURL(/\/sheet\/print$/);
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toContain(`job ${JOB}`);
@@ -96,8 +87,8 @@ describe('a winder records an as-found sheet', () => {
   });
 
   it('exports the sheet as JSON and imports it back to the same sheet', async () => {
-    const page = await browser.context.newPage();
-    await page.goto(`${app.baseUrl}/jobs/${JOB}/sheet`);
+    const page = await e2e.browser.context.newPage();
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/sheet`);
     exported = await download(page, 'Export JSON');
     const file = JSON.parse(exported) as { format: string; version: number; sheet: { winding: { spans: number[] } } };
     expect(file).toMatchObject({ format: 'coilwright.winding-sheet', version: 1 });
@@ -126,8 +117,8 @@ describe('a winder records an as-found sheet', () => {
   });
 
   it('keeps an unsaved change as a draft across a reload, in inches when the winder prefers them', async () => {
-    const page = await browser.context.newPage();
-    await page.goto(`${app.baseUrl}/jobs/${JOB}/sheet`);
+    const page = await e2e.browser.context.newPage();
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/sheet`);
     await page.getByLabel('inches').check();
     // 130 mm = 5.1181 in (1 in = 25.4 mm exactly).
     await expect.poll(() => field(page, 'Bore (in)').inputValue()).toBe('5.1181');
@@ -144,10 +135,10 @@ describe('a winder records an as-found sheet', () => {
   });
 
   it('shows the front desk the sheet read-only', async () => {
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
-    await signIn(page, app.baseUrl, FRONT_DESK.email, FRONT_DESK.password);
-    await page.goto(`${app.baseUrl}/jobs/${JOB}/sheet`);
+    await e2e.browser.context.clearCookies();
+    const page = await e2e.browser.context.newPage();
+    await signIn(page, e2e.app.baseUrl, FRONT_DESK.email, FRONT_DESK.password);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/sheet`);
     expect(await field(page, 'Bore (mm)').isDisabled()).toBe(true);
     expect(await page.getByRole('button', { name: 'Save data sheet' }).count()).toBe(0);
     expect(await page.getByText('Your role can read this data sheet').count()).toBe(1);

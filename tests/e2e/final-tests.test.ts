@@ -1,34 +1,25 @@
 import { readFileSync } from 'node:fs';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { startApp, type AppServer } from '../support/app-server';
-import { openBrowser, signIn } from '../support/browser';
+import { useAppInBrowser } from '../support/e2e-session';
+import { signIn } from '../support/browser';
 import { FRONT_DESK, WINDER } from '../support/demo-users';
 import { pdfText } from '../support/pdf-text';
 
-let app: AppServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 let jobNumber = '';
 
-beforeAll(async () => {
-  app = await startApp();
-  browser = await openBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
+const e2e = useAppInBrowser();
 
 const text = async (page: Page, testId: string) => (await page.getByTestId(testId).textContent()) ?? '';
 
 describe('a winder records the final tests', () => {
   it('sees the test hazards, gets field errors first, watches verdicts change while typing, and saves', async () => {
-    const page = await browser.context.newPage();
-    await signIn(page, app.baseUrl, WINDER.email, WINDER.password);
-    await page.goto(`${app.baseUrl}/jobs?status=TESTING`);
+    const page = await e2e.browser.context.newPage();
+    await signIn(page, e2e.app.baseUrl, WINDER.email, WINDER.password);
+    await page.goto(`${e2e.app.baseUrl}/jobs?status=TESTING`);
     jobNumber = (await page.getByRole('link', { name: /^\d+$/ }).first().textContent()) ?? '';
     expect(jobNumber).toMatch(/^\d+$/);
-    await page.goto(`${app.baseUrl}/jobs/${jobNumber}`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${jobNumber}`);
     await page.getByRole('link', { name: 'Final tests', exact: true }).click();
     await page.waitForURL(/\/tests$/);
     expect(await page.getByRole('heading', { name: '⚠ Test hazards' }).count()).toBe(1);
@@ -86,14 +77,14 @@ describe('a winder records the final tests', () => {
 
 describe('the front desk', () => {
   it('cannot record tests, downloads the job sheet PDF from the job page and opens the print view', async () => {
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
-    await signIn(page, app.baseUrl, FRONT_DESK.email, FRONT_DESK.password);
-    await page.goto(`${app.baseUrl}/jobs/${jobNumber}/tests`);
+    await e2e.browser.context.clearCookies();
+    const page = await e2e.browser.context.newPage();
+    await signIn(page, e2e.app.baseUrl, FRONT_DESK.email, FRONT_DESK.password);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${jobNumber}/tests`);
     expect(await text(page, 'overall')).toContain('✓ PASS');
     expect(await page.getByRole('button', { name: 'Save test record' }).count()).toBe(0);
 
-    await page.goto(`${app.baseUrl}/jobs/${jobNumber}`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${jobNumber}`);
     const [download] = await Promise.all([
       page.waitForEvent('download'),
       page.getByRole('link', { name: 'Download job sheet (PDF)' }).click(),

@@ -1,23 +1,14 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { startApp, type AppServer } from '../support/app-server';
-import { openBrowser, signIn } from '../support/browser';
+import { useAppInBrowser } from '../support/e2e-session';
+import { signIn } from '../support/browser';
 import { FRONT_DESK, WINDER } from '../support/demo-users';
 
-let app: AppServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 
-beforeAll(async () => {
-  app = await startApp();
-  browser = await openBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
+const e2e = useAppInBrowser();
 
 async function newPage(): Promise<Page> {
-  return browser.context.newPage();
+  return e2e.browser.context.newPage();
 }
 
 describe('the front desk', () => {
@@ -25,7 +16,7 @@ describe('the front desk', () => {
 
   it('signs in, logs a motor with field errors first, and lands on the new job', async () => {
     const page = await newPage();
-    await signIn(page, app.baseUrl, FRONT_DESK.email, FRONT_DESK.password);
+    await signIn(page, e2e.app.baseUrl, FRONT_DESK.email, FRONT_DESK.password);
     await page.getByRole('link', { name: 'New intake', exact: true }).click();
     await page.getByLabel('New customer').check();
     await page.getByLabel('Company *').fill('Glenharrow Pumping Station');
@@ -50,7 +41,7 @@ describe('the front desk', () => {
 
   it('finds the motor on the board by serial and moves its status', async () => {
     const page = await newPage();
-    await page.goto(`${app.baseUrl}/jobs`);
+    await page.goto(`${e2e.app.baseUrl}/jobs`);
     await page.getByLabel('Search').fill('E2E-4471');
     await page.getByRole('button', { name: 'Apply' }).click();
     await page.waitForURL(/q=E2E-4471/);
@@ -86,11 +77,11 @@ describe('the front desk', () => {
 
 describe('a winder', () => {
   it('cannot open the intake screen and is not offered front-desk moves', async () => {
-    await browser.context.clearCookies();
+    await e2e.browser.context.clearCookies();
     const page = await newPage();
-    await signIn(page, app.baseUrl, WINDER.email, WINDER.password);
+    await signIn(page, e2e.app.baseUrl, WINDER.email, WINDER.password);
     expect(await page.getByRole('link', { name: /new intake/i }).count()).toBe(0);
-    await page.goto(`${app.baseUrl}/jobs/new`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/new`);
     await page.waitForURL(/\/denied/);
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toContain('Not allowed');
     await page.close();

@@ -1,7 +1,7 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { startApp, type AppServer } from '../support/app-server';
-import { openBrowser, signIn } from '../support/browser';
+import { useAppInBrowser } from '../support/e2e-session';
+import { signIn } from '../support/browser';
 import { ENGINEER, WINDER } from '../support/demo-users';
 
 /** Demo job 1014: 55 kW, 400 V 50 Hz, 4 poles, delta, with an invented as-found sheet. */
@@ -9,31 +9,22 @@ const JOB = 1014;
 /** Set E2E_SCREENSHOTS=/some/dir to keep full-page screenshots of each step. */
 const SHOTS = process.env.E2E_SCREENSHOTS;
 
-let app: AppServer;
-let browser: Awaited<ReturnType<typeof openBrowser>>;
 
-beforeAll(async () => {
-  app = await startApp();
-  browser = await openBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await app?.stop();
-});
+const e2e = useAppInBrowser();
 
 async function shot(page: Page, name: string): Promise<void> {
   if (SHOTS) await page.screenshot({ path: `${SHOTS}/${name}.png`, fullPage: true });
 }
 
 async function asEngineer(): Promise<Page> {
-  await browser.context.clearCookies();
-  const page = await browser.context.newPage();
-  await signIn(page, app.baseUrl, ENGINEER.email, ENGINEER.password);
+  await e2e.browser.context.clearCookies();
+  const page = await e2e.browser.context.newPage();
+  await signIn(page, e2e.app.baseUrl, ENGINEER.email, ENGINEER.password);
   return page;
 }
 
 async function request(page: Page, volts: string, hz: string, connection: 'star' | 'delta' | 'either', revision: number): Promise<void> {
-  await page.goto(`${app.baseUrl}/jobs/${JOB}/redesign`);
+  await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/redesign`);
   await page.getByLabel(/^Line voltage/).fill(volts);
   await page.getByLabel(/^Frequency/).fill(hz);
   await page.getByLabel('Connection', { exact: true }).selectOption(connection);
@@ -64,10 +55,10 @@ describe('the engineer’s redesign', () => {
   });
 
   it('a winder who tries to approve is refused with a clear message', async () => {
-    await browser.context.clearCookies();
-    const page = await browser.context.newPage();
-    await signIn(page, app.baseUrl, WINDER.email, WINDER.password);
-    await page.goto(`${app.baseUrl}/jobs/${JOB}/redesign?rev=1`);
+    await e2e.browser.context.clearCookies();
+    const page = await e2e.browser.context.newPage();
+    await signIn(page, e2e.app.baseUrl, WINDER.email, WINDER.password);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/redesign?rev=1`);
     expect(await page.getByText('Only an engineer can approve a redesign.').count()).toBe(1);
     // The winder cannot choose candidates either: no choose buttons.
     expect(await page.getByRole('button', { name: /^Choose candidate/ }).count()).toBe(0);
@@ -81,7 +72,7 @@ describe('the engineer’s redesign', () => {
 
   it('the engineer approves; the winding is frozen, printable, and the job page names the current revision', async () => {
     const page = await asEngineer();
-    await page.goto(`${app.baseUrl}/jobs/${JOB}/redesign?rev=1`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/redesign?rev=1`);
     await page.getByRole('button', { name: 'Approve revision 1' }).click();
     // An empty note is refused beside the field, nothing approved.
     await expect.poll(() => page.locator('#approval-note-error').textContent()).toMatch(/approval note/);
@@ -94,7 +85,7 @@ describe('the engineer’s redesign', () => {
     expect(await page.getByRole('heading', { name: 'Wind this' }).count()).toBe(1);
     expect(await page.getByText('Current approved revision.').count()).toBe(1);
     await shot(page, '4-print');
-    await page.goto(`${app.baseUrl}/jobs/${JOB}`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}`);
     expect(await page.getByRole('navigation', { name: 'Workshop records' }).textContent()).toContain('current: revision 1, approved');
     await page.close();
   });
@@ -106,8 +97,8 @@ describe('the engineer’s redesign', () => {
     const first = await page.getByRole('table', { name: 'Candidate windings' }).locator('tbody tr').first().textContent();
     expect(first).toMatch(/connection delta → star/);
     await chooseFirst(page);
-    const other = await browser.context.newPage();
-    await other.goto(`${app.baseUrl}/jobs/${JOB}/redesign?rev=2`);
+    const other = await e2e.browser.context.newPage();
+    await other.goto(`${e2e.app.baseUrl}/jobs/${JOB}/redesign?rev=2`);
     await page.getByLabel('Approval note *').fill('Reconnection only; insulation checked for 690 V.');
     await page.getByRole('button', { name: 'Approve revision 2' }).click();
     await expect.poll(() => page.getByRole('heading', { name: 'Revision 2: approved and frozen' }).count(), { timeout: 30_000 }).toBe(1);
