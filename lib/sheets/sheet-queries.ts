@@ -36,14 +36,25 @@ export async function getLengthUnit(userId: string): Promise<'mm' | 'in'> {
   return pref?.lengthUnit === 'in' ? 'in' : 'mm';
 }
 
-/** Saved revisions of a sheet, newest first (without their data). */
+/** Saved revisions of a sheet, newest first (without their data), with the name of who saved each. */
 export async function listSheetRevisions(sheetId: string) {
-  return db().windingSheetRevision.findMany({
+  const rows = await db().windingSheetRevision.findMany({
     where: { sheetId },
     orderBy: { revision: 'desc' },
     select: { revision: true, savedAt: true, savedById: true },
     take: 50,
   });
+  const ids = [...new Set(rows.map((r) => r.savedById).filter((id): id is string => id !== null))];
+  const names = new Map((await db().user.findMany({ where: { id: { in: ids } }, select: { id: true, name: true } })).map((u) => [u.id, u.name]));
+  return rows.map((r) => ({ ...r, savedBy: r.savedById ? (names.get(r.savedById) ?? 'a removed user') : 'unknown' }));
+}
+
+/** One earlier revision of a job's sheet, parsed with the sheet schema; null when there is no such revision. */
+export async function getSheetRevision(jobId: string, revision: number): Promise<WindingSheet | null> {
+  const row = await db().windingSheetRevision.findFirst({ where: { revision, sheet: { jobId } }, select: { data: true } });
+  if (!row) return null;
+  const parsed = windingSheetSchema.safeParse(row.data);
+  return parsed.success ? parsed.data : null;
 }
 
 /** What the sheet screens need of a job: status, customer, nameplate, photos. */

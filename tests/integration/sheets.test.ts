@@ -5,7 +5,7 @@ import type { JobStatus } from '@/lib/db/generated/enums';
 import type { WindingSheet } from '@/lib/schemas/winding-sheet';
 import { MAX_DRAFT_BYTES } from '@/lib/schemas/sheet-draft';
 import { chooseLengthUnit, discardSheetDraft, saveAsFoundSheet, saveSheetDraft, copyLibrarySheetToJob } from '@/lib/sheets/sheet-actions';
-import { getAsFoundSheet, getLengthUnit, getSheetDraft, listSheetRevisions } from '@/lib/sheets/sheet-queries';
+import { getAsFoundSheet, getLengthUnit, getSheetDraft, getSheetRevision, listSheetRevisions } from '@/lib/sheets/sheet-queries';
 import { searchLibrary } from '@/lib/sheets/library-queries';
 import { SHEET_MESSAGES } from '@/lib/sheets/sheet-messages';
 import { emptySheetForm, sheetToForm } from '@/lib/sheets/sheet-form';
@@ -55,7 +55,13 @@ describe('saving the as-found sheet', () => {
     expect(r).toMatchObject({ ok: true, data: { revision: 2 } });
     const stored = await getAsFoundSheet(job.id);
     expect(stored).toMatchObject({ revision: 2, sheet: { notes: 'Leads re-marked.' } });
-    expect((await listSheetRevisions(stored!.id)).map((x) => x.revision)).toEqual([2, 1]);
+    const history = await listSheetRevisions(stored!.id);
+    expect(history.map((x) => x.revision)).toEqual([2, 1]);
+    expect(history.every((x) => x.savedBy === WINDER.name)).toBe(true);
+    // The earlier revision is kept whole: revision 1 has no notes, revision 2 has them.
+    expect((await getSheetRevision(job.id, 1))?.notes).toBeUndefined();
+    expect((await getSheetRevision(job.id, 2))?.notes).toBe('Leads re-marked.');
+    expect(await getSheetRevision(job.id, 3)).toBeNull();
     const last = await db().jobEvent.findFirstOrThrow({ where: { jobId: job.id, kind: 'SHEET' }, orderBy: { at: 'desc' } });
     expect(last.message).toBe('As-found data sheet revised (revision 2): notes changed.');
   });

@@ -9,7 +9,7 @@ import { restoreDraftValues } from '@/lib/sheets/draft-values';
 import { prefillFromNameplate } from '@/lib/sheets/prefill';
 import { sheetToForm } from '@/lib/sheets/sheet-form';
 import { SHEET_MESSAGES } from '@/lib/sheets/sheet-messages';
-import { getAsFoundSheet, getJobForSheet, getLengthUnit, getSheetDraft } from '@/lib/sheets/sheet-queries';
+import { getAsFoundSheet, getJobForSheet, getLengthUnit, getSheetDraft, listSheetRevisions } from '@/lib/sheets/sheet-queries';
 import { isSheetFrozen } from '@/lib/sheets/sheet-writes';
 import { fmt } from '@/lib/format';
 import { PhotoUpload } from '../photo-upload';
@@ -33,6 +33,7 @@ export default async function SheetPage({ params }: { params: Promise<{ number: 
   const editable = mayEdit && !frozen;
   const [saved, draftRow, unit] = await Promise.all([getAsFoundSheet(job.id), editable ? getSheetDraft(job.id, user.id) : null, getLengthUnit(user.id)]);
   const draft = draftRow ? draftPayloadSchema.safeParse(draftRow.data) : null;
+  const revisions = saved ? await listSheetRevisions(saved.id) : [];
 
   let initial: SheetEditorProps['initial'];
   if (draft?.success && draftRow) {
@@ -69,6 +70,24 @@ export default async function SheetPage({ params }: { params: Promise<{ number: 
         savedRevision={saved?.revision ?? null}
         initial={initial}
       />
+      {revisions.length > 0 && (
+        <section className="card no-print" aria-labelledby="sheet-history-h">
+          <h2 id="sheet-history-h">Revision history</h2>
+          <table>
+            <thead><tr><th scope="col">Revision</th><th scope="col">Saved</th><th scope="col">By</th><th scope="col">Download</th></tr></thead>
+            <tbody>
+              {revisions.map((r) => (
+                <tr key={r.revision}>
+                  <td>{r.revision}{r.revision === saved?.revision ? ' (current)' : ''}</td>
+                  <td>{fmt.dateTime(r.savedAt)}</td>
+                  <td>{r.savedBy}</td>
+                  <td><a href={`/jobs/${job.number}/sheet/export?rev=${r.revision}`}>JSON of revision {r.revision}</a></td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </section>
+      )}
       <section className="card" aria-labelledby="sheet-photos-h">
         <h2 id="sheet-photos-h">Photos</h2>
         {job.attachments.length === 0 ? <p className="muted">No photos yet. Photograph the connections, the lead markings and a coil group before stripping.</p> : (
