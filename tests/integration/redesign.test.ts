@@ -2,6 +2,8 @@ import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { db } from '@/lib/db/client';
 import { DEFAULT_REDESIGN_LIMITS } from '@/lib/engine/redesign/from-sheet';
 import { getApprovedRedesignSummary } from '@/lib/job-sheet/redesign-summary';
+import { expectedResistanceFor } from '@/lib/tests-domain/expected-resistance-source';
+import { getAsFoundSheet } from '@/lib/sheets/sheet-queries';
 import { approveRedesignRevision, chooseCandidate, submitRedesignRequest } from '@/lib/redesign/redesign-actions';
 import { loadRedesignContext, runSearch } from '@/lib/redesign/redesign-context';
 import { getApprovedRedesign, listRedesigns } from '@/lib/redesign/redesign-queries';
@@ -132,6 +134,17 @@ describe('redesign request, choice and approval', () => {
     expect(summary?.changes.length).toBeGreaterThan(0);
     expect(summary?.changes.every((c) => c.original !== c.redesigned)).toBe(true);
     expect(summary?.proposedNameplate).toEqual(expect.arrayContaining([{ label: 'Voltage, connection', value: '460 V, star (Y)' }]));
+  });
+
+  it('final resistance is then compared with the redesign’s prediction, and elsewhere with the as-found one', async () => {
+    const approved = await getApprovedRedesign(jobId);
+    const expected = await expectedResistanceFor(jobId, await getAsFoundSheet(jobId));
+    expect(expected?.source).toBe('approved redesign, revision 1');
+    expect(expected?.phaseOhm20).toBe(approved?.snapshot.report.rows.find((r) => r.key === 'resistance')?.values.candidate);
+    const other = await db().job.findFirstOrThrow({ where: { status: 'TESTING', id: { not: jobId } } });
+    const asFound = await expectedResistanceFor(other.id, await getAsFoundSheet(other.id));
+    expect(asFound?.source).toMatch(/^as-found data sheet, revision \d+$/);
+    expect(asFound?.phaseOhm20).toBeGreaterThan(0);
   });
 
   it('refuses to change the approved revision through the actions', async () => {

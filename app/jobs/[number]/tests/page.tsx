@@ -11,6 +11,8 @@ import { TEST_HAZARD_CAUTIONS } from '@/lib/job-sheet/safety-notices';
 import { listTestRecords } from '@/lib/tests-domain/test-record-queries';
 import { basisDefaults, newRecordDefaults, recordToFormData } from '@/lib/tests-domain/test-defaults';
 import { judgeTestRecord } from '@/lib/tests-domain/test-verdicts';
+import { compareFinalResistance, RESISTANCE_CHECK_PERCENT, type ExpectedResistance } from '@/lib/tests-domain/expected-resistance';
+import { expectedResistanceFor } from '@/lib/tests-domain/expected-resistance-source';
 import { fmt } from '@/lib/format';
 import type { TestRecordFormInput } from '@/lib/schemas/test-record';
 import { OverallVerdict, SectionVerdict } from './judgement-view';
@@ -38,6 +40,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
   if (!job) notFound();
   const [records, sheet, staff] = await Promise.all([listTestRecords(job.id), getAsFoundSheet(job.id), listStaff()]);
   const current = records[0] ?? null;
+  const expected = await expectedResistanceFor(job.id, sheet);
   const motor = { ratedVoltageV: job.motor.ratedVoltageV, insulationClass: job.motor.insulationClass, outputKw: job.motor.outputKw, frequencyHz: job.motor.frequencyHz };
   const { sources } = basisDefaults(motor, sheet?.sheet ?? null);
   const closed = CLOSED_STATUSES.includes(job.status);
@@ -77,6 +80,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
               Tested {fmt.dateTime(current.testedAt)} by {current.testedBy?.name ?? '—'} · instruments {current.instrumentSerials.join(', ') || '—'} · version {current.version}
             </p>
             <CurrentJudgement data={current.data} />
+            <ResistanceAgainstPrediction expected={expected} data={current.data} />
             <RecordReadings data={current.data} />
           </>
         )}
@@ -120,5 +124,20 @@ function CurrentJudgement({ data }: { data: Parameters<typeof judgeTestRecord>[0
       <OverallVerdict judgement={j} />
       {j.sections.map((s) => <SectionVerdict key={s.key} section={s} id={`saved-${s.key}`} />)}
     </>
+  );
+}
+
+/** The final resistance beside the prediction from the winding data (information, not a verdict). */
+function ResistanceAgainstPrediction({ expected, data }: { expected: ExpectedResistance | null; data: Parameters<typeof judgeTestRecord>[0] }) {
+  if (!expected) return null;
+  const c = compareFinalResistance(expected, data.resistance);
+  if (!c) return null;
+  const off = Math.abs(c.differencePercent) > RESISTANCE_CHECK_PERCENT;
+  return (
+    <p className={`notice ${off ? 'warn' : 'ok'}`} data-testid="resistance-vs-prediction">
+      {off ? '⚠ ' : ''}Winding resistance against the prediction from the {expected.source}: expected {fmt.num(c.expectedOhm, 4, 'Ω')} {c.between} at{' '}
+      {fmt.num(c.temperatureC, 1, '°C')}, measured average {fmt.num(c.finalAverageOhm, 4, 'Ω')} ({c.differencePercent >= 0 ? '+' : ''}{c.differencePercent.toFixed(1)} %).
+      {off ? ` More than ${RESISTANCE_CHECK_PERCENT} % apart: check the turns, connections and wire size against the data before the motor leaves.` : ''}
+    </p>
   );
 }
