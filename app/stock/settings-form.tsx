@@ -7,7 +7,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { shopSettingsSchema, type LimitsForm, type ShopSettingsInput } from '@/lib/schemas/redesign';
 import { saveShopSettings } from '@/lib/settings/settings-actions';
-import { applyFieldErrors } from '@/lib/errors/form-errors';
+import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { InputField } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
 
@@ -44,7 +44,7 @@ export function SettingsForm({ version, defaults, starting }: { version: number;
           if (r.code === 'stale') router.refresh();
         }
       }),
-    () => setSummary({ tone: 'bad', text: 'Some fields need attention. Each one is marked below.' }),
+    () => setSummary({ tone: 'bad', text: FIX_FIELDS_SUMMARY }),
   );
   const e = errors.limits as Record<string, { message?: string } | undefined> | undefined;
   return (

@@ -6,7 +6,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { wireStockSchema, type WireStockEntry, type WireStockInput } from '@/lib/schemas/wire-stock';
 import { addStockWire, deleteStockWire } from '@/lib/stock/stock-actions';
-import { applyFieldErrors } from '@/lib/errors/form-errors';
+import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
 
@@ -32,7 +32,7 @@ export function AddStockForm() {
           setSummary({ tone: 'bad', text: r.message });
         }
       }),
-    () => setSummary({ tone: 'bad', text: 'Some fields need attention. Each one is marked below.' }),
+    () => setSummary({ tone: 'bad', text: FIX_FIELDS_SUMMARY }),
   );
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Add a wire size" className="no-print" style={{ marginBottom: '1rem' }}>

@@ -7,7 +7,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { jobEditSchema, PRIORITIES, type JobEditInput } from '@/lib/schemas/job';
 import { saveJobDetails } from '@/lib/jobs/job-actions';
-import { applyFieldErrors } from '@/lib/errors/form-errors';
+import { FIX_FIELDS_SUMMARY, showActionFailure } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
 
@@ -48,15 +48,10 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
           setSummary({ tone: 'ok', text: result.message ?? 'Saved.' });
           router.refresh();
         } else {
-          if (result.code === 'stale') {
-            setConflict(true);
-            router.refresh();
-          }
-          applyFieldErrors(result.fieldErrors, setError);
-          setSummary({ tone: 'bad', text: result.message });
+          showActionFailure(result, { setError, setSummary, onStale: () => { setConflict(true); router.refresh(); } });
         }
       }),
-    () => setSummary({ tone: 'bad', text: 'Some fields need attention. Each one is marked below.' }),
+    () => setSummary({ tone: 'bad', text: FIX_FIELDS_SUMMARY }),
   );
 
   return (

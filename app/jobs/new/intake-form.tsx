@@ -6,7 +6,7 @@ import { useForm, type FieldErrors, type UseFormRegister } from 'react-hook-form
 import { zodResolver } from '@hookform/resolvers/zod';
 import { intakeSchema, PRIORITIES, type Intake, type IntakeInput } from '@/lib/schemas/job';
 import { lookupSerial, submitIntake } from '@/lib/jobs/job-actions';
-import { applyFieldErrors } from '@/lib/errors/form-errors';
+import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
 import { NameplateFields } from '@/app/_components/nameplate-fields';
@@ -51,7 +51,7 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
           setSummary({ tone: 'bad', text: result.message });
         }
       }),
-    () => setSummary({ tone: 'bad', text: 'Some fields need attention. Each one is marked below.' }),
+    () => setSummary({ tone: 'bad', text: FIX_FIELDS_SUMMARY }),
   );
 
   async function checkSerial() {

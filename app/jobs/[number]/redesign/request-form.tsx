@@ -6,7 +6,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { redesignRequestFormSchema, type RedesignRequestForm, type RedesignRequestFormInput } from '@/lib/schemas/redesign';
 import { submitRedesignRequest } from '@/lib/redesign/redesign-actions';
-import { applyFieldErrors } from '@/lib/errors/form-errors';
+import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
 
@@ -60,7 +60,7 @@ export function RequestForm({ defaults, submitLabel, intro }: { defaults: Redesi
           if (result.code === 'stale') router.refresh();
         }
       }),
-    () => setSummary({ tone: 'bad', text: 'Some fields need attention. Each one is marked below.' }),
+    () => setSummary({ tone: 'bad', text: FIX_FIELDS_SUMMARY }),
   );
 
   return (

@@ -22,7 +22,7 @@ import { liveJudgement } from '@/lib/tests-domain/live-judgement';
 import { ohmText, percentText, megohmText } from '@/lib/tests-domain/test-display';
 import type { BasisSources } from '@/lib/tests-domain/test-defaults';
 import type { SectionKey, TestJudgement } from '@/lib/tests-domain/test-verdicts';
-import { applyFieldErrors } from '@/lib/errors/form-errors';
+import { FIX_FIELDS_SUMMARY, showActionFailure } from '@/lib/errors/form-errors';
 import { FormStatus } from '@/app/_components/form-status';
 import { Field, describe } from '@/app/_components/field';
 import { NumberField, SelectField, TextField, idOf, useFieldError } from './test-fields';
@@ -99,15 +99,10 @@ export function TestsForm(props: {
           setSummary({ tone: result.data.verdict === 'FAIL' ? 'warn' : 'ok', text: result.message ?? 'Saved.' });
           router.refresh();
         } else {
-          if (result.code === 'stale') {
-            setConflict(true);
-            router.refresh();
-          }
-          applyFieldErrors(result.fieldErrors, setError);
-          setSummary({ tone: 'bad', text: result.message });
+          showActionFailure(result, { setError, setSummary, onStale: () => { setConflict(true); router.refresh(); } });
         }
       }),
-    () => setSummary({ tone: 'bad', text: 'Some fields need attention. Each one is marked below.' }),
+    () => setSummary({ tone: 'bad', text: FIX_FIELDS_SUMMARY }),
   );
 
   const retryOnCurrent = () => {
