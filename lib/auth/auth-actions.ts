@@ -7,6 +7,7 @@ import { db } from '@/lib/db/client';
 import { verifyPassword } from './password';
 import { SESSION_COOKIE, createSession, deleteSession } from './session-store';
 import { SIGN_IN_FAILED } from './messages';
+import { clearFailedSignIns, heldUntil, recordFailedSignIn, signInHeldMessage } from './sign-in-throttle';
 
 const signInSchema = z.object({
   email: z.string().trim().toLowerCase().email('Enter your email address.'),
@@ -21,7 +22,7 @@ export interface SignInState {
 }
 
 // A fixed hash to compare against when the email is unknown, so both cases take the same time.
-const DUMMY_HASH = '$2b$11$C6UzMDM.H6dfI/f/IKcEeO5l2A6c7cT3B0vYbE2F8Qv4G5x1nZ9xS';
+const DUMMY_HASH = '$2b$11$ZDezhSfYMwaTGGae8CZ1heOLylYlRuIar2WWRtz8q9qZB0sxirsoy';
 
 export async function signIn(_prev: SignInState, form: FormData): Promise<SignInState> {
   const parsed = signInSchema.safeParse(Object.fromEntries(form));
@@ -31,8 +32,12 @@ export async function signIn(_prev: SignInState, form: FormData): Promise<SignIn
     return { email, fieldErrors: { email: fe.email?.[0], password: fe.password?.[0] } };
   }
   const user = await db().user.findUnique({ where: { email: parsed.data.email } });
+  const held = user ? heldUntil(user) : null;
+  if (held) return { email, message: signInHeldMessage(held) };
   const good = await verifyPassword(parsed.data.password, user?.passwordHash ?? DUMMY_HASH);
+  if (user && !good) await recordFailedSignIn(user.id);
   if (!user || !good || !user.active) return { email, message: SIGN_IN_FAILED };
+  await clearFailedSignIns(user.id);
   const { token, expiresAt } = await createSession(user.id);
   const jar = await cookies();
   jar.set(SESSION_COOKIE, token, {

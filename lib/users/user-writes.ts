@@ -28,7 +28,12 @@ export async function updateUser(actorId: string, input: z.output<typeof userUpd
   await db().$transaction(async (tx) => {
     const updated = await tx.user.updateMany({
       where: { id: input.userId },
-      data: { role: input.role, active: input.active, ...(input.newPassword ? { passwordHash: await hashPassword(input.newPassword) } : {}) },
+      data: {
+        role: input.role,
+        active: input.active,
+        // A new password also lifts a sign-in hold (lib/auth/sign-in-throttle.ts).
+        ...(input.newPassword ? { passwordHash: await hashPassword(input.newPassword), failedSignIns: 0, signInHeldUntil: null } : {}),
+      },
     });
     if (updated.count === 0) throw new DomainError('not-found', MESSAGES.notFound('person'));
     // A deactivated person or a new password ends every open session of that person.
