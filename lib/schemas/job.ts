@@ -45,6 +45,11 @@ export const statusMoveSchema = z.object({
   note: optionalText(500),
 });
 
+/** A shop job number as it appears in a URL (`/jobs/[number]/…`). */
+export const jobNumberSchema = z.coerce.number().int().positive().max(2_000_000_000);
+/** The `[number]` route segment of every job screen and download. */
+export const jobNumberParamsSchema = z.object({ number: jobNumberSchema });
+
 export const BOARD_SORTS = ['number', 'promisedAt', 'receivedAt', 'status', 'customer', 'priority'] as const;
 export const DUE_FILTERS = ['any', 'overdue', 'today', 'week'] as const;
 export const PAGE_SIZE = 25;

@@ -4,6 +4,7 @@
  * tolerance in the same unit; output and voltage match within a percentage.
  */
 import { z } from 'zod';
+import { jobNumberSchema } from './job';
 
 const optNum = (max: number, int = false) =>
   z.preprocess(
@@ -23,7 +24,7 @@ export const libraryQuerySchema = z.object({
   volts: optNum(15_000),
   voltsTolPct: optNum(100),
   q: z.string().trim().max(80).optional().catch(undefined),
-  forJob: z.coerce.number().int().positive().max(2_000_000_000).optional().catch(undefined),
+  forJob: jobNumberSchema.optional().catch(undefined),
   /** Up to 3 sheet ids to show side by side (extra ones are dropped). */
   compare: z
     .preprocess((v) => (Array.isArray(v) ? v : typeof v === 'string' && v ? v.split(',') : []).slice(0, 3), z.array(z.uuid()))

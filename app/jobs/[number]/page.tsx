@@ -1,6 +1,5 @@
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { z } from 'zod';
 import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { getJobByNumber, listStaff, motorHistory } from '@/lib/jobs/job-queries';
@@ -12,8 +11,8 @@ import { getApprovedRedesign } from '@/lib/redesign/redesign-queries';
 import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
 import { PhotoUpload } from './photo-upload';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
-const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
   return { title: `Job ${(await params).number}` };
@@ -21,7 +20,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 
 export default async function JobPage({ params }: { params: Promise<{ number: string }> }) {
   const user = await requirePageUser('job.read');
-  const parsed = paramsSchema.safeParse(await params);
+  const parsed = jobNumberParamsSchema.safeParse(await params);
   if (!parsed.success) notFound();
   const job = await getJobByNumber(parsed.data.number);
   if (!job) notFound();

@@ -1,6 +1,5 @@
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { z } from 'zod';
 import { requirePageUser } from '@/lib/auth/guard';
 import { db } from '@/lib/db/client';
 import { loadJobSheet, type Row } from '@/lib/job-sheet/job-sheet-data';
@@ -8,8 +7,8 @@ import { OverallVerdict, SectionVerdict } from '../tests/judgement-view';
 import { PrintButton } from './print-button';
 import '../tests/tests.css';
 import './job-sheet.css';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
-const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
   return { title: `Job sheet ${(await params).number}` };
@@ -31,7 +30,7 @@ function Rows({ rows }: { rows: Row[] }) {
  */
 export default async function JobSheetPage({ params }: { params: Promise<{ number: string }> }) {
   await requirePageUser('job.read');
-  const parsed = paramsSchema.safeParse(await params);
+  const parsed = jobNumberParamsSchema.safeParse(await params);
   if (!parsed.success) notFound();
   const d = await loadJobSheet(parsed.data.number);
   if (!d) notFound();

@@ -16,8 +16,8 @@ import { CandidateTable } from './candidate-table';
 import { Cautions, ComparisonTable, NameplateProposal } from './comparison';
 import { ApproveForm } from './approve-form';
 import './redesign.css';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
-const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -59,7 +59,7 @@ function RevisionList({ revisions, selected, number }: { revisions: RedesignRevi
 
 export default async function RedesignPage({ params, searchParams }: { params: Promise<{ number: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser('job.read');
-  const parsed = paramsSchema.safeParse(await params);
+  const parsed = jobNumberParamsSchema.safeParse(await params);
   if (!parsed.success) notFound();
   const job = await getJobByNumber(parsed.data.number);
   if (!job) notFound();

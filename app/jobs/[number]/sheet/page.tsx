@@ -1,6 +1,5 @@
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { z } from 'zod';
 import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
@@ -15,8 +14,8 @@ import { fmt } from '@/lib/format';
 import { PhotoUpload } from '../photo-upload';
 import { SheetEditor, type SheetEditorProps } from './_parts/sheet-editor';
 import './sheet.css';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
-const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
   return { title: `Data sheet · job ${(await params).number}` };
@@ -24,7 +23,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 
 export default async function SheetPage({ params }: { params: Promise<{ number: string }> }) {
   const user = await requirePageUser('job.read');
-  const parsed = paramsSchema.safeParse(await params);
+  const parsed = jobNumberParamsSchema.safeParse(await params);
   if (!parsed.success) notFound();
   const job = await getJobForSheet(parsed.data.number);
   if (!job) notFound();

@@ -1,6 +1,5 @@
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { z } from 'zod';
 import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { db } from '@/lib/db/client';
@@ -19,8 +18,8 @@ import { OverallVerdict, SectionVerdict } from './judgement-view';
 import { RecordReadings } from './record-readings';
 import { TestsForm } from './tests-form';
 import './tests.css';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
-const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
   return { title: `Final tests · job ${(await params).number}` };
@@ -31,7 +30,7 @@ const nowLocal = () => new Date().toISOString().slice(0, 16);
 
 export default async function TestsPage({ params }: { params: Promise<{ number: string }> }) {
   const user = await requirePageUser('job.read');
-  const parsed = paramsSchema.safeParse(await params);
+  const parsed = jobNumberParamsSchema.safeParse(await params);
   if (!parsed.success) notFound();
   const job = await db().job.findUnique({
     where: { number: parsed.data.number },

@@ -1,9 +1,8 @@
-import { z } from 'zod';
 import { currentUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { jobSheetPdf } from '@/lib/job-sheet/job-sheet-snapshot';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
-const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
 
 /**
  * The job sheet PDF for a signed-in user whose role may read jobs: a download by default, shown in the
@@ -13,7 +12,7 @@ export async function GET(req: Request, { params }: { params: Promise<{ number: 
   const user = await currentUser();
   if (!user) return new Response('Sign in first.', { status: 401 });
   if (!can(user.role, 'job.read')) return new Response('Not allowed.', { status: 403 });
-  const parsed = paramsSchema.safeParse(await params);
+  const parsed = jobNumberParamsSchema.safeParse(await params);
   if (!parsed.success) return new Response('Not found.', { status: 404 });
   const sheet = await jobSheetPdf(parsed.data.number);
   if (!sheet) return new Response('Not found.', { status: 404 });

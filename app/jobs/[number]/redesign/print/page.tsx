@@ -9,8 +9,8 @@ import { mmToInches } from '@/lib/engine/units';
 import { Cautions, ComparisonTable, NameplateProposal } from '../comparison';
 import { PrintButton } from '../print-button';
 import '../redesign.css';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
-const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -20,7 +20,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 /** The winder's sheet: the approved winding (current revision, or ?rev=N of an approved one), printable. */
 export default async function RedesignPrintPage({ params, searchParams }: { params: Promise<{ number: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   await requirePageUser('job.read');
-  const parsed = paramsSchema.safeParse(await params);
+  const parsed = jobNumberParamsSchema.safeParse(await params);
   if (!parsed.success) notFound();
   const job = await getJobByNumber(parsed.data.number);
   if (!job) notFound();

@@ -4,6 +4,7 @@ import { can } from '@/lib/auth/permissions';
 import { db } from '@/lib/db/client';
 import { makeWindingSheetExport } from '@/lib/schemas/winding-sheet';
 import { getAsFoundSheet, getSheetRevision } from '@/lib/sheets/sheet-queries';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
 /**
  * Downloads a job's saved data sheet as JSON in the versioned export format (coilwright.winding-sheet,
@@ -13,7 +14,7 @@ export async function GET(req: Request, { params }: { params: Promise<{ number: 
   const user = await currentUser();
   if (!user) return new Response('Sign in first.', { status: 401 });
   if (!can(user.role, 'job.read')) return new Response('Not allowed.', { status: 403 });
-  const parsed = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) }).safeParse(await params);
+  const parsed = jobNumberParamsSchema.safeParse(await params);
   if (!parsed.success) return new Response('Not found.', { status: 404 });
   const job = await db().job.findUnique({ where: { number: parsed.data.number }, select: { id: true, number: true } });
   if (!job) return new Response('Not found.', { status: 404 });

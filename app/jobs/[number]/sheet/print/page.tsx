@@ -1,6 +1,5 @@
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { z } from 'zod';
 import { requirePageUser } from '@/lib/auth/guard';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import { mmToInches } from '@/lib/engine/units';
@@ -12,8 +11,8 @@ import type { WindingSheet } from '@/lib/schemas/winding-sheet';
 import { PrintButton } from '../_parts/print-button';
 import { SlotDiagram } from '../_parts/slot-diagram';
 import '../sheet.css';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
-const paramsSchema = z.object({ number: z.coerce.number().int().positive().max(2_000_000_000) });
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
   return { title: `Data sheet print · job ${(await params).number}` };
@@ -59,7 +58,7 @@ function sheetRows(s: WindingSheet) {
 
 export default async function SheetPrintPage({ params }: { params: Promise<{ number: string }> }) {
   await requirePageUser('job.read');
-  const parsed = paramsSchema.safeParse(await params);
+  const parsed = jobNumberParamsSchema.safeParse(await params);
   if (!parsed.success) notFound();
   const job = await getJobForSheet(parsed.data.number);
   if (!job) notFound();
