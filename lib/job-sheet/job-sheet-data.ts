@@ -30,6 +30,8 @@ export interface JobSheetTests {
   testedBy: string;
   instruments: string;
   verdict: OverallVerdict;
+  /** Why a record without a failure is still not a full pass (a reduced-level test). */
+  qualifiers: string[];
   sections: SectionJudgement[];
   readings: ReadingSection[];
   notes: string | null;
@@ -109,6 +111,7 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
       testedBy: current.testedBy?.name ?? '—',
       instruments: current.instrumentSerials.join(', ') || '—',
       verdict: current.verdict,
+      qualifiers: j.qualifiers,
       sections: j.sections,
       readings: readingSections(current.data, j),
       notes: current.data.notes ?? null,

@@ -75,7 +75,7 @@ function Tests({ t }: { t: NonNullable<JobSheetData['tests']> }) {
   return (
     <View>
       <Text>Record #{t.sequence} · tested {t.testedAt} by {t.testedBy} · instruments {t.instruments}</Text>
-      <Text style={s.overall}>Overall verdict: {overallText(t.verdict)}</Text>
+      <Text style={s.overall}>Overall verdict: {overallText(t.verdict, t.qualifiers)}</Text>
       {t.sections.map((sec) => {
         const readings = t.readings.find((r) => r.key === sec.key);
         return (
@@ -83,7 +83,7 @@ function Tests({ t }: { t: NonNullable<JobSheetData['tests']> }) {
             <Text style={s.h3}>{sec.title}: {statusText(sec.status)}</Text>
             {sec.checks.map((c) => (
               <Text key={c.key} style={c.status === 'fail' ? s.bold : {}}>
-                {statusText(c.status)} {c.label}{c.verdict ? ` · ${checkValueText(c)}` : ''}{c.verdict?.rule ? ` — ${c.verdict.rule}` : ''}
+                {statusText(c.status)} {c.label}{c.verdict ? ` · ${checkValueText(c)}` : ''}{(c.verdict?.rule ?? c.rule) ? ` — ${c.verdict?.rule ?? c.rule}` : ''}
               </Text>
             ))}
             {sec.warnings.map((w) => <Text key={w}>⚠ Check: {w}</Text>)}

@@ -97,7 +97,7 @@ export default async function JobSheetPage({ params }: { params: Promise<{ numbe
             <>
               <p className="small muted">Judged for: {t.basis}.</p>
               <p>Record #{t.sequence} · tested {t.testedAt} by {t.testedBy} · instruments {t.instruments}</p>
-              <OverallVerdict judgement={{ overall: t.verdict, sections: t.sections, derived: {} }} />
+              <OverallVerdict judgement={{ overall: t.verdict, sections: t.sections, qualifiers: t.qualifiers, derived: {} }} />
               {t.sections.map((s) => {
                 const readings = t.readings.find((r) => r.key === s.key);
                 return (

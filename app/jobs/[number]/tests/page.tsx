@@ -12,6 +12,8 @@ import { basisDefaults, newRecordDefaults, recordToFormData } from '@/lib/tests-
 import { judgeTestRecord } from '@/lib/tests-domain/test-verdicts';
 import { compareFinalResistance, RESISTANCE_CHECK_PERCENT, type ExpectedResistance } from '@/lib/tests-domain/expected-resistance';
 import { expectedResistanceFor } from '@/lib/tests-domain/expected-resistance-source';
+import { jobAsRepairedRating } from '@/lib/tests-domain/test-rating-source';
+import { ratingSentence } from '@/lib/tests-domain/test-readings';
 import { fmt } from '@/lib/format';
 import type { TestRecordFormInput } from '@/lib/schemas/test-record';
 import { OverallVerdict, SectionVerdict } from './judgement-view';
@@ -40,7 +42,9 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
   const [records, sheet, staff] = await Promise.all([listTestRecords(job.id), getAsFoundSheet(job.id), listStaff()]);
   const current = records[0] ?? null;
   const expected = await expectedResistanceFor(job.id, sheet);
-  const motor = { ratedVoltageV: job.motor.ratedVoltageV, insulationClass: job.motor.insulationClass, outputKw: job.motor.outputKw, frequencyHz: job.motor.frequencyHz };
+  const rating = await jobAsRepairedRating(job.id);
+  if (!rating) notFound();
+  const motor = { rating, insulationClass: job.motor.insulationClass };
   const { sources } = basisDefaults(motor, sheet?.sheet ?? null);
   const closed = CLOSED_STATUSES.includes(job.status);
   const mayRecord = can(user.role, 'tests.record') && !closed;
@@ -68,6 +72,11 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
       </section>
 
       {!sheet && <p className="notice">No as-found sheet is saved for this job: the basis below comes from the nameplate alone.</p>}
+      <p className="notice" data-testid="rating-basis">
+        {rating.source === 'redesign'
+          ? `New records are judged for the as-repaired rating from the approved redesign, revision ${rating.redesignRevision}: ${rating.ratedVoltageV ?? '—'} V ${rating.frequencyHz ?? '—'} Hz${rating.connection ? `, ${rating.connection}` : ''}. The nameplate as received no longer applies.`
+          : 'New records are judged for the nameplate rating as received: no redesign is approved for this job.'}
+      </p>
 
       <section className="card" aria-labelledby="current-h">
         <h2 id="current-h" style={{ marginTop: 0 }}>
@@ -78,6 +87,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
             <p className="muted small">
               Tested {fmt.dateTime(current.testedAt)} by {current.testedBy?.name ?? '—'} · instruments {current.instrumentSerials.join(', ') || '—'} · version {current.version}
             </p>
+            <p data-testid="current-rating"><strong>Verdicts {ratingSentence(current.data.basis)}.</strong></p>
             <CurrentJudgement data={current.data} />
             <ResistanceAgainstPrediction expected={expected} data={current.data} />
             <RecordReadings data={current.data} />
