@@ -13,6 +13,8 @@ export const PERMISSIONS = {
   'sheet.edit': ['WINDER', 'ENGINEER', 'ADMIN'],
   'redesign.edit': ['ENGINEER', 'ADMIN'],
   'redesign.approve': ['ENGINEER'],
+  /** An engineer's written release of a shop-path gate (lib/jobs/shop-gates.ts). */
+  'job.override': ['ENGINEER'],
   'tests.record': ['WINDER', 'ENGINEER', 'ADMIN'],
   'stock.manage': ['ADMIN', 'ENGINEER'],
   'settings.manage': ['ADMIN'],

@@ -11,6 +11,8 @@ import type { z } from 'zod';
 import type { jobEditSchema, statusMoveSchema } from '@/lib/schemas/job';
 import { toMotorRecord } from '@/lib/schemas/motor';
 import { isMoveAllowed, STATUS_LABELS } from './status-flow';
+import { DECISION_EVENT_KIND, loadGateFacts } from './gate-facts';
+import { decisionMessage, gateRefusal, type GateDecisionKind } from './shop-gates';
 
 type Tx = Prisma.TransactionClient;
 export const FIRST_JOB_NUMBER = 1001;
@@ -138,6 +140,9 @@ export async function moveJobStatus(userId: string, role: Role, input: StatusMov
         `A job in "${STATUS_LABELS[job.status]}" cannot move to "${STATUS_LABELS[input.to]}"${role === 'FRONT_DESK' || role === 'ADMIN' ? '' : ' by your role'}.`,
       );
     }
+    // The records must support the move too (passing tests, an approved redesign, a winding record).
+    const refusal = gateRefusal(job.status, input.to, await loadGateFacts(tx, input.jobId));
+    if (refusal) throw new DomainError('conflict', refusal);
     const result = await tx.job.updateMany({
       where: { id: input.jobId, version: input.version, status: job.status },
       data: {
@@ -179,4 +184,30 @@ export async function recordJobEvent(
   event: { jobId: string; userId: string | null; kind: string; message: string; data?: Prisma.InputJsonValue },
 ): Promise<void> {
   await tx.jobEvent.create({ data: { ...event, ...(event.data === undefined ? {} : { data: event.data }) } });
+}
+
+/**
+ * Records an engineer's written decision that releases a shop-path gate (an override of the Ready gate,
+ * or keeping the original winding although another supply was asked for). It goes on the timeline in
+ * words and is printed on the job sheet; the gate reads it back from there.
+ */
+export async function recordGateDecision(userId: string, input: { jobId: string; decision: GateDecisionKind; reason: string }): Promise<void> {
+  await db().$transaction(async (tx) => {
+    const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true } });
+    if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
+    const expected = input.decision === 'ready-override' ? 'TESTING' : 'CUSTOMER_APPROVED';
+    if (job.status !== expected) {
+      throw new DomainError('conflict', `This decision is recorded while the job is in "${STATUS_LABELS[expected]}"; it is now in "${STATUS_LABELS[job.status]}".`);
+    }
+    const facts = await loadGateFacts(tx, input.jobId);
+    await tx.jobEvent.create({
+      data: {
+        jobId: input.jobId,
+        userId,
+        kind: DECISION_EVENT_KIND,
+        message: decisionMessage(input.decision, input.reason, facts.latestTest),
+        data: { decision: input.decision, reason: input.reason, recordSequence: input.decision === 'ready-override' ? facts.latestTest?.sequence ?? null : null },
+      },
+    });
+  });
 }

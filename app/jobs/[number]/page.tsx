@@ -8,6 +8,9 @@ import { CONNECTION_LABELS } from '@/lib/schemas/motor';
 import { fmt } from '@/lib/format';
 import { polesFromSpeed } from '@/lib/engine/speed';
 import { getApprovedRedesign } from '@/lib/redesign/redesign-queries';
+import { db } from '@/lib/db/client';
+import { loadGateFacts } from '@/lib/jobs/gate-facts';
+import { gateRefusal, releasingDecision } from '@/lib/jobs/shop-gates';
 import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
 import { PhotoUpload } from './photo-upload';
@@ -27,8 +30,13 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
   const [staff, history, redesign] = await Promise.all([listStaff(), motorHistory(job.motorId, job.id), getApprovedRedesign(job.id)]);
   const m = job.motor;
   const poles = m.frequencyHz && m.speedRpm ? polesFromSpeed(m.frequencyHz, m.speedRpm) : null;
+  const facts = await loadGateFacts(db(), job.id);
   const moves = can(user.role, 'job.move')
-    ? allowedMoves(job.status, job.heldFrom, user.role).map((to) => ({ to, label: moveLabel(job.status, to) }))
+    ? allowedMoves(job.status, job.heldFrom, user.role).map((to) => {
+        const blocked = gateRefusal(job.status, to, facts);
+        const release = blocked ? releasingDecision(job.status, to) : null;
+        return { to, label: moveLabel(job.status, to), ...(blocked ? { blocked } : {}), ...(release ? { release } : {}) };
+      })
     : [];
   const currentIndex = MAIN_PATH.indexOf(job.status);
   const contact = job.customer.contacts[0];
@@ -50,7 +58,9 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
 
       <section className="card" aria-labelledby="moves-h">
         <h2 id="moves-h">Status: {STATUS_LABELS[job.status]}</h2>
-        <StatusMoves jobId={job.id} version={job.version} moves={moves} />
+        <StatusMoves jobId={job.id} version={job.version} moves={moves} mayRelease={can(user.role, 'job.override')} />
+        {facts.readyOverride && <p className="small" data-testid="ready-override">Engineer’s override on record ({facts.readyOverride.by}, {fmt.date(facts.readyOverride.at)}): {facts.readyOverride.reason}</p>}
+        {facts.keepOriginal && <p className="small">Original winding kept ({facts.keepOriginal.by}, {fmt.date(facts.keepOriginal.at)}): {facts.keepOriginal.reason}</p>}
       </section>
 
       <nav className="card no-print" aria-label="Workshop records">
