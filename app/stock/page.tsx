@@ -50,9 +50,9 @@ export default async function StockPage() {
         <h2 id="limits-h">Redesign limits</h2>
         <p className="muted small">
           Defaults for every redesign request (the engineer may change them per job). Starting values: flux densities +5 % / −10 % of the original
-          (yoke −50 %), a cautious shop habit; current density +5 % and at most 6 A/mm² [from memory: textbook stator ranges 3–5 A/mm², 3–8 for
-          totally enclosed machines]; insulated wire at most 60 % of the gross slot area [common practice, from memory]; up to 10 wires in hand,
-          3 sizes within a diameter ratio of 1.3 [common practice]. {settings.updatedAt ? `Last saved ${fmt.dateTime(settings.updatedAt)}.` : 'Not saved yet: the starting values apply.'}
+          (yoke −50 %), a cautious shop habit; current density +5 % and at most 6 A/mm² (textbook stator ranges 3–5 A/mm², 3–8 for
+          totally enclosed machines); insulated wire at most 60 % of the gross slot area (shop practice); up to 10 wires in hand,
+          3 sizes within a diameter ratio of 1.3 (shop practice). {settings.updatedAt ? `Last saved ${fmt.dateTime(settings.updatedAt)}.` : 'Not saved yet: the starting values apply.'}
         </p>
         {mayEditSettings ? (
           <SettingsForm version={settings.version} defaults={limitsToForm(l)} starting={limitsToForm(DEFAULT_REDESIGN_LIMITS)} />
