@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { windingSheetSchema } from '@/lib/schemas/winding-sheet';
-import { convertTypedLength } from '@/lib/sheets/length-entry';
-import { convertFormLengths, emptySheetForm, formToSheetInput, sheetPathToFormPath, sheetToForm } from '@/lib/sheets/sheet-form';
+import { emptySheetForm, savedLengthMemory, switchFormLengths, formToSheetInput, sheetPathToFormPath, sheetToForm } from '@/lib/sheets/sheet-form';
 import { restoreDraftValues } from '@/lib/sheets/draft-values';
 import { prefillFromNameplate } from '@/lib/sheets/prefill';
 import { EXAMPLE_A_SHEET } from '../engine/winding-fixtures';
@@ -20,11 +19,18 @@ describe('the sheet form model', () => {
     expect(back.core.slots).toBe(36);
   });
 
+  // Issue 9: a saved sheet shown in inches and saved untouched keeps its stored millimetres exactly.
+  it('saves a sheet shown in inches without changing a stored length', () => {
+    const memory = new Map(savedLengthMemory(EXAMPLE_A_SHEET, 'in'));
+    const back = windingSheetSchema.parse(formToSheetInput(sheetToForm(EXAMPLE_A_SHEET, 'in'), 'in', undefined, memory));
+    expect(back).toEqual(windingSheetSchema.parse(EXAMPLE_A_SHEET));
+  });
+
   it('shows lengths in the chosen unit beside counts that never convert', () => {
     const f = sheetToForm(EXAMPLE_A_SHEET, 'in');
     expect(f.core.boreMm).toBe('5.9055');
     expect(f.core.slots).toBe('36');
-    const mm = convertFormLengths(f, 'in', 'mm', convertTypedLength);
+    const mm = switchFormLengths(f, 'in', 'mm', new Map()).values;
     expect(Number(mm.core.boreMm)).toBeCloseTo(150, 2);
     expect(mm.core.slots).toBe('36');
   });

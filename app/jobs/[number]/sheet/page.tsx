@@ -6,7 +6,7 @@ import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { draftPayloadSchema } from '@/lib/schemas/sheet-draft';
 import { restoreDraftValues } from '@/lib/sheets/draft-values';
 import { prefillFromNameplate } from '@/lib/sheets/prefill';
-import { sheetToForm } from '@/lib/sheets/sheet-form';
+import { savedLengthMemory, sheetToForm } from '@/lib/sheets/sheet-form';
 import { SHEET_MESSAGES } from '@/lib/sheets/sheet-messages';
 import { getAsFoundSheet, getJobForSheet, getLengthUnit, getSheetDraft, listSheetRevisions } from '@/lib/sheets/sheet-queries';
 import { isSheetFrozen } from '@/lib/sheets/sheet-writes';
@@ -42,7 +42,7 @@ export default async function SheetPage({ params }: { params: Promise<{ number: 
       ...(draft.data.baseRevision !== undefined ? { baseRevision: draft.data.baseRevision } : {}),
     };
   } else if (saved) {
-    initial = { values: sheetToForm(saved.sheet, unit), unit, slotTable: saved.sheet.winding.slotTable, source: 'saved' };
+    initial = { values: sheetToForm(saved.sheet, unit), unit, slotTable: saved.sheet.winding.slotTable, source: 'saved', lengthMemory: savedLengthMemory(saved.sheet, unit) };
   } else {
     initial = { values: prefillFromNameplate(job.motor), unit, source: 'nameplate' };
   }

@@ -13,9 +13,9 @@ import { applyFieldErrors } from '@/lib/errors/form-errors';
 import type { CoilSide } from '@/lib/engine/winding-layout';
 import type { WindingSheet } from '@/lib/schemas/winding-sheet';
 import { chooseLengthUnit, discardSheetDraft, saveAsFoundSheet } from '@/lib/sheets/sheet-actions';
-import { convertTypedLength, type LengthUnit } from '@/lib/sheets/length-entry';
+import type { LengthUnit, TypedLength } from '@/lib/sheets/length-entry';
 import { liveAnalysis, type LiveAnalysis } from '@/lib/sheets/live-analysis';
-import { convertFormLengths, type SheetFormValues } from '@/lib/sheets/sheet-form';
+import { switchFormLengths, type SheetFormValues } from '@/lib/sheets/sheet-form';
 import { AnalysisPanel } from './analysis-panel';
 import { ImportSheet } from './import-sheet';
 import { Pictures } from './pictures';
@@ -39,6 +39,8 @@ export interface SheetEditorProps {
     draftSavedAt?: string;
     /** For a restored draft: the revision it was started from (see the draft schema). */
     baseRevision?: number | null;
+    /** The stored millimetres behind lengths shown in inches (see savedLengthMemory). */
+    lengthMemory?: [string, TypedLength][];
   };
 }
 
@@ -55,6 +57,8 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   const [baseRevision, setBaseRevision] = useState<number | null>(initial.baseRevision !== undefined ? initial.baseRevision : savedRevision);
   const baseRef = useRef(baseRevision);
   baseRef.current = baseRevision;
+  // What was typed (or stored) behind each length field shown in the other unit: a toggle never changes it.
+  const memoryRef = useRef<Map<string, TypedLength>>(new Map(initial.lengthMemory ?? []));
   const [conflict, setConflict] = useState(false);
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(
     initial.source === 'draft' ? { tone: 'warn', text: `Restored your unsaved draft from ${new Date(initial.draftSavedAt ?? Date.now()).toLocaleString()}. Save the sheet to keep it, or discard the draft.` } : null,
@@ -62,16 +66,16 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   const [hasDraft, setHasDraft] = useState(initial.source === 'draft');
   const [pending, startTransition] = useTransition();
 
-  const resolver = useMemo(() => sheetResolver(() => unitRef.current, () => slotRef.current), []);
+  const resolver = useMemo(() => sheetResolver(() => unitRef.current, () => slotRef.current, () => memoryRef.current), []);
   const form = useForm<SheetFormValues, unknown, WindingSheet>({ resolver, defaultValues: initial.values, mode: 'onSubmit' });
   const { handleSubmit, setError, watch, getValues, setValue, reset } = form;
 
   const autosave = useDraftAutosave(jobId, editable, () => ({ unit: unitRef.current, values: getValues(), baseRevision: baseRef.current, ...(slotRef.current ? { slotTable: slotRef.current } : {}) }));
-  const [live, setLive] = useState<LiveAnalysis>(() => liveAnalysis(initial.values, initial.unit, initial.slotTable));
+  const [live, setLive] = useState<LiveAnalysis>(() => liveAnalysis(initial.values, initial.unit, initial.slotTable, memoryRef.current));
   const analysisTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const reanalyse = useCallback(() => {
     if (analysisTimer.current) clearTimeout(analysisTimer.current);
-    analysisTimer.current = setTimeout(() => setLive(liveAnalysis(getValues(), unitRef.current, slotRef.current)), ANALYSIS_DELAY_MS);
+    analysisTimer.current = setTimeout(() => setLive(liveAnalysis(getValues(), unitRef.current, slotRef.current, memoryRef.current)), ANALYSIS_DELAY_MS);
   }, [getValues]);
 
   useEffect(() => {
@@ -85,7 +89,9 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
 
   const switchUnit = (to: LengthUnit) => {
     if (to === unit) return;
-    const converted = convertFormLengths(getValues(), unit, to, convertTypedLength);
+    const switched = switchFormLengths(getValues(), unit, to, memoryRef.current);
+    const converted = switched.values;
+    memoryRef.current = switched.memory;
     unitRef.current = to;
     setUnit(to);
     for (const [k, v] of Object.entries(converted.core)) setValue(`core.${k as keyof SheetFormValues['core']}`, v);
