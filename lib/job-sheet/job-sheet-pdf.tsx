@@ -133,8 +133,9 @@ export function JobSheetDocument({ d }: { d: JobSheetData }) {
         </View>
 
         <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>Winding as repaired</Text>
+        <Text style={s.bold}>{d.statementOfWork}</Text>
         {d.redesign ? (
-          <View style={s.redesign} wrap={false}>
+          <View style={s.redesign}>
             <Text style={s.bold}>⚠ REDESIGNED WINDING: differs from the original. Approved redesign revision {d.redesign.revision}, by {d.redesign.approvedBy} on {d.redesign.approvedAt}.</Text>
             {d.redesign.note && <Text>Note: {d.redesign.note}</Text>}
             <View style={[s.table, { marginTop: 4 }]}>

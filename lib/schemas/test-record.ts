@@ -31,7 +31,7 @@ const serial = optionalText(60);
 const temperature = (label: string) => optionalNumber({ label, min: -40, max: 250, unit: '°C' });
 
 /** Where the rating judged against came from: the nameplate as received, or an approved redesign. */
-export const RATING_SOURCES = ['nameplate', 'redesign'] as const;
+export const RATING_SOURCES = ['nameplate', 'redesign', 'entered'] as const;
 
 /**
  * What the verdicts are judged against: the rating the motor leaves with (the approved redesign's when there

@@ -31,9 +31,9 @@ export const PRACTICE_TEXT = { nema: 'NEMA MG 1 / ANSI/EASA AR100', iec: 'IEC 60
  */
 export function ratingSentence(b: TestDataValues['basis']): string {
   const rating = [v(b.ratedVoltageV, 0, 'V'), b.frequencyHz === undefined ? null : v(b.frequencyHz, 0, 'Hz')].filter(Boolean).join(' ');
-  return b.ratingSource === 'redesign' && b.redesignRevision !== undefined
-    ? `judged for the as-repaired rating ${rating}, redesign revision ${b.redesignRevision}`
-    : `judged for the nameplate rating ${rating}`;
+  if (b.ratingSource === 'redesign' && b.redesignRevision !== undefined) return `judged for the as-repaired rating ${rating}, redesign revision ${b.redesignRevision}`;
+  if (b.ratingSource === 'entered') return `judged for the rating entered on this test record, ${rating}, which differs from the nameplate as received`;
+  return `judged for the nameplate rating ${rating}`;
 }
 
 export function readingSections(d: TestDataValues, j: TestJudgement): ReadingSection[] {

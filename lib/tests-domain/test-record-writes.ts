@@ -39,8 +39,11 @@ function bindRating(input: TestRecordForm, rating: AsRepairedRating): TestRecord
     if (Object.keys(problems).length) throw new DomainError('invalid', MESSAGES.invalid, problems);
     return { ...input, data: { ...input.data, basis: { ...b, frequencyHz: b.frequencyHz ?? rating.frequencyHz, ratingSource: 'redesign', redesignRevision: rating.redesignRevision } } };
   }
+  // Without a redesign the plate governs; a basis that differs from it is printed as entered, not as the plate.
   const { redesignRevision: _dropped, ...rest } = b;
-  return { ...input, data: { ...input.data, basis: { ...rest, ratingSource: 'nameplate' } } };
+  const differs = (rating.ratedVoltageV !== undefined && b.ratedVoltageV !== rating.ratedVoltageV)
+    || (rating.frequencyHz !== undefined && b.frequencyHz !== undefined && b.frequencyHz !== rating.frequencyHz);
+  return { ...input, data: { ...input.data, basis: { ...rest, ratingSource: differs ? 'entered' : 'nameplate' } } };
 }
 
 export interface SavedTestRecord {

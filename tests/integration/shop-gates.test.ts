@@ -80,8 +80,10 @@ describe('Testing → Ready', () => {
     expect(await move(jobId, 'READY')).toMatchObject({ ok: true });
     const sheet = await loadJobSheet((await job(jobId)).number);
     const text = pdfText(await renderJobSheetPdf(sheet!));
-    expect(text).toContain('Released to Ready without a passing test');
+    expect(text).toContain('Released to Ready');
     expect(text).toContain(reason.slice(0, 40));
+    // The fixture's 460 V basis differs from this 400 V plate: the sheet says so instead of calling it the plate's.
+    expect(text).toContain('judged for the rating entered on this test record, 460 V');
     expect(text).toContain('Rewound to the as-found winding data.');
     expect(text).toMatch(/⚠ FAIL/);
     expect(text).toContain('below the proposed 3264 V');
