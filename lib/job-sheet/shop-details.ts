@@ -4,7 +4,7 @@
  * shop's name is used, so a fresh install prints something sensible.
  */
 import { z } from 'zod';
-import { DEMO_SHOP_NAME } from '@/lib/db/seed/demo-data';
+import { DEMO_SHOP_NAME } from '@/lib/setup/demo/demo-data';
 
 export interface ShopDetails {
   name: string;

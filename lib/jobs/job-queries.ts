@@ -4,7 +4,7 @@
  */
 import { db, type Prisma } from '@/lib/db/client';
 import type { JobStatus } from '@/lib/db/generated/enums';
-import { PAGE_SIZE, type BoardQuery } from '@/lib/schemas/job';
+import { PAGE_SIZE, type BoardQuery } from '@/lib/jobs/job-schema';
 import { CLOSED_STATUSES, OPEN_STATUSES } from './status-flow';
 
 export function startOfToday(now = new Date()): Date {

@@ -3,7 +3,7 @@ import type { z } from 'zod';
 import { db, Prisma } from '@/lib/db/client';
 import { hashPassword } from '@/lib/auth/password';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
-import type { userCreateSchema, userUpdateSchema } from '@/lib/schemas/user';
+import type { userCreateSchema, userUpdateSchema } from '@/lib/users/user-schema';
 
 export async function createUser(input: z.output<typeof userCreateSchema>): Promise<{ id: string }> {
   try {

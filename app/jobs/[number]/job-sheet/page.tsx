@@ -3,11 +3,11 @@ import { notFound } from 'next/navigation';
 import { requirePageUser } from '@/lib/auth/guard';
 import { db } from '@/lib/db/client';
 import { loadJobSheet, type Row } from '@/lib/job-sheet/job-sheet-data';
-import { OverallVerdict, SectionVerdict } from '../tests/judgement-view';
+import { OverallVerdict, SectionVerdict } from '../final-tests/judgement-view';
 import { PrintButton } from './print-button';
-import '../tests/tests.css';
+import '../final-tests/final-tests.css';
 import './job-sheet.css';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
 
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {

@@ -9,14 +9,15 @@ import type { RedesignRequest } from '@/lib/engine/redesign/types';
 import { loadRedesignContext, runSearch, type RedesignContext } from '@/lib/redesign/redesign-context';
 import { listRedesigns, type RedesignRevision } from '@/lib/redesign/redesign-queries';
 import { REDESIGN_MESSAGES } from '@/lib/redesign/redesign-writes';
-import { limitsToForm, type RedesignRequestFormInput } from '@/lib/schemas/redesign';
-import { fmt } from '@/lib/format';
+import { limitsToForm, type RedesignRequestFormInput } from '@/lib/redesign/redesign-schema';
+import { fmt } from '@/lib/presentation/format';
 import { RequestForm } from './request-form';
 import { CandidateTable } from './candidate-table';
 import { Cautions, ComparisonTable, NameplateProposal } from './comparison';
 import { ApproveForm } from './approve-form';
 import './redesign.css';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { jobRoutes } from '@/lib/routes';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
@@ -99,7 +100,7 @@ export default async function RedesignPage({ params, searchParams }: { params: P
       </section>
 
       {!ctx.ok ? (
-        <p className="notice bad">{ctx.reason} <Link href={`/jobs/${job.number}/sheet`}>Open the as-found sheet</Link></p>
+        <p className="notice bad">{ctx.reason} <Link href={jobRoutes(job.number).asFound}>Open the as-found sheet</Link></p>
       ) : (
         <section className="card" aria-labelledby="asfound-h">
           <h2 id="asfound-h">As found</h2>

@@ -1,7 +1,7 @@
 import { currentUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { jobSheetPdf } from '@/lib/job-sheet/job-sheet-snapshot';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
 
 
 /**

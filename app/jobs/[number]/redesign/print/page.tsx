@@ -4,12 +4,12 @@ import { z } from 'zod';
 import { requirePageUser } from '@/lib/auth/guard';
 import { getJobByNumber } from '@/lib/jobs/job-queries';
 import { listRedesigns } from '@/lib/redesign/redesign-queries';
-import { fmt } from '@/lib/format';
+import { fmt } from '@/lib/presentation/format';
 import { mmToInches } from '@/lib/engine/units';
 import { Cautions, ComparisonTable, NameplateProposal } from '../comparison';
 import { PrintButton } from '../print-button';
 import '../redesign.css';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
