@@ -1,7 +1,5 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { getJobByNumber } from '@/lib/jobs/job-queries';
 import { redesignReport } from '@/lib/engine/redesign/report';
@@ -16,7 +14,7 @@ import { CandidateTable } from './candidate-table';
 import { Cautions, ComparisonTable, NameplateProposal } from './comparison';
 import { ApproveForm } from './approve-form';
 import './redesign.css';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
@@ -59,11 +57,7 @@ function RevisionList({ revisions, selected, number }: { revisions: RedesignRevi
 }
 
 export default async function RedesignPage({ params, searchParams }: { params: Promise<{ number: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await getJobByNumber(parsed.data.number);
-  if (!job) notFound();
+  const { user, job } = await loadJobRoute(params, getJobByNumber);
   const { rev } = searchSchema.parse(await searchParams);
   const [revisions, ctx] = await Promise.all([listRedesigns(job.id), loadRedesignContext(job.id)]);
   const latest = revisions[0];

@@ -1,6 +1,4 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import { mmToInches } from '@/lib/engine/units';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
@@ -11,7 +9,7 @@ import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { PrintButton } from '../_parts/print-button';
 import { SlotDiagram } from '../_parts/slot-diagram';
 import '../sheet.css';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
 
 
@@ -58,11 +56,7 @@ function sheetRows(s: WindingSheet) {
 }
 
 export default async function SheetPrintPage({ params }: { params: Promise<{ number: string }> }) {
-  await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await getJobForSheet(parsed.data.number);
-  if (!job) notFound();
+  const { job } = await loadJobRoute(params, getJobForSheet);
   const saved = await getAsFoundSheet(job.id);
   const back = <p className="no-print row"><Link href={jobRoutes(job.number).asFound}>← Back to the sheet</Link>{saved && <PrintButton />}</p>;
   if (!saved) return <>{back}<h1>As-found data sheet · job {job.number}</h1><p className="notice warn">No data sheet has been saved for this job yet; drafts are not printed.</p></>;
