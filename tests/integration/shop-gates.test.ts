@@ -11,15 +11,15 @@ import { loadJobSheet } from '@/lib/job-sheet/job-sheet-data';
 import { renderJobSheetPdf } from '@/lib/job-sheet/job-sheet-pdf';
 import { approveRedesignRevision, chooseCandidate, submitRedesignRequest } from '@/lib/redesign/redesign-actions';
 import { loadRedesignContext, runSearch } from '@/lib/redesign/redesign-context';
-import { limitsToForm, storedRequestSchema } from '@/lib/schemas/redesign';
-import type { TestRecordFormInput } from '@/lib/schemas/test-record';
-import { saveTestRecordAction } from '@/lib/tests-domain/test-record-actions';
-import { listTestRecords } from '@/lib/tests-domain/test-record-queries';
+import { limitsToForm, storedRequestSchema } from '@/lib/redesign/redesign-schema';
+import type { TestRecordFormInput } from '@/lib/final-tests/test-record-schema';
+import { saveTestRecordAction } from '@/lib/final-tests/record-actions';
+import { listTestRecords } from '@/lib/final-tests/record-queries';
 import { useTestDatabase } from '../support/test-db';
 import { actAs, signOutTest } from '../support/session';
 import { ENGINEER, FRONT_DESK, WINDER } from '../support/demo-users';
 import { pdfText } from '../support/pdf-text';
-import { PASSING } from '../unit/tests-domain/fixtures';
+import { PASSING } from '../unit/final-tests/fixtures';
 
 useTestDatabase();
 
