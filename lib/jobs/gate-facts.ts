@@ -3,7 +3,7 @@
  * status move so the check and the move see the same rows.
  */
 import { z } from 'zod';
-import type { Prisma } from '@/lib/db/client';
+import { db, type Prisma } from '@/lib/db/client';
 import { GATE_DECISIONS, type GateDecision, type GateFacts } from './shop-gates';
 
 type Reader = Prisma.TransactionClient;
@@ -46,3 +46,6 @@ export async function loadGateFacts(tx: Reader, jobId: string): Promise<GateFact
     hasAsFoundSheet: sheet !== null,
   };
 }
+
+/** The gate facts of a job for a screen (outside any transaction). */
+export const getGateFacts = (jobId: string): Promise<GateFacts> => loadGateFacts(db(), jobId);

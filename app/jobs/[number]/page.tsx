@@ -6,8 +6,7 @@ import { CONNECTION_LABELS } from '@/lib/jobs/motor-schema';
 import { fmt } from '@/lib/presentation/format';
 import { polesFromSpeed } from '@/lib/engine/speed';
 import { getApprovedRedesign } from '@/lib/redesign/redesign-queries';
-import { db } from '@/lib/db/client';
-import { loadGateFacts } from '@/lib/jobs/gate-facts';
+import { getGateFacts } from '@/lib/jobs/gate-facts';
 import { gateRefusal, releasingDecision } from '@/lib/jobs/shop-gates';
 import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
@@ -25,7 +24,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
   const [staff, history, redesign] = await Promise.all([listStaff(), motorHistory(job.motorId, job.id), getApprovedRedesign(job.id)]);
   const m = job.motor;
   const poles = m.frequencyHz && m.speedRpm ? polesFromSpeed(m.frequencyHz, m.speedRpm) : null;
-  const facts = await loadGateFacts(db(), job.id);
+  const facts = await getGateFacts(job.id);
   const moves = can(user.role, 'job.move')
     ? allowedMoves(job.status, job.heldFrom, user.role).map((to) => {
         const blocked = gateRefusal(job.status, to, facts);
