@@ -7,6 +7,7 @@
  */
 import type { CoilSide } from '@/lib/engine/winding-layout';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
+import { parseSpan } from '@/lib/engine/notation';
 import { mmToLength, parseTypedNumber, switchTypedLength, typedLengthToMm, type LengthUnit, type TypedLength, lengthToMm } from './length-entry';
 
 /** Per length field ("core.boreMm", "winding.meanTurnLengthMm"): what was typed before a unit switch. */
@@ -87,6 +88,12 @@ const text = (v: string | undefined): string | undefined => {
 };
 
 const num = (v: string | undefined): number | string | undefined => parseTypedNumber(v);
+/** A span as written: "7" slot pitches, or "1–8" / "1-8" as the label shows it (lib/engine/notation.ts). */
+const span = (v: string | undefined): number | string | undefined => {
+  const t = (v ?? '').trim();
+  if (t === '') return undefined;
+  return parseSpan(t) ?? t;
+};
 /** Drops keys whose value is undefined, so optional fields are simply absent. */
 const compact = <T extends Record<string, unknown>>(o: T): Partial<T> =>
   Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
@@ -106,7 +113,7 @@ export function formToSheetInput(f: SheetFormValues, unit: LengthUnit, slotTable
       layers: Number(w.layers),
       style: w.style,
       singleLayerCoiling: w.layers === '1' ? (w.singleLayerCoiling || undefined) : undefined,
-      spans: w.coils.map((c) => num(c.span)),
+      spans: w.coils.map((c) => span(c.span)),
       turnsPerCoil: w.coils.map((c) => num(c.turns)),
       coilsPerGroup: num(w.coilsPerGroup),
       groups: num(w.groups),

@@ -93,6 +93,29 @@ async function refuseStale(tx: Tx, jobId: string): Promise<never> {
 }
 
 type JobEdit = z.output<typeof jobEditSchema>;
+
+/** The timeline names each edited detail in words with its old and new value ("Customer PO: — → 4471"). */
+export const EDIT_LABELS: Record<(typeof EDITABLE)[number], string> = {
+  promisedAt: 'Promised date',
+  priority: 'Priority',
+  customerPo: 'Customer PO',
+  reportedFault: 'Reported fault',
+  notes: 'Notes',
+  assigneeId: 'Assigned to',
+};
+
+function editValue(key: (typeof EDITABLE)[number], v: unknown, people: ReadonlyMap<string, string>): string {
+  if (v === null || v === undefined || v === '') return '—';
+  if (v instanceof Date) return v.toISOString().slice(0, 10);
+  if (key === 'assigneeId') return people.get(String(v)) ?? 'a former user';
+  if (key === 'priority') return String(v).toLowerCase();
+  const s = String(v).replace(/\s+/g, ' ');
+  return s.length > 80 ? `${s.slice(0, 77)}…` : s;
+}
+
+export function editLine(key: (typeof EDITABLE)[number], from: unknown, to: unknown, people: ReadonlyMap<string, string>): string {
+  return `${EDIT_LABELS[key]}: ${editValue(key, from, people)} → ${editValue(key, to, people)}`;
+}
 const EDITABLE = ['promisedAt', 'priority', 'customerPo', 'reportedFault', 'notes', 'assigneeId'] as const;
 
 /** Saves the job's details only if nobody changed the job since `version` was read. */
@@ -114,12 +137,13 @@ export async function updateJob(userId: string, input: JobEdit): Promise<{ versi
     });
     if (result.count === 0) await refuseStale(tx, input.jobId);
     const changed = EDITABLE.filter((k) => String(before[k] ?? '') !== String(data[k] ?? ''));
+    const people = new Map((await tx.user.findMany({ where: { id: { in: [before.assigneeId, data.assigneeId].filter((x): x is string => !!x) } }, select: { id: true, name: true } })).map((u) => [u.id, u.name]));
     await tx.jobEvent.create({
       data: {
         jobId: input.jobId,
         userId,
         kind: 'EDIT',
-        message: changed.length ? `Edited ${changed.join(', ')}.` : 'Saved without changes.',
+        message: changed.length ? changed.map((k) => editLine(k, before[k], data[k], people)).join('; ') : 'Saved without changes.',
         data: Object.fromEntries(changed.map((k) => [k, { from: before[k] ?? null, to: data[k] ?? null }])) as Prisma.InputJsonObject,
       },
     });

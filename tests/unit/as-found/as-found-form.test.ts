@@ -48,6 +48,13 @@ describe('the sheet form model', () => {
     expect(input.resistance).toBeUndefined();
   });
 
+  // Issue 9: a span written the way the label shows it is accepted as well as the number of pitches.
+  it.each([['1–8', 7], ['1-8', 7], ['7', 7]])('reads the span "%s" as %i slot pitches', (text, pitches) => {
+    const f = sheetToForm(EXAMPLE_A_SHEET, 'mm');
+    f.winding.coils = [{ span: text as string, turns: '14' }];
+    expect((formToSheetInput(f, 'mm') as { winding: { spans: unknown } }).winding.spans).toEqual([pitches]);
+  });
+
   it('lets the schema name a field typed with words instead of a number', () => {
     const f = sheetToForm(EXAMPLE_A_SHEET, 'mm');
     f.core.boreMm = 'about 150';
