@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { expectedCoils, expectedGroups, RESISTANCE_AGREEMENT_PERCENT, sheetConsistency } from '@/lib/as-found/consistency';
-import { EXAMPLE_A_SHEET, value } from '../engine/winding-fixtures';
+import { EXAMPLE_A_SHEET, value } from '../../support/fixtures/winding-fixtures';
 
 const findings = (s: WindingSheet) => sheetConsistency(s, value(analyseSheet(s)));
 const ids = (s: WindingSheet) => findings(s).map((f) => f.id);
