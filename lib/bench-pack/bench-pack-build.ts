@@ -138,7 +138,7 @@ export function buildBenchPack(input: BenchPackInput): { ok: true; value: BenchP
     spans: [...new Set(g.coils.map((c) => c.span))].map((y) => `1–${y + 1}`).join(', '),
     turns: g.coils.map((c) => c.turns).join('/'),
     sense: g.sense > 0 ? 'forward' : 'reversed',
-    senseText: g.sense > 0 ? '→ forward: current in at S' : '← reversed: current in at F',
+    senseText: g.sense > 0 ? '→ forward (in at S)' : '← reversed (in at F)',
   }));
 
   const circuits: CircuitLine[] = [];
