@@ -1,0 +1,36 @@
+import { currentUser } from '@/lib/auth/guard';
+import { can } from '@/lib/auth/permissions';
+import { loadBenchPack } from '@/lib/bench-pack/bench-pack-data';
+import { renderBenchPackPdf } from '@/lib/bench-pack/bench-pack-pdf';
+import { shopDetails } from '@/lib/job-sheet/shop-details';
+import { parseBenchPackQuery } from '@/lib/schemas/bench-pack';
+import { jobNumberParamsSchema } from '@/lib/schemas/job';
+
+/**
+ * The bench pack PDF for a signed-in user whose role may read jobs (session and role checked first): a
+ * download by default, shown in the browser with ?inline=1. Options as the print view (?marking, ?leads,
+ * ?paper, ?rev, ?basis).
+ */
+export async function GET(req: Request, { params }: { params: Promise<{ number: string }> }): Promise<Response> {
+  const user = await currentUser();
+  if (!user) return new Response('Sign in first.', { status: 401 });
+  if (!can(user.role, 'job.read')) return new Response('Not allowed.', { status: 403 });
+  const parsed = jobNumberParamsSchema.safeParse(await params);
+  if (!parsed.success) return new Response('Not found.', { status: 404 });
+  const url = new URL(req.url);
+  const r = await loadBenchPack(parsed.data.number, parseBenchPackQuery(url.searchParams));
+  if (!r.ok) return new Response(r.reason, { status: r.status, headers: { 'Content-Type': 'text/plain; charset=utf-8' } });
+  const pdf = await renderBenchPackPdf(r.value, shopDetails(), r.options.paper);
+  const basis = r.value.input.basis;
+  const filename = `bench-pack-job-${parsed.data.number}-${basis.kind === 'redesign' ? `rev-${basis.revision}` : 'original'}.pdf`;
+  const inline = url.searchParams.get('inline') === '1';
+  return new Response(new Uint8Array(pdf), {
+    headers: {
+      'Content-Type': 'application/pdf',
+      'Content-Disposition': `${inline ? 'inline' : 'attachment'}; filename="${filename}"`,
+      'Content-Length': String(pdf.length),
+      'Cache-Control': 'private, no-store',
+      'X-Content-Type-Options': 'nosniff',
+    },
+  });
+}
