@@ -4,7 +4,7 @@ import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { benchSettingsSchema, type BenchSettings, type BenchSettingsInput } from '@/lib/schemas/bench-pack';
+import { benchSettingsSchema, type BenchSettings, type BenchSettingsInput } from '@/lib/bench-pack/bench-pack-schema';
 import { saveBenchSettings } from '@/lib/bench-pack/bench-settings-actions';
 import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';

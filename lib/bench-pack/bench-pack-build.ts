@@ -11,7 +11,7 @@ import { leadCountsFor, leadPlan, type LeadConvention, type LeadCount, type Lead
 import { wireDraw } from '@/lib/engine/bench/wire-draw';
 import { mmToInches, mToFeet } from '@/lib/engine/units';
 import { windingLayout, type Phase, type WindingSpec } from '@/lib/engine/winding-layout';
-import { fmt } from '@/lib/format';
+import { fmt } from '@/lib/presentation/format';
 
 export interface Row {
   label: string;

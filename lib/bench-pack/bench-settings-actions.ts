@@ -3,7 +3,7 @@
 /** Bench-pack settings: only an administrator may change them ('settings.manage'). */
 import { guardedAction } from '@/lib/auth/guard';
 import { success } from '@/lib/errors/action-result';
-import { benchSettingsSchema } from '@/lib/schemas/bench-pack';
+import { benchSettingsSchema } from '@/lib/bench-pack/bench-pack-schema';
 import { saveBenchPackSettings } from './bench-settings';
 
 export async function saveBenchSettings(raw: unknown) {

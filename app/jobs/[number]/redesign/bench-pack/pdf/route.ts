@@ -3,8 +3,8 @@ import { can } from '@/lib/auth/permissions';
 import { loadBenchPack } from '@/lib/bench-pack/bench-pack-data';
 import { renderBenchPackPdf } from '@/lib/bench-pack/bench-pack-pdf';
 import { shopDetails } from '@/lib/job-sheet/shop-details';
-import { parseBenchPackQuery } from '@/lib/schemas/bench-pack';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { parseBenchPackQuery } from '@/lib/bench-pack/bench-pack-schema';
+import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
 
 /**
  * The bench pack PDF for a signed-in user whose role may read jobs (session and role checked first): a
