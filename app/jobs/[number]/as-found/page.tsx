@@ -55,7 +55,7 @@ export default async function SheetPage({ params }: { params: Promise<{ number: 
         status {STATUS_LABELS[job.status]} · {saved ? `saved revision ${saved.revision}, ${fmt.dateTime(saved.updatedAt)}` : 'not recorded yet'}
       </p>
       {saved && (
-        <p className="no-print"><Link href={`/jobs/${job.number}/redesign/bench-pack?basis=original`}>Bench pack for a rewind to the original winding</Link> (coil groups, connections, wire to draw, coil sizes)</p>
+        <p className="no-print"><Link href={`${jobRoutes(job.number).benchPack}?basis=original`}>Bench pack for a rewind to the original winding</Link> (coil groups, connections, wire to draw, coil sizes)</p>
       )}
       {!saved && initial.source === 'nameplate' && editable && <p className="notice small">New sheet: supply and rating are filled in from the nameplate. Check them against the winding you find.</p>}
       <SheetEditor

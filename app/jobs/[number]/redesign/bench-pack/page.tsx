@@ -1,11 +1,10 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
 import { loadBenchPack } from '@/lib/bench-pack/bench-pack-data';
 import { connectionDiagram } from '@/lib/bench-pack/connection-diagram';
 import { LEAD_STANDARD } from '@/lib/engine/bench/lead-markings';
 import { benchPackSearch, parseBenchPackQuery } from '@/lib/bench-pack/bench-pack-schema';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute, type JobRouteParams } from '@/lib/jobs/job-route';
+import { jobRoutes } from '@/lib/routes';
 import { PrintButton } from '../print-button';
 import { ConnectionDiagramSvg } from './connection-diagram-svg';
 import './bench-pack.css';
@@ -19,18 +18,19 @@ function Rows({ rows }: { rows: { label: string; value: string }[] }) {
 }
 
 /** The winder's bench pack: the approved winding (or the original) as groups, circuits, leads, wire and coil sizes. */
-export default async function BenchPackPage({ params, searchParams }: { params: Promise<{ number: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
+export default async function BenchPackPage({ params, searchParams }: JobRouteParams & { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const q = parseBenchPackQuery(await searchParams);
-  const r = await loadBenchPack(parsed.data.number, q);
-  if (!r.ok && !r.job) notFound();
-  const number = parsed.data.number;
+  // A job that does not exist is the not-found page; a job without a pack says why.
+  const { job: r } = await loadJobRoute(params, async (n) => {
+    const loaded = await loadBenchPack(n, q);
+    return !loaded.ok && !loaded.job ? null : loaded;
+  });
+  const number = r.ok ? r.value.input.job.number : (r.job?.number ?? 0);
+  const routes = jobRoutes(number);
   if (!r.ok) {
     return (
       <div className="bench-pack">
-        <p className="no-print"><Link href={`/jobs/${number}/redesign`}>← Redesign</Link></p>
+        <p className="no-print"><Link href={routes.redesign}>← Redesign</Link></p>
         <h1>Bench pack · job {number}</h1>
         <p className="notice bad" role="alert">{r.reason}</p>
       </div>
@@ -39,12 +39,12 @@ export default async function BenchPackPage({ params, searchParams }: { params: 
   const d = r.value;
   const o = r.options;
   const basis = d.input.basis;
-  const pdfHref = `/jobs/${number}/redesign/bench-pack/pdf${benchPackSearch({ ...q, marking: o.marking, leads: d.leadPlan.leads, paper: o.paper })}`;
+  const pdfHref = `${routes.benchPackPdf}${benchPackSearch({ ...q, marking: o.marking, leads: d.leadPlan.leads, paper: o.paper })}`;
   const diagram = connectionDiagram(d.plan, d.leadPlan);
   return (
     <div className="bench-pack">
       <p className="no-print row">
-        <Link href={basis.kind === 'redesign' ? `/jobs/${number}/redesign?rev=${basis.revision}` : `/jobs/${number}/sheet`}>← {basis.kind === 'redesign' ? 'Redesign' : 'As-found sheet'}</Link>{' '}
+        <Link href={basis.kind === 'redesign' ? `${routes.redesign}?rev=${basis.revision}` : routes.asFound}>← {basis.kind === 'redesign' ? 'Redesign' : 'As-found sheet'}</Link>{' '}
         <PrintButton label="Print the bench pack" /> <a className="btn secondary" href={pdfHref}>Download PDF</a>
       </p>
       <form className="options no-print card" method="get" aria-label="Bench pack options">

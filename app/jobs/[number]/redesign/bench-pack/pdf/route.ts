@@ -1,9 +1,8 @@
-import { currentUser } from '@/lib/auth/guard';
-import { can } from '@/lib/auth/permissions';
+import { guardedRoute } from '@/lib/auth/route-guard';
 import { loadBenchPack } from '@/lib/bench-pack/bench-pack-data';
 import { renderBenchPackPdf } from '@/lib/bench-pack/bench-pack-pdf';
-import { shopDetails } from '@/lib/job-sheet/shop-details';
 import { parseBenchPackQuery } from '@/lib/bench-pack/bench-pack-schema';
+import { shopDetails } from '@/lib/job-sheet/shop-details';
 import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
 
 /**
@@ -11,18 +10,13 @@ import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
  * download by default, shown in the browser with ?inline=1. Options as the print view (?marking, ?leads,
  * ?paper, ?rev, ?basis).
  */
-export async function GET(req: Request, { params }: { params: Promise<{ number: string }> }): Promise<Response> {
-  const user = await currentUser();
-  if (!user) return new Response('Sign in first.', { status: 401 });
-  if (!can(user.role, 'job.read')) return new Response('Not allowed.', { status: 403 });
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) return new Response('Not found.', { status: 404 });
+export const GET = guardedRoute('job.read', jobNumberParamsSchema, async (req, _user, params) => {
   const url = new URL(req.url);
-  const r = await loadBenchPack(parsed.data.number, parseBenchPackQuery(url.searchParams));
+  const r = await loadBenchPack(params.number, parseBenchPackQuery(url.searchParams));
   if (!r.ok) return new Response(r.reason, { status: r.status, headers: { 'Content-Type': 'text/plain; charset=utf-8' } });
   const pdf = await renderBenchPackPdf(r.value, shopDetails(), r.options.paper);
   const basis = r.value.input.basis;
-  const filename = `bench-pack-job-${parsed.data.number}-${basis.kind === 'redesign' ? `rev-${basis.revision}` : 'original'}.pdf`;
+  const filename = `bench-pack-job-${params.number}-${basis.kind === 'redesign' ? `rev-${basis.revision}` : 'original'}.pdf`;
   const inline = url.searchParams.get('inline') === '1';
   return new Response(new Uint8Array(pdf), {
     headers: {
@@ -33,4 +27,4 @@ export async function GET(req: Request, { params }: { params: Promise<{ number: 
       'X-Content-Type-Options': 'nosniff',
     },
   });
-}
+});
