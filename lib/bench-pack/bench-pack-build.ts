@@ -9,7 +9,8 @@ import { groupLabel, type CoilGroup } from '@/lib/engine/bench/coil-groups';
 import { connectionPlan, type ConnectionPlan, type GroupEnd } from '@/lib/engine/bench/connection-plan';
 import { leadCountsFor, leadPlan, type LeadConvention, type LeadCount, type LeadPlan } from '@/lib/engine/bench/lead-markings';
 import { wireDraw } from '@/lib/engine/bench/wire-draw';
-import { mmToInches, mToFeet } from '@/lib/engine/units';
+import { spanLabel, spansLabel, layoutLabel } from '@/lib/engine/notation';
+import { kgToLb, mmToInches, mToFeet } from '@/lib/engine/units';
 import { windingLayout, type Phase, type WindingSpec } from '@/lib/engine/winding-layout';
 import { fmt } from '@/lib/presentation/format';
 
@@ -99,8 +100,8 @@ export interface BenchPackData {
 
 const end = (e: GroupEnd): string => (e === 'start' ? 'S' : 'F');
 const mmIn = (mm: number): string => `${fmt.num(mm, 0, 'mm')} (${fmt.num(mmToInches(mm), 1, 'in')})`;
-const kgLb = (kg: number): string => `${fmt.num(kg, 2, 'kg')} (${fmt.num(kg * 2.20462, 2, 'lb')})`;
-const spanText = (y: number): string => `1–${y + 1} (${y} slot pitches)`;
+const kgLb = (kg: number): string => `${fmt.num(kg, 2, 'kg')} (${fmt.num(kgToLb(kg), 2, 'lb')})`;
+const spanText = (y: number): string => `${spanLabel(y)} (${y} slot pitches)`;
 
 /** Words for the pole connection the layout needs. */
 export function poleConnectionText(plan: ConnectionPlan): string {
@@ -135,7 +136,7 @@ export function buildBenchPack(input: BenchPackInput): { ok: true; value: BenchP
   const groups: GroupRow[] = plan.groups.groups.map((g: CoilGroup) => ({
     number: g.number, label: groupLabel(g), phase: g.phase, pole: g.pole, coils: g.coils.length,
     slots: g.coils.map((c) => `${c.startSlot}→${c.finishSlot}`).join(', '),
-    spans: [...new Set(g.coils.map((c) => c.span))].map((y) => `1–${y + 1}`).join(', '),
+    spans: spansLabel([...new Set(g.coils.map((c) => c.span))]),
     turns: g.coils.map((c) => c.turns).join('/'),
     sense: g.sense > 0 ? 'forward' : 'reversed',
     senseText: g.sense > 0 ? '→ forward (in at S)' : '← reversed (in at F)',
@@ -187,7 +188,7 @@ export function buildBenchPack(input: BenchPackInput): { ok: true; value: BenchP
   const conn = w.connection === 'star' ? 'star (Y)' : 'delta (Δ)';
   const summary: Row[] = [
     { label: 'Supply', value: `${fmt.num(input.supply.lineVoltageV, 0, 'V')} ${fmt.num(input.supply.frequencyHz, 0, 'Hz')}, ${w.poles} poles, ${conn}` },
-    { label: 'Slots, layers', value: `${w.slots} slots, ${w.layers === 2 ? 'double' : 'single'}-layer ${w.style}${w.singleLayerCoiling ? `, ${w.singleLayerCoiling}-coiled` : ''}` },
+    { label: 'Slots, layers', value: `${w.slots} slots, ${layoutLabel(w)}${w.singleLayerCoiling ? `, ${w.singleLayerCoiling}-coiled` : ''}` },
     { label: 'Coil span', value: w.spans.map(spanText).join(', ') },
     { label: 'Turns per coil', value: w.turnsPerCoil.join(' / ') },
     { label: 'Wires in hand', value: input.wires.map((x) => `${x.count} × ${x.label}`).join(' + ') },

@@ -8,6 +8,7 @@ import type { OldCoils } from '@/lib/engine/bench/coil-dimensions';
 import type { LeadCount } from '@/lib/engine/bench/lead-markings';
 import { windingInputFromSheet } from '@/lib/engine/analyse-sheet';
 import { INSULATION_CLASS_TEMP_C } from '@/lib/engine/nameplate';
+import { mToMm } from '@/lib/engine/units';
 import { stockWire } from '@/lib/engine/redesign/from-sheet';
 import { listRedesigns } from '@/lib/redesign/redesign-queries';
 import type { BenchPackQuery } from '@/lib/bench-pack/bench-pack-schema';
@@ -78,7 +79,7 @@ export async function loadBenchPack(jobNumber: number, q: BenchPackQuery): Promi
       basis: { kind: 'redesign', revision: r.revision, approvedBy: snap.approval.byName, approvedAt: new Date(snap.approval.at), note: snap.approval.note, current: approved[0]?.revision === r.revision, currentRevision: approved[0]?.revision ?? null },
       supply: { lineVoltageV: snap.request.target.lineVoltageV, frequencyHz: snap.request.target.frequencyHz },
       winding: c.winding,
-      core: sheet ? coreOf(sheet) : { boreMm: o.core.boreM * 1000, coreLengthMm: o.core.coreLengthM * 1000, slotDepthMm: o.core.slotDepthM * 1000, slots: o.core.slots },
+      core: sheet ? coreOf(sheet) : { boreMm: mToMm(o.core.boreM), coreLengthMm: mToMm(o.core.coreLengthM), slotDepthMm: mToMm(o.core.slotDepthM), slots: o.core.slots },
       oldCoils: oldCoilsOf(sheet) ?? { spans: o.winding.spans, turnsPerCoil: o.winding.turnsPerCoil, ...(o.meanTurnLengthMm !== undefined ? { meanTurnLengthMm: o.meanTurnLengthMm } : {}) },
       wires: c.wires.parts.map((p): BenchWire => ({ label: p.wire.label, enamelGrade: p.wire.enamelGrade, count: p.count, areaMm2: p.wire.areaMm2, onHandKg: onHand(stock, p.wire) })),
       insulation: insulationRows(sheet),
