@@ -8,6 +8,7 @@
  */
 import { COPPER_DENSITY_KG_PER_M3 } from '../copper';
 import { fail, ok, type EngineResult } from '../result';
+import { mmToM } from '../units';
 
 /** Allowance for leads, jumpers and waste when the shop has set none: 10 % [common practice, from memory]. */
 export const DEFAULT_WIRE_ALLOWANCE = 0.1;
@@ -57,7 +58,7 @@ export function wireDraw(coils: CoilTurns[], parts: WirePart[], allowance: numbe
     return fail('invalid-input', 'Every coil needs positive turns and a positive mean turn length.', 'Check the winding and the core.', 'winding');
   if (parts.length === 0 || parts.some((p) => !(p.count > 0) || !(p.areaMm2 > 0) || !Number.isFinite(p.areaMm2)))
     return fail('invalid-input', 'Every wire in hand needs a positive count and area.', 'Check the wires in hand.', 'wires');
-  const conductorLengthM = coils.reduce((t, c) => t + (c.turns * c.meanTurnLengthMm) / 1000, 0);
+  const conductorLengthM = coils.reduce((t, c) => t + c.turns * mmToM(c.meanTurnLengthMm), 0);
   const lines = parts.map((p) => {
     const lengthM = p.count * conductorLengthM;
     const copperKg = lengthM * p.areaMm2 * 1e-6 * COPPER_DENSITY_KG_PER_M3;
