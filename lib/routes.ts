@@ -12,6 +12,8 @@ export const jobRoutes = (jobNumber: number | string) => {
     finalTests: `${base}/final-tests`,
     redesign: `${base}/redesign`,
     redesignPrint: `${base}/redesign/print`,
+    benchPack: `${base}/redesign/bench-pack`,
+    benchPackPdf: `${base}/redesign/bench-pack/pdf`,
     jobSheet: `${base}/job-sheet`,
     jobSheetPdf: `${base}/job-sheet/pdf`,
   };
