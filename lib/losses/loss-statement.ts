@@ -39,7 +39,11 @@ export interface LossStatementInput {
 
 const w = (v: number): string => `${v.toFixed(1)} W`;
 const ohm = (v: number): string => `${v.toPrecision(4)} Ω`;
-const signed = (v: number, unit: string, digits = 1): string => `${v >= 0 ? '+' : '−'}${Math.abs(v).toFixed(digits)}${unit}`;
+/** Sign and magnitude, rounded first so that a rounding residue never prints as "−0.00". */
+const signed = (v: number, unit: string, digits = 1): string => {
+  const r = Number(v.toFixed(digits));
+  return `${r >= 0 ? '+' : '−'}${Math.abs(r).toFixed(digits)}${unit}`;
+};
 
 function sentence(l: RewindLosses, what: string): string {
   const copper = Math.abs(l.copperChangeW) < 0.05

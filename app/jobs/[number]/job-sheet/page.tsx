@@ -5,6 +5,7 @@ import { db } from '@/lib/db/client';
 import { loadJobSheet, type Row } from '@/lib/job-sheet/job-sheet-data';
 import { OverallVerdict, SectionVerdict } from '../tests/judgement-view';
 import { PrintButton } from './print-button';
+import { LossStatementView } from '../_losses/loss-statement-view';
 import '../tests/tests.css';
 import './job-sheet.css';
 import { jobNumberParamsSchema } from '@/lib/schemas/job';
@@ -112,6 +113,7 @@ export default async function JobSheetPage({ params }: { params: Promise<{ numbe
             </>
           ) : <p>No final tests have been recorded yet.</p>}
         </section>
+        <LossStatementView result={d.losses} headingId="js-losses" level="h2" />
 
         <section aria-labelledby="js-sign">
           <h2 id="js-sign">Signatures</h2>

@@ -14,6 +14,7 @@ import { fmt } from '@/lib/format';
 import { RequestForm } from './request-form';
 import { CandidateTable } from './candidate-table';
 import { Cautions, ComparisonTable, NameplateProposal } from './comparison';
+import { JobLosses } from '../_losses/job-losses';
 import { ApproveForm } from './approve-form';
 import './redesign.css';
 import { jobNumberParamsSchema } from '@/lib/schemas/job';
@@ -151,6 +152,7 @@ function ApprovedRevision({ r, number }: { r: RedesignRevision; number: number }
         This revision cannot be changed: a new request opens the next revision. <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>Printable winding for the winder</Link>
       </p>
       <ComparisonTable report={snap.report} />
+      <JobLosses jobNumber={number} comparing={snap.report} headingId="losses-approved-h" />
       <h3>Proposed supplementary nameplate</h3>
       <NameplateProposal report={snap.report} />
       <h3>Cautions</h3>
@@ -177,6 +179,7 @@ function DraftRevision({ r, ctx, canEdit, mayApprove }: { r: RedesignRevision; c
         <section className="card" aria-labelledby="chosen-h" id="chosen">
           <h2 id="chosen-h">Candidate {chosen.rank} beside the as-found winding</h2>
           <ComparisonTable report={report.value} />
+          <JobLosses jobId={ctx.sheet.jobId} comparing={report.value} headingId="losses-draft-h" />
           <h3>Proposed supplementary nameplate</h3>
           <NameplateProposal report={report.value} />
           <h3>Cautions</h3>

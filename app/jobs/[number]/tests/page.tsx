@@ -18,6 +18,7 @@ import { OverallVerdict, SectionVerdict } from './judgement-view';
 import { RecordReadings } from './record-readings';
 import { TestsForm } from './tests-form';
 import './tests.css';
+import { JobLosses } from '../_losses/job-losses';
 import { jobNumberParamsSchema } from '@/lib/schemas/job';
 
 
@@ -85,6 +86,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
         )}
         {closed && <p className="notice">This job is {STATUS_LABELS[job.status].toLowerCase()}: its test records are kept as they were.</p>}
       </section>
+      <section className="card"><JobLosses jobId={job.id} headingId="losses-h" /></section>
 
       {mayRecord && (
         <section className="card">
