@@ -84,7 +84,7 @@ export function buildLossStatement(i: LossStatementInput): LossStatement | null 
     rows.push({ label: 'Losses at rated output', value: `${i.outputKw?.toFixed(2)} kW × (1/${predicted.efficiency.efficiencyBefore.toFixed(3)} − 1) = ${w(predicted.efficiency.lossesBeforeW)} from the nameplate efficiency` });
   }
   rows.push({ label: 'Core loss change', value: i.coreLossChangeW === null ? i.coreLossNote : `${signed(i.coreLossChangeW, ' W', 2)}: ${i.coreLossNote}` });
-  const findings = [predicted.finding, measured?.finding].filter((f): f is string => f !== null);
+  const findings = [predicted.finding, measured?.finding].filter((f): f is string => typeof f === 'string');
   const assumptions = [
     'Copper loss P = 3·I_ph²·R_ph at rated current (= 1.5·I²·R line-to-line, as IEEE 112 and IEC 60034-2-1 write it), resistance brought from 20 °C with copper’s 234.5 °C constant.',
     predicted.efficiency
