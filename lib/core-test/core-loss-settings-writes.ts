@@ -4,7 +4,7 @@
  */
 import { db, Prisma } from '@/lib/db/client';
 import { DomainError } from '@/lib/errors/domain-errors';
-import type { CoreLossSettingsForm } from '@/lib/schemas/core-test';
+import type { CoreLossSettingsForm } from '@/lib/core-test/core-test-schema';
 import { CORE_LOSS_SETTINGS_ID } from './core-loss-settings';
 
 export const CORE_SETTINGS_STALE = 'Someone else saved the core-loss settings while you were editing. Your values are still in the form: review the current ones, then save again.';

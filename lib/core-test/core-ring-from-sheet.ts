@@ -1,7 +1,7 @@
 /** The core of an as-found sheet as the loop test sees it (mm → m, once). Pure: usable on the client. */
 import type { CoreRing } from '@/lib/engine/core-loss/core-ring';
 import { mmToM } from '@/lib/engine/units';
-import type { WindingSheet } from '@/lib/schemas/winding-sheet';
+import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 
 export function coreRingFromSheet(core: WindingSheet['core']): CoreRing {
   return {

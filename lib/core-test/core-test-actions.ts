@@ -7,7 +7,7 @@
  */
 import { guardedAction } from '@/lib/auth/guard';
 import { success } from '@/lib/errors/action-result';
-import { CORE_TEST_STAGE_LABELS, coreLossSettingsSchema, coreTestFormSchema } from '@/lib/schemas/core-test';
+import { CORE_TEST_STAGE_LABELS, coreLossSettingsSchema, coreTestFormSchema } from '@/lib/core-test/core-test-schema';
 import { saveCoreLossSettings } from './core-loss-settings-writes';
 import { saveCoreTest } from './core-test-writes';
 

@@ -3,7 +3,7 @@
  */
 import { KG_PER_LB } from '@/lib/engine/core-loss/iron-mass';
 import { mmToInches, teslaToKilolinesPerIn2 } from '@/lib/engine/units';
-import { fmt } from '@/lib/format';
+import { fmt } from '@/lib/presentation/format';
 
 const MM2_PER_IN2 = 25.4 * 25.4;
 

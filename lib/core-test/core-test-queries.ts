@@ -2,7 +2,12 @@
  * Reads of a job's core-loss tests, newest first; stored data is parsed with the schema it was saved with.
  */
 import { db } from '@/lib/db/client';
-import { coreTestDataSchema, type CoreTestData, type CoreTestStageValue } from '@/lib/schemas/core-test';
+import { coreTestDataSchema, type CoreTestData, type CoreTestStageValue } from '@/lib/core-test/core-test-schema';
+
+/** What the core-test screen needs of a job: status and customer. */
+export async function getJobForCoreTest(number: number) {
+  return db().job.findUnique({ where: { number }, select: { id: true, number: true, status: true, customer: { select: { company: true } } } });
+}
 
 export interface StoredCoreTest {
   id: string;

@@ -7,8 +7,8 @@ import { db, Prisma } from '@/lib/db/client';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { recordJobEvent } from '@/lib/jobs/job-writes';
 import { CLOSED_STATUSES, STATUS_LABELS } from '@/lib/jobs/status-flow';
-import { CORE_TEST_STAGE_LABELS, type CoreTestData, type CoreTestForm } from '@/lib/schemas/core-test';
-import { getAsFoundSheet } from '@/lib/sheets/sheet-queries';
+import { CORE_TEST_STAGE_LABELS, type CoreTestData, type CoreTestForm } from '@/lib/core-test/core-test-schema';
+import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
 
 export const CORE_TEST_MESSAGES = {
   closed: (status: string) => `This job is ${status.toLowerCase()}: its core-loss tests are kept as they were and cannot be changed.`,

@@ -12,8 +12,8 @@ import type { WindingForLoss } from '@/lib/engine/losses/rewind-losses';
 import type { RedesignReport } from '@/lib/engine/redesign/report';
 import { correctResistanceOhm, phaseFromLineToLineOhm, type Connection } from '@/lib/engine/resistance';
 import { getApprovedRedesign } from '@/lib/redesign/redesign-queries';
-import { getAsFoundSheet } from '@/lib/sheets/sheet-queries';
-import { listTestRecords } from '@/lib/tests-domain/test-record-queries';
+import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
+import { listTestRecords } from '@/lib/final-tests/record-queries';
 import { buildLossStatement, type LossStatement } from './loss-statement';
 
 export type LossStatementResult = { statement: LossStatement; reason: null } | { statement: null; reason: string };

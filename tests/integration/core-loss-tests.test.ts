@@ -7,7 +7,7 @@ import { CORE_SETTINGS_STALE } from '@/lib/core-test/core-loss-settings-writes';
 import { listCoreTests } from '@/lib/core-test/core-test-queries';
 import { CORE_TEST_MESSAGES } from '@/lib/core-test/core-test-writes';
 import { lossStatementForJob } from '@/lib/losses/loss-statement-source';
-import { NUL_MESSAGE, type CoreTestFormInput } from '@/lib/schemas/core-test';
+import { NUL_MESSAGE, type CoreTestFormInput } from '@/lib/core-test/core-test-schema';
 import { useTestDatabase } from '../support/test-db';
 import { actAs, signOutTest } from '../support/session';
 import { ADMIN, ENGINEER, FRONT_DESK, WINDER } from '../support/demo-users';

@@ -6,10 +6,10 @@ import { useRouter } from 'next/navigation';
 import { FormProvider, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { saveCoreLossSettingsAction } from '@/lib/core-test/core-test-actions';
-import { coreLossSettingsSchema, type CoreLossSettingsForm, type CoreLossSettingsFormInput } from '@/lib/schemas/core-test';
+import { coreLossSettingsSchema, type CoreLossSettingsForm, type CoreLossSettingsFormInput } from '@/lib/core-test/core-test-schema';
 import { FIX_FIELDS_SUMMARY, showActionFailure } from '@/lib/errors/form-errors';
 import { FormStatus } from '@/app/_components/form-status';
-import { NumberField } from '../tests/test-fields';
+import { NumberField } from '../final-tests/test-fields';
 
 export function CoreSettingsForm({ values }: { values: CoreLossSettingsFormInput }) {
   const router = useRouter();

@@ -11,10 +11,11 @@ import { useRouter } from 'next/navigation';
 import { FormProvider, useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { saveCoreTestAction } from '@/lib/core-test/core-test-actions';
-import { CORE_TEST_STAGES, CORE_TEST_STAGE_LABELS, MAX_HOT_SPOTS, coreTestFormSchema, type CoreTestForm, type CoreTestFormInput } from '@/lib/schemas/core-test';
+import { CORE_TEST_STAGES, CORE_TEST_STAGE_LABELS, MAX_HOT_SPOTS, coreTestFormSchema, type CoreTestForm, type CoreTestFormInput } from '@/lib/core-test/core-test-schema';
 import { FIX_FIELDS_SUMMARY, showActionFailure } from '@/lib/errors/form-errors';
 import { FormStatus } from '@/app/_components/form-status';
-import { NumberField, SelectField, TextField } from '../tests/test-fields';
+import { jobRoutes } from '@/lib/routes';
+import { NumberField, SelectField, TextField } from '../final-tests/test-fields';
 
 export function CoreTestFormView({ values, editing, staff, jobNumber, slots, coreLengthMm }: {
   values: CoreTestFormInput;
@@ -51,7 +52,7 @@ export function CoreTestFormView({ values, editing, staff, jobNumber, slots, cor
     <FormProvider {...methods}>
       <form onSubmit={onSubmit} noValidate aria-labelledby="core-form-h">
         <h2 id="core-form-h" style={{ marginTop: 0 }}>{editing ? `Edit the test ${editing.label}` : 'Record a core-loss test'}</h2>
-        {editing && <p className="small"><Link href={`/jobs/${jobNumber}/core-test`}>Record a new test instead</Link></p>}
+        {editing && <p className="small"><Link href={jobRoutes(jobNumber).coreTest}>Record a new test instead</Link></p>}
         <div className="grid">
           <SelectField path="stage" label="When" options={CORE_TEST_STAGES.map((s) => [s, CORE_TEST_STAGE_LABELS[s]] as const)} />
           <TextField path="testedAt" label="Tested at (UTC, YYYY-MM-DDTHH:MM)" />

@@ -2,9 +2,10 @@
 import Link from 'next/link';
 import type { TestFigures } from '@/lib/core-test/core-test-report';
 import { coreText } from '@/lib/core-test/core-test-display';
-import { CORE_TEST_STAGE_LABELS } from '@/lib/schemas/core-test';
-import { fmt } from '@/lib/format';
-import { temperatureText } from '@/lib/tests-domain/test-display';
+import { CORE_TEST_STAGE_LABELS } from '@/lib/core-test/core-test-schema';
+import { jobRoutes } from '@/lib/routes';
+import { fmt } from '@/lib/presentation/format';
+import { temperatureText } from '@/lib/final-tests/display';
 
 export function CoreTestResults({ figures, jobNumber, mayEdit }: { figures: readonly TestFigures[]; jobNumber: number; mayEdit: boolean }) {
   if (figures.length === 0) return <p>No core-loss tests recorded yet.</p>;
@@ -23,7 +24,7 @@ export function CoreTestResults({ figures, jobNumber, mayEdit }: { figures: read
             <tr key={t.id}>
               <th scope="row">
                 {CORE_TEST_STAGE_LABELS[t.stage]}<br /><span className="small">{fmt.dateTime(t.testedAt)}</span>
-                {mayEdit && <><br /><Link className="small" href={`/jobs/${jobNumber}/core-test?edit=${t.id}`}>Edit<span className="sr-only"> the test {CORE_TEST_STAGE_LABELS[t.stage].toLowerCase()} of {fmt.dateTime(t.testedAt)}</span></Link></>}
+                {mayEdit && <><br /><Link className="small" href={`${jobRoutes(jobNumber).coreTest}?edit=${t.id}`}>Edit<span className="sr-only"> the test {CORE_TEST_STAGE_LABELS[t.stage].toLowerCase()} of {fmt.dateTime(t.testedAt)}</span></Link></>}
               </th>
               <td>{t.data.loopTurns} turns · {fmt.num(t.data.voltageV, 1, 'V')} · {fmt.num(t.data.currentA, 2, 'A')} · {fmt.num(t.data.watts, 1, 'W')} · {fmt.num(t.data.frequencyHz, 0, 'Hz')}{t.data.durationMin ? ` · ${t.data.durationMin} min` : ''}</td>
               {result ? (

@@ -9,7 +9,7 @@ import { useId, useState } from 'react';
 import type { CoreRing } from '@/lib/engine/core-loss/core-ring';
 import { loopTestPlan } from '@/lib/engine/core-loss/loop-plan';
 import { coreText } from '@/lib/core-test/core-test-display';
-import { fmt } from '@/lib/format';
+import { fmt } from '@/lib/presentation/format';
 
 const num = (s: string): number | undefined => {
   const n = Number(s.trim().replace(',', '.'));

@@ -1,20 +1,18 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
-import { db } from '@/lib/db/client';
 import { getCoreLossSettings } from '@/lib/core-test/core-loss-settings';
 import { CORE_TEST_CAUTIONS } from '@/lib/core-test/core-test-cautions';
-import { listCoreTests } from '@/lib/core-test/core-test-queries';
+import { getJobForCoreTest, listCoreTests } from '@/lib/core-test/core-test-queries';
 import { coreRingFromSheet } from '@/lib/core-test/core-ring-from-sheet';
 import { coreTestReport, DEFAULT_PLANNING_SUPPLY_V } from '@/lib/core-test/core-test-report';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import { listStaff } from '@/lib/jobs/job-queries';
 import { CLOSED_STATUSES } from '@/lib/jobs/status-flow';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
-import type { CoreTestFormInput } from '@/lib/schemas/core-test';
-import { getAsFoundSheet } from '@/lib/sheets/sheet-queries';
+import { loadJobRoute } from '@/lib/jobs/job-route';
+import { jobRoutes } from '@/lib/routes';
+import type { CoreTestFormInput } from '@/lib/core-test/core-test-schema';
+import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
 import { CoreDrawing, type DrawnHotSpot } from './core-drawing';
 import { CoreSettingsForm } from './core-settings-form';
 import { CoreTestFormView } from './core-test-form';
@@ -31,12 +29,8 @@ const nowLocal = () => new Date().toISOString().slice(0, 16);
 const blank = (v: number | undefined) => (v === undefined ? '' : v);
 
 export default async function CoreTestPage({ params, searchParams }: { params: Promise<{ number: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
+  const { user, job } = await loadJobRoute(params, getJobForCoreTest);
   const { edit } = searchSchema.parse(await searchParams);
-  const job = await db().job.findUnique({ where: { number: parsed.data.number }, select: { id: true, number: true, status: true, customer: { select: { company: true } } } });
-  if (!job) notFound();
   const [sheet, tests, settings, staff] = await Promise.all([getAsFoundSheet(job.id), listCoreTests(job.id), getCoreLossSettings(), listStaff()]);
   const analysis = sheet ? analyseSheet(sheet.sheet) : null;
   const yokeT = analysis?.ok ? analysis.value.winding.flux?.yoke.tesla ?? null : null;
@@ -65,7 +59,7 @@ export default async function CoreTestPage({ params, searchParams }: { params: P
 
   return (
     <>
-      <p className="no-print"><Link href={`/jobs/${job.number}`}>← Job {job.number}</Link></p>
+      <p className="no-print"><Link href={jobRoutes(job.number).job}>← Job {job.number}</Link></p>
       <h1>Core-loss (loop) test · job {job.number} · {job.customer.company}</h1>
 
       <section className="notice warn cautions" aria-labelledby="core-cautions-h">
@@ -75,7 +69,7 @@ export default async function CoreTestPage({ params, searchParams }: { params: P
 
       <section className="card" aria-labelledby="plan-h">
         <h2 id="plan-h" style={{ marginTop: 0 }}>Planning the test</h2>
-        {!sheet && <p className="notice">No as-found sheet is saved: enter the core on the <Link href={`/jobs/${job.number}/sheet`}>as-found sheet</Link> to plan the test and work out W/kg.</p>}
+        {!sheet && <p className="notice">No as-found sheet is saved: enter the core on the <Link href={jobRoutes(job.number).asFound}>as-found sheet</Link> to plan the test and work out W/kg.</p>}
         {report.planError && <p className="notice bad">{report.planError.message} {report.planError.hint}</p>}
         {sheet && report.plan && (
           <>
