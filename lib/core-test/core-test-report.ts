@@ -41,7 +41,7 @@ export interface CoreTestReport {
 }
 
 /**
- * @param ratedBackIronT back-iron density at rated voltage from the as-found analysis (reference §2), if known
+ * @param ratedBackIronT back-iron density at rated voltage from the as-found analysis (docs/engineering/flux-density.md), if known
  */
 export function coreTestReport(sheet: WindingSheet | null, tests: readonly StoredCoreTest[], settings: CoreLossSettings, ratedBackIronT: number | null): CoreTestReport {
   const planned = sheet

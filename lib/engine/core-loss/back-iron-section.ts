@@ -1,7 +1,7 @@
 /**
  * Back-iron (yoke) cross-section, the area the loop test's flux passes through.
  *
- *   d_y  = (D_o − D)/2 − h_s                (back-iron depth; reference §2)
+ *   d_y  = (D_o − D)/2 − h_s                (back-iron depth; docs/engineering/flux-density.md)
  *   L_fe = (L − n_d·w_d)·k_fe                (net iron length: vent ducts out, stacking factor applied)
  *   A_y  = d_y·L_fe
  *

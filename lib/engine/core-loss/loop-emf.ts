@@ -2,7 +2,7 @@
  * The test loop as a transformer winding round the back iron: a sinusoidal flux of peak B·A through N turns
  * induces the rms voltage
  *
- *   E = √2·π·f·N·B·A        (= 4.44·f·N·B·A; the transformer EMF equation, the same as reference §2's
+ *   E = √2·π·f·N·B·A        (= 4.44·f·N·B·A; the transformer EMF equation, the same as docs/engineering/flux-density.md's
  *                            E = 4.44·f·N·Φ with Φ = B·A and no winding factor: the loop links all the flux)
  *
  * B is the peak flux density in the back iron (tesla), A its net cross-section (m²). Solved for B or N.

@@ -3,7 +3,7 @@
  *
  *   ΔP_fe = (p_ref,after − p_ref,before)·m_y·(B_y,rated/B_ref)²
  *
- * with B_y,rated the back-iron density of the winding at rated voltage (reference §2) and the same B²
+ * with B_y,rated the back-iron density of the winding at rated voltage (docs/engineering/flux-density.md) and the same B²
  * assumption as specific-loss.ts. Only meaningful at the test frequency: the caller passes null when the
  * tests ran at another frequency than the rating. Back iron only: the teeth see other densities and are
  * left out (stated on the screen) [common practice approximation].

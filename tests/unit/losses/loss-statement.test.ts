@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildLossStatement, type LossStatementInput } from '@/lib/losses/loss-statement';
 
-/** Example A winding (reference §4): R_ph(20 °C) 1.4293 Ω, star, 5 A; class F → 115 °C. */
+/** Example A winding (docs/engineering/wire-and-resistance.md): R_ph(20 °C) 1.4293 Ω, star, 5 A; class F → 115 °C. */
 const base: LossStatementInput = {
   thermalClass: 'F',
   before: { source: 'as-found data sheet, revision 1, predicted', phaseOhm20: 1.4293, connection: 'star', lineCurrentA: 5 },

@@ -9,9 +9,9 @@ import { loopTestPlan } from '@/lib/engine/core-loss/loop-plan';
 import { meanMagneticPathM } from '@/lib/engine/core-loss/magnetic-path';
 import { EXAMPLE_A_RING, rel } from './fixtures';
 
-describe('core geometry of the example A core (reference §2 core; values [derived] step by step)', () => {
+describe('core geometry of the example A core (docs/engineering/flux-density.md core; values [derived] step by step)', () => {
   const s = backIronSection(EXAMPLE_A_RING);
-  it('back-iron depth d_y = (240 − 150)/2 − 20 = 25 mm (reference §2, example A)', () => expect(s.depthM).toBeCloseTo(0.025, 12));
+  it('back-iron depth d_y = (240 − 150)/2 − 20 = 25 mm (docs/engineering/flux-density.md, example A)', () => expect(s.depthM).toBeCloseTo(0.025, 12));
   it('net iron length L_fe = 120 mm × 0.95 = 114 mm [derived]', () => expect(s.netIronLengthM).toBeCloseTo(0.114, 12));
   it('cross-section A = 25 × 114 = 2850 mm² [derived]', () => expect(s.areaM2).toBeCloseTo(2.85e-3, 12));
   it('mean path l_m = π·(240 − 25) mm = 675.44 mm [derived]', () => expect(meanMagneticPathM(0.24, s.depthM)).toBeCloseTo(0.675442, 6));
@@ -23,7 +23,7 @@ describe('core geometry of the example A core (reference §2 core; values [deriv
     expect(backIronSection({ ...EXAMPLE_A_RING, ventDucts: 2, ventDuctWidthM: 0.01 }).netIronLengthM).toBeCloseTo(0.095, 12));
 });
 
-describe('loop EMF E = √2·π·f·N·B·A (transformer EMF equation, reference §2 with Φ = B·A)', () => {
+describe('loop EMF E = √2·π·f·N·B·A (transformer EMF equation, docs/engineering/flux-density.md with Φ = B·A)', () => {
   it('gives 0.82304 V per turn at 1.3 T, 50 Hz, 2850 mm² (4.44288·50·1.3·2.85e-3) [derived]', () =>
     expect(rel(loopVoltageV(50, 1, 1.3, 2.85e-3), 0.823044)).toBeLessThan(1e-5));
   it('needs 280 turns on 230 V (230/0.823044 = 279.45, rounded up) and then drives 1.2974 T [derived]', () => {

@@ -7,7 +7,7 @@ import { resistanceAtSpecifiedTemperatureOhm, SPECIFIED_TEMPERATURE_C } from '@/
 import { rewindLosses, type WindingForLoss } from '@/lib/engine/losses/rewind-losses';
 
 const rel = (a: number, b: number): number => Math.abs(a - b) / Math.abs(b);
-/** Example A winding: R_ph(20 °C) = 1.4293 Ω (reference §4), star, 5 A rated. */
+/** Example A winding: R_ph(20 °C) = 1.4293 Ω (docs/engineering/wire-and-resistance.md), star, 5 A rated. */
 const EXAMPLE_A: WindingForLoss = { source: 'example A', phaseOhm20: 1.4293, connection: 'star', lineCurrentA: 5 };
 
 describe('reference temperature (IEEE 112 specified temperatures [from memory], 234.5 °C constant)', () => {
