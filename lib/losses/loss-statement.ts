@@ -58,7 +58,7 @@ function sentence(l: RewindLosses, what: string): string {
 function windingRows(prefix: string, l: RewindLosses['before']): LossRow[] {
   return [
     { label: `${prefix}: resistance`, value: `${ohm(l.phaseOhm20)} per phase at 20 °C → ${ohm(l.phaseOhmAtReference)} at the reference temperature (${l.source})` },
-    { label: `${prefix}: copper loss`, value: `3 × (${l.lineCurrentA.toFixed(2)} A ${l.connection === 'delta' ? '÷ √3' : ''})² × ${ohm(l.phaseOhmAtReference)} = ${w(l.copperLossW)} (${l.connection})` },
+    { label: `${prefix}: copper loss`, value: `3 × (${l.lineCurrentA.toFixed(2)} A${l.connection === 'delta' ? ' ÷ √3' : ''})² × ${ohm(l.phaseOhmAtReference)} = ${w(l.copperLossW)} (${l.connection})` },
   ];
 }
 

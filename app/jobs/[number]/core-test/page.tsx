@@ -82,7 +82,7 @@ export default async function CoreTestPage({ params, searchParams }: { params: P
       <section className="card" aria-labelledby="verdict-h">
         <h2 id="verdict-h" style={{ marginTop: 0 }}>Verdict on the core</h2>
         <div className={`notice ${report.verdict.status === 'acceptable' ? 'ok' : report.verdict.status === 'not-acceptable' ? 'bad' : ''}`} data-testid="core-verdict" role="status">
-          <p><strong>{report.verdict.status === 'acceptable' ? '✓ Core acceptable' : report.verdict.status === 'not-acceptable' ? '⚠ Core NOT acceptable' : 'No verdict yet'}</strong></p>
+          <p><strong>{report.verdict.status === 'acceptable' ? '✓ Core acceptable' : report.verdict.status === 'not-acceptable' ? '⚠ Core NOT acceptable' : 'Not judged yet'}</strong></p>
           {report.verdict.words.map((w) => <p key={w}>{w}</p>)}
         </div>
         <p className="small muted">

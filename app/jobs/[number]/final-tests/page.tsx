@@ -76,7 +76,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
         )}
         {closed && <p className="notice">This job is {STATUS_LABELS[job.status].toLowerCase()}: its test records are kept as they were.</p>}
       </section>
-      <section className="card"><JobLosses jobId={job.id} headingId="losses-h" /></section>
+      <section className="card"><JobLosses jobId={job.id} headingId="losses-h" level="h2" /></section>
 
       {mayRecord && (
         <section className="card">
