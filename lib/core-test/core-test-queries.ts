@@ -6,7 +6,7 @@ import { coreTestDataSchema, type CoreTestData, type CoreTestStageValue } from '
 
 /** What the core-test screen needs of a job: status and customer. */
 export async function getJobForCoreTest(number: number) {
-  return db().job.findUnique({ where: { number }, select: { id: true, number: true, status: true, customer: { select: { company: true } } } });
+  return db().job.findUnique({ where: { number }, select: { id: true, number: true, status: true, heldFrom: true, customer: { select: { company: true } } } });
 }
 
 export interface StoredCoreTest {

@@ -6,7 +6,8 @@
 import { db, Prisma } from '@/lib/db/client';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { recordJobEvent } from '@/lib/jobs/job-writes';
-import { CLOSED_STATUSES, STATUS_LABELS } from '@/lib/jobs/status-flow';
+import { isRecordLocked } from '@/lib/jobs/record-locks';
+import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { CORE_TEST_STAGE_LABELS, type CoreTestData, type CoreTestForm } from '@/lib/core-test/core-test-schema';
 import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
 
@@ -50,9 +51,9 @@ export async function saveCoreTest(userId: string, input: CoreTestForm): Promise
     testedById: input.testedById,
   };
   return db().$transaction(async (tx) => {
-    const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true } });
+    const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true, heldFrom: true } });
     if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
-    if (CLOSED_STATUSES.includes(job.status)) throw new DomainError('frozen', CORE_TEST_MESSAGES.closed(STATUS_LABELS[job.status]));
+    if (isRecordLocked('coreTests', job.status, job.heldFrom)) throw new DomainError('frozen', CORE_TEST_MESSAGES.closed(STATUS_LABELS[job.status]));
     const tester = await tx.user.findUnique({ where: { id: input.testedById }, select: { active: true } });
     if (!tester?.active) throw new DomainError('invalid', MESSAGES.invalid, { testedById: [CORE_TEST_MESSAGES.unknownTester] });
 

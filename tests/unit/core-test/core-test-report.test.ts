@@ -3,7 +3,7 @@ import { DEFAULT_CORE_LOSS_SETTINGS } from '@/lib/core-test/core-loss-settings';
 import type { StoredCoreTest } from '@/lib/core-test/core-test-queries';
 import { coreTestReport } from '@/lib/core-test/core-test-report';
 import type { CoreTestData } from '@/lib/core-test/core-test-schema';
-import { EXAMPLE_A_SHEET } from '../engine/winding-fixtures';
+import { EXAMPLE_A_SHEET } from '../../support/fixtures/winding-fixtures';
 
 /** 280 turns on the example A core at 50 Hz need 0.823044·280 = 230.452 V for 1.3 T [derived, docs/engineering/core-loss.md §3]. */
 const V_13 = 230.4523;
@@ -11,7 +11,7 @@ const V_13 = 230.4523;
 function stored(id: string, stage: StoredCoreTest['stage'], watts: number, over: Partial<CoreTestData> = {}): StoredCoreTest {
   return {
     id, jobId: 'j', stage, version: 1, testedAt: new Date(`2026-11-30T0${id}:00:00Z`), testedBy: null, updatedAt: new Date(),
-    data: { loopTurns: 280, voltageV: V_13, currentA: 0.8, watts, frequencyHz: 50, hotSpots: [], ...over },
+    data: { loopTurns: 280, voltageV: V_13, currentA: 0.8, watts, frequencyHz: 50, hotSpots: [], instrument: undefined, notes: undefined, ...over },
   };
 }
 

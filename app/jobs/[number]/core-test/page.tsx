@@ -8,7 +8,7 @@ import { coreRingFromSheet } from '@/lib/core-test/core-ring-from-sheet';
 import { coreTestReport, DEFAULT_PLANNING_SUPPLY_V } from '@/lib/core-test/core-test-report';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import { listStaff } from '@/lib/jobs/job-queries';
-import { CLOSED_STATUSES } from '@/lib/jobs/status-flow';
+import { isRecordLocked } from '@/lib/jobs/record-locks';
 import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
 import type { CoreTestFormInput } from '@/lib/core-test/core-test-schema';
@@ -35,7 +35,7 @@ export default async function CoreTestPage({ params, searchParams }: { params: P
   const analysis = sheet ? analyseSheet(sheet.sheet) : null;
   const yokeT = analysis?.ok ? analysis.value.winding.flux?.yoke.tesla ?? null : null;
   const report = coreTestReport(sheet?.sheet ?? null, tests, settings, yokeT);
-  const mayRecord = can(user.role, 'tests.record') && !CLOSED_STATUSES.includes(job.status);
+  const mayRecord = can(user.role, 'tests.record') && !isRecordLocked('coreTests', job.status, job.heldFrom);
   const editing = edit ? tests.find((t) => t.id === edit) ?? null : null;
   const me = staff.find((s) => s.id === user.id)?.id ?? '';
   const frequencyHz = sheet?.sheet.supply.frequencyHz ?? 50;

@@ -17,6 +17,7 @@ import { ApproveForm } from './approve-form';
 import './redesign.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
+import { spansLabel, layoutLabel } from '@/lib/engine/notation';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
@@ -129,7 +130,7 @@ function AsFound({ ctx }: { ctx: RedesignContext }) {
     <dl className="dl">
       <dt>Supply</dt><dd>{s.supply.lineVoltageV} V {s.supply.frequencyHz} Hz, {s.supply.poles} poles, {w.connection} · {fmt.num(s.supply.ratedCurrentA, 1, 'A')} · {fmt.power(s.supply.ratedOutputKw)}</dd>
       <dt>Core</dt><dd>{s.core.slots} slots · bore {s.core.boreMm} mm · length {s.core.coreLengthMm} mm · OD {s.core.outsideDiameterMm} mm</dd>
-      <dt>Winding</dt><dd>{w.layers === 2 ? 'double' : 'single'}-layer {w.style}, span {w.spans.map((y) => `1–${y + 1}`).join(', ')}, {w.turnsPerCoil.join('/')} turns, {w.parallelPaths} circuit(s)</dd>
+      <dt>Winding</dt><dd>{layoutLabel(w)}, span {spansLabel(w.spans)}, {w.turnsPerCoil.join('/')} turns, {w.parallelPaths} circuit(s)</dd>
       <dt>Wires in hand</dt><dd>{ctx.original.wires.map((x) => `${x.count} × ${x.label}`).join(' + ')}</dd>
       <dt>Sheet</dt><dd>revision {ctx.sheet.revision}, saved {fmt.dateTime(ctx.sheet.updatedAt)} · stock: {ctx.stock.length} sizes</dd>
     </dl>

@@ -8,6 +8,7 @@ import { Cautions, ComparisonTable, NameplateProposal } from '../comparison';
 import { PrintButton } from '../print-button';
 import '../redesign.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
+import { spanLabel, layoutLabel } from '@/lib/engine/notation';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
@@ -54,8 +55,8 @@ export default async function RedesignPrintPage({ params, searchParams }: { para
         <h2 id="wind-h">Wind this</h2>
         <dl className="dl">
           <dt>Slots, poles</dt><dd>{w.slots} slots, {w.poles} poles</dd>
-          <dt>Layers, style</dt><dd>{w.layers === 2 ? 'double' : 'single'}-layer {w.style}{w.singleLayerCoiling ? `, ${w.singleLayerCoiling}-coiled` : ''}</dd>
-          <dt>Coil span</dt><dd>{w.spans.map((y) => `1–${y + 1} (${y} slot pitches)`).join(', ')}</dd>
+          <dt>Layers, style</dt><dd>{layoutLabel(w)}{w.singleLayerCoiling ? `, ${w.singleLayerCoiling}-coiled` : ''}</dd>
+          <dt>Coil span</dt><dd>{w.spans.map((y) => `${spanLabel(y)} (${y} slot pitches)`).join(', ')}</dd>
           <dt>Turns per coil</dt><dd><strong>{w.turnsPerCoil.join(' / ')}</strong></dd>
           <dt>Parallel circuits</dt><dd><strong>{w.parallelPaths}</strong></dd>
           <dt>Connection</dt><dd><strong>{w.connection === 'star' ? 'star (Y)' : 'delta (Δ)'}</strong></dd>
