@@ -14,6 +14,7 @@ import { temperatureText } from '@/lib/final-tests/display';
 import { mmToInches } from '@/lib/engine/units';
 import { fmt } from '@/lib/presentation/format';
 import { getApprovedRedesignSummary, type ApprovedRedesignSummary } from './redesign-summary';
+import { lossStatementForJob, type LossStatementResult } from '@/lib/losses/loss-statement-source';
 import { CLOSING_STATEMENT, SAFETY_NOTICES, type SafetyNotice } from './safety-notices';
 import { shopDetails, type ShopDetails } from './shop-details';
 import { contentHash, sheetIssueFor } from './sheet-issue';
@@ -59,6 +60,8 @@ export interface JobSheetData {
   asFound: { revision: number; updatedAt: string; rows: Row[] } | null;
   redesign: (Omit<ApprovedRedesignSummary, 'approvedAt'> & { approvedAt: string }) | null;
   tests: JobSheetTests | null;
+  /** What the rewind did to copper loss and efficiency (lib/losses). */
+  losses: LossStatementResult;
   notices: readonly SafetyNotice[];
   closing: string;
   /** Lines for handwritten signatures and dates. */
@@ -125,11 +128,12 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
     include: { customer: { include: { contacts: true } }, motor: true, assignee: { select: { name: true } } },
   });
   if (!job) return null;
-  const [sheet, records, redesign, decisions] = await Promise.all([
+  const [sheet, records, redesign, decisions, losses] = await Promise.all([
     getAsFoundSheet(job.id),
     listTestRecords(job.id),
     getApprovedRedesignSummary(job.id),
     loadGateDecisions(db(), job.id),
+    lossStatementForJob(job.id),
   ]);
   const m = job.motor;
   const contact = job.customer.contacts[0];
@@ -199,6 +203,7 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
     asFound: sheet ? { revision: sheet.revision, updatedAt: fmt.date(sheet.updatedAt), rows: asFoundRows(sheet.sheet) } : null,
     redesign: redesign ? { ...redesign, approvedAt } : null,
     tests,
+    losses,
     notices: SAFETY_NOTICES,
     closing: CLOSING_STATEMENT,
     signatures: SIGNATURE_LINES,

@@ -19,7 +19,7 @@ import { useTestDatabase } from '../support/test-db';
 import { actAs, signOutTest } from '../support/session';
 import { ENGINEER, FRONT_DESK, WINDER } from '../support/demo-users';
 import { pdfText } from '../support/pdf-text';
-import { PASSING } from '../unit/final-tests/fixtures';
+import { PASSING } from '../support/fixtures/final-test-fixtures';
 
 useTestDatabase();
 

@@ -3,7 +3,7 @@ import { instrumentSerials, testDataSchema, testRecordFormSchema } from '@/lib/f
 import { basisDefaults, newRecordDefaults, recordToFormData } from '@/lib/final-tests/defaults';
 import { liveJudgement } from '@/lib/final-tests/live-judgement';
 import { asRepairedRating } from '@/lib/final-tests/test-rating';
-import { PASSING, record } from './fixtures';
+import { PASSING, record } from '../../support/fixtures/final-test-fixtures';
 
 const plate = (ratedVoltageV: number, insulationClass: string | null, outputKw: number | null, frequencyHz: number) => ({
   rating: asRepairedRating({ ratedVoltageV, frequencyHz, outputKw, speedRpm: null, currentA: null, connection: null }, null),
