@@ -34,16 +34,16 @@ describe('final tests and the Ready gate', () => {
     await page.getByLabel('Applied voltage').fill('500');
     await page.getByLabel('Held for (s)').fill('5');
     await page.getByLabel('Did the winding hold?').selectOption('pass');
-    await expect.poll(() => text(page, 'verdict-hipot')).toContain('⚠ FAIL');
+    await expect.poll(() => text(page, 'verdict-hipot'), { timeout: 30_000 }).toContain('⚠ FAIL');
     expect(await text(page, 'verdict-hipot')).toContain('below the proposed 3060 V');
     await page.getByRole('button', { name: 'Save test record' }).click();
-    await expect.poll(() => page.getByRole('status').filter({ hasText: 'Test record #1 saved: FAIL.' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('status').filter({ hasText: 'Test record #1 saved: FAIL.' }).count(), { timeout: 30_000 }).toBe(1);
 
     await page.goto(`${e2e.app.baseUrl}/jobs/${TESTING_JOB}`);
     expect(await text(page, 'gate-READY')).toContain('Testing → Ready needs a final-test record whose overall verdict is PASS');
     await page.getByRole('button', { name: 'Move to Ready' }).click();
-    await expect.poll(() => page.getByRole('alert').filter({ hasText: 'needs a final-test record' }).count()).toBe(1);
-    expect(await page.getByRole('heading', { name: 'Status: Testing' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('alert').filter({ hasText: 'needs a final-test record' }).count(), { timeout: 30_000 }).toBe(1);
+    expect(await page.getByRole('heading', { name: 'Status: Testing' }).count(), { timeout: 30_000 }).toBe(1);
     await page.close();
   });
 
@@ -53,9 +53,9 @@ describe('final tests and the Ready gate', () => {
     const reason = 'Customer accepted a 500 V DC check only on this old winding (written instruction on file).';
     await page.getByLabel(/^Reason \(printed on the job sheet/).fill(reason);
     await page.getByRole('button', { name: 'Record the override' }).click();
-    await expect.poll(() => text(page, 'ready-override')).toContain(reason);
+    await expect.poll(() => text(page, 'ready-override'), { timeout: 30_000 }).toContain(reason);
     await page.getByRole('button', { name: 'Move to Ready' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Status: Ready' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('heading', { name: 'Status: Ready' }).count(), { timeout: 30_000 }).toBe(1);
     await page.goto(`${e2e.app.baseUrl}/jobs/${TESTING_JOB}/job-sheet`);
     expect(await text(page, 'decisions')).toContain(reason);
     expect(await text(page, 'statement-of-work')).toBe('Rewound to the as-found winding data.');
@@ -93,22 +93,22 @@ describe('a job redesigned for 460 V 60 Hz', () => {
     await page.goto(`${e2e.app.baseUrl}/jobs/${REDESIGN_JOB}`);
     expect(await page.getByTestId('gate-WINDING').count()).toBe(0);
     await page.getByRole('button', { name: 'Move to Winding' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Status: Winding' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('heading', { name: 'Status: Winding' }).count(), { timeout: 30_000 }).toBe(1);
     await page.getByRole('button', { name: 'Move to Testing' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Status: Testing' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('heading', { name: 'Status: Testing' }).count(), { timeout: 30_000 }).toBe(1);
 
     await page.goto(`${e2e.app.baseUrl}/jobs/${REDESIGN_JOB}/final-tests`);
     expect(await text(page, 'rating-basis')).toContain('revision 1: 460 V 60 Hz');
     expect(await page.getByLabel('Rated voltage').inputValue()).toBe('460');
-    await expect.poll(() => text(page, 'hipot-proposed')).toContain('1920 V AC');
+    await expect.poll(() => text(page, 'hipot-proposed'), { timeout: 30_000 }).toContain('1920 V AC');
     await expect.poll(() => text(page, 'rating-sentence')).toContain('judged for the as-repaired rating 460 V 60 Hz, redesign revision 1');
     await page.getByLabel('Applied as').selectOption('dc');
     await page.getByLabel('Applied voltage').fill('3264');
     await page.getByLabel('Did the winding hold?').selectOption('pass');
     await expect.poll(() => text(page, 'verdict-hipot')).toContain('✓ Pass');
     await page.getByRole('button', { name: 'Save test record' }).click();
-    await expect.poll(() => page.getByRole('status').filter({ hasText: 'Test record #1 saved' }).count()).toBe(1);
-    await expect.poll(() => text(page, 'current-rating')).toContain('judged for the as-repaired rating 460 V 60 Hz, redesign revision 1');
+    await expect.poll(() => page.getByRole('status').filter({ hasText: 'Test record #1 saved' }).count(), { timeout: 30_000 }).toBe(1);
+    await expect.poll(() => text(page, 'current-rating'), { timeout: 30_000 }).toContain('judged for the as-repaired rating 460 V 60 Hz, redesign revision 1');
 
     await page.goto(`${e2e.app.baseUrl}/jobs/${REDESIGN_JOB}/job-sheet`);
     expect(await text(page, 'judged-for')).toContain('judged for the as-repaired rating 460 V 60 Hz, redesign revision 1');
@@ -125,7 +125,7 @@ describe('the as-found sheet', () => {
     await page.goto(`${e2e.app.baseUrl}/jobs/${WINDING_JOB}/as-found`);
     const notes = page.getByLabel('Notes', { exact: true });
     await notes.fill('Leads re-sleeved; typed just before leaving.');
-    await page.waitForTimeout(300);
+    await expect.poll(() => page.getByText('Unsaved changes: keeping a draft…').count(), { timeout: 10_000 }).toBeGreaterThan(0);
     await page.getByRole('link', { name: `← Job ${WINDING_JOB}` }).first().click();
     await page.waitForURL(new RegExp(`/jobs/${WINDING_JOB}$`));
     await page.goto(`${e2e.app.baseUrl}/jobs/${WINDING_JOB}/as-found`);
