@@ -129,7 +129,8 @@ describe('the as-found sheet', () => {
     await page.getByRole('link', { name: `← Job ${WINDING_JOB}` }).first().click();
     await page.waitForURL(new RegExp(`/jobs/${WINDING_JOB}$`));
     await page.goto(`${e2e.app.baseUrl}/jobs/${WINDING_JOB}/as-found`);
-    expect(await page.getByLabel('Notes', { exact: true }).inputValue()).toBe('Leads re-sleeved; typed just before leaving.');
+    // The form fills its fields once it is running in the browser: poll rather than read the server HTML.
+    await expect.poll(() => page.getByLabel('Notes', { exact: true }).inputValue(), { timeout: 30_000 }).toBe('Leads re-sleeved; typed just before leaving.');
     await page.close();
   });
 });
