@@ -9,6 +9,7 @@ export const jobRoutes = (jobNumber: number | string) => {
     asFound: `${base}/as-found`,
     asFoundPrint: `${base}/as-found/print`,
     asFoundExport: `${base}/as-found/export`,
+    coreTest: `${base}/core-test`,
     finalTests: `${base}/final-tests`,
     redesign: `${base}/redesign`,
     redesignPrint: `${base}/redesign/print`,

@@ -4,6 +4,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { analyseSheet, windingInputFromSheet } from '@/lib/engine/analyse-sheet';
+import { sheetFindings } from '@/lib/engine/sheet-findings';
 import { analyseWinding } from '@/lib/engine/analyse-winding';
 import { CALC_USAGE, parseCalcArgs } from '@/lib/cli/args';
 import { formatSheet } from '@/lib/cli/format-sheet';
@@ -69,7 +70,8 @@ function main(argv: readonly string[]): void {
   }
   const r = analyseSheet(sheet);
   if (!r.ok) die(`${cmd.file}: ${engineMessage(r.error)}`);
-  process.stdout.write(cmd.json ? `${JSON.stringify(r.value, null, 2)}\n` : `${formatSheet(windingInputFromSheet(sheet).winding, r.value, cmd.orders)}\n`);
+  const findings = sheetFindings(sheet, r.value);
+  process.stdout.write(cmd.json ? `${JSON.stringify({ ...r.value, findings }, null, 2)}\n` : `${formatSheet(windingInputFromSheet(sheet).winding, r.value, findings, cmd.orders)}\n`);
 }
 
 main(process.argv.slice(2));

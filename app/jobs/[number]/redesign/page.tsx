@@ -12,6 +12,7 @@ import { fmt } from '@/lib/presentation/format';
 import { RequestForm } from './request-form';
 import { CandidateTable } from './candidate-table';
 import { Cautions, ComparisonTable, NameplateProposal } from './comparison';
+import { JobLosses } from '../_losses/job-losses';
 import { ApproveForm } from './approve-form';
 import './redesign.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
@@ -147,6 +148,7 @@ function ApprovedRevision({ r, number }: { r: RedesignRevision; number: number }
         This revision cannot be changed: a new request opens the next revision. <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>Printable winding for the winder</Link> · <Link href={`${jobRoutes(number).benchPack}?rev=${r.revision}`}>Winder’s bench pack (groups, connections, wire, coil sizes)</Link>
       </p>
       <ComparisonTable report={snap.report} />
+      <JobLosses jobNumber={number} comparing={snap.report} headingId="losses-approved-h" />
       <h3>Proposed supplementary nameplate</h3>
       <NameplateProposal report={snap.report} />
       <h3>Cautions</h3>
@@ -173,6 +175,7 @@ function DraftRevision({ r, ctx, canEdit, mayApprove }: { r: RedesignRevision; c
         <section className="card" aria-labelledby="chosen-h" id="chosen">
           <h2 id="chosen-h">Candidate {chosen.rank} beside the as-found winding</h2>
           <ComparisonTable report={report.value} />
+          <JobLosses jobId={ctx.sheet.jobId} comparing={report.value} headingId="losses-draft-h" />
           <h3>Proposed supplementary nameplate</h3>
           <NameplateProposal report={report.value} />
           <h3>Cautions</h3>

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
-import { expectedGroups, RESISTANCE_AGREEMENT_PERCENT, sheetConsistency } from '@/lib/as-found/consistency';
+import { expectedGroups, RESISTANCE_AGREEMENT_PERCENT, sheetFindings } from '@/lib/engine/sheet-findings';
 import { EXAMPLE_A_SHEET, value } from '../../support/fixtures/winding-fixtures';
 
-const findings = (s: WindingSheet) => sheetConsistency(s, value(analyseSheet(s)));
+const findings = (s: WindingSheet) => sheetFindings(s, value(analyseSheet(s)));
 const ids = (s: WindingSheet) => findings(s).map((f) => f.id);
 
 /** 36 slots, 4 poles, single-layer concentric half-coiled, spans 11/9/7 (usual τ+q−1, −2 …) [derived, docs/engineering/winding-factor.md]. */
@@ -61,7 +61,7 @@ describe('consistency checks of an as-found sheet', () => {
     const r = EXAMPLE_A_SHEET.resistance!;
     const s = { ...EXAMPLE_A_SHEET, resistance: { ...r, readings: r.readings.map((x) => x * 1.08) as [number, number, number] } };
     expect(ids(s)).not.toContain('resistance-turns');
-    expect(sheetConsistency(s, value(analyseSheet(s)), { resistanceAgreementPercent: 5 }).map((f) => f.id)).toContain('resistance-turns');
+    expect(sheetFindings(s, value(analyseSheet(s)), { resistanceAgreementPercent: 5 }).map((f) => f.id)).toContain('resistance-turns');
   });
 
   it('notes an unusual lead count and a copper weight far from the turns and wire', () => {
