@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { coilDimensions } from '@/lib/engine/bench/coil-dimensions';
 import { leadCountsFor, leadMark, leadPlan } from '@/lib/engine/bench/lead-markings';
 import { wireDraw } from '@/lib/engine/bench/wire-draw';
-import { errorOf, value } from '../winding-fixtures';
+import { errorOf, value } from '../../../support/fixtures/winding-fixtures';
 
 describe('lead markings', () => {
   // IEC 60034-8: start 1, finish 2 of U, V, W; NEMA MG 1 Part 2: T1–T4, T2–T5, T3–T6 (and T7–T10 … for 12 leads).

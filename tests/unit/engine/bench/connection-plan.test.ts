@@ -5,7 +5,7 @@ import { connectionPlan, type ConnectionPlan } from '@/lib/engine/bench/connecti
 import { allowedParallelPaths } from '@/lib/engine/parallel-paths';
 import { SlotStar } from '@/lib/engine/slot-star';
 import type { SlotTable, WindingSpec } from '@/lib/engine/winding-layout';
-import { errorOf, lap, layoutOf, singleLayer, value } from '../winding-fixtures';
+import { errorOf, lap, layoutOf, singleLayer, value } from '../../../support/fixtures/winding-fixtures';
 
 const concentricDouble = (slots: number, poles: number, spans: number[]): WindingSpec => ({
   ...lap(slots, poles, spans[0] ?? 1), style: 'concentric', spans, turnsPerCoil: spans.map((_, i) => 10 + i),
