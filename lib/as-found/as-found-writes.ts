@@ -12,6 +12,7 @@ import type { DraftPayload } from '@/lib/as-found/draft-schema';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import type { LengthUnit } from './length-entry';
 import { SHEET_MESSAGES } from './as-found-messages';
+import { layoutLabel } from '@/lib/engine/notation';
 
 type Tx = Prisma.TransactionClient;
 
@@ -88,7 +89,7 @@ export async function saveSheet(userId: string, input: SaveSheetInput): Promise<
       await tx.windingSheetRevision.create({ data: { sheetId, revision, data: columns.data, savedById: userId } });
       await tx.sheetDraft.deleteMany({ where: { jobId: input.jobId, userId } });
       const changed = existing ? changedSections(existing.data, s) : [];
-      const summary = `${s.core.slots} slots, ${s.supply.poles} poles, ${s.winding.layers === 2 ? 'double' : 'single'}-layer ${s.winding.style}`;
+      const summary = `${s.core.slots} slots, ${s.supply.poles} poles, ${layoutLabel(s.winding)}`;
       await recordJobEvent(tx, {
         jobId: input.jobId, userId, kind: 'SHEET',
         message: existing

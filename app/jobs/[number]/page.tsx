@@ -1,6 +1,4 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { getJobByNumber, listStaff, motorHistory } from '@/lib/jobs/job-queries';
 import { STATUS_LABELS, allowedMoves, moveLabel } from '@/lib/jobs/status-flow';
@@ -12,7 +10,7 @@ import { getApprovedRedesign } from '@/lib/redesign/redesign-queries';
 import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
 import { PhotoUpload } from './photo-upload';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
 
 
@@ -21,11 +19,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 }
 
 export default async function JobPage({ params }: { params: Promise<{ number: string }> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await getJobByNumber(parsed.data.number);
-  if (!job) notFound();
+  const { user, job } = await loadJobRoute(params, getJobByNumber);
   const [staff, history, redesign] = await Promise.all([listStaff(), motorHistory(job.motorId, job.id), getApprovedRedesign(job.id)]);
   const m = job.motor;
   const poles = m.frequencyHz && m.speedRpm ? polesFromSpeed(m.frequencyHz, m.speedRpm) : null;

@@ -7,7 +7,7 @@ import { EXAMPLE_A_SHEET, value } from '../engine/winding-fixtures';
 const findings = (s: WindingSheet) => sheetConsistency(s, value(analyseSheet(s)));
 const ids = (s: WindingSheet) => findings(s).map((f) => f.id);
 
-/** 36 slots, 4 poles, single-layer concentric half-coiled, spans 11/9/7 (usual τ+q−1, −2 …) [derived, reference §1]. */
+/** 36 slots, 4 poles, single-layer concentric half-coiled, spans 11/9/7 (usual τ+q−1, −2 …) [derived, docs/engineering/winding-factor.md]. */
 const CONCENTRIC: WindingSheet = {
   ...EXAMPLE_A_SHEET,
   winding: { layers: 1, style: 'concentric', singleLayerCoiling: 'half', spans: [11, 9, 7], turnsPerCoil: [28, 28, 28], parallelPaths: 1, connection: 'star', coilsPerGroup: 3, groups: 6 },
@@ -15,7 +15,7 @@ const CONCENTRIC: WindingSheet = {
 };
 
 describe('consistency checks of an as-found sheet', () => {
-  it('finds nothing wrong with worked example A (reference §2, §4)', () => {
+  it('finds nothing wrong with worked example A (docs/engineering/flux-density.md, §4)', () => {
     expect(findings(EXAMPLE_A_SHEET)).toEqual([]);
   });
 
@@ -46,14 +46,14 @@ describe('consistency checks of an as-found sheet', () => {
     expect(ids({ ...CONCENTRIC, winding: { ...CONCENTRIC.winding, coilsPerGroup: 2, groups: 9 } })).toContain('coils-per-group');
   });
 
-  // Reference §3: single-layer half-coiled allows a dividing P/2 → 1, 2 for 4 poles [derived].
+  // docs/engineering/redesign.md: single-layer half-coiled allows a dividing P/2 → 1, 2 for 4 poles [derived].
   it('flags parallel circuits the layout cannot have and names the possible ones', () => {
     const f = findings({ ...CONCENTRIC, winding: { ...CONCENTRIC.winding, parallelPaths: 4 } }).find((x) => x.id === 'parallel-paths');
     expect(f?.severity).toBe('problem');
     expect(f?.message).toMatch(/Possible: 1, 2\./);
   });
 
-  // Resistance ∝ turns at fixed wire and MLT (reference §4): 20 % high readings imply 14 × 1.2 ≈ 17 turns.
+  // Resistance ∝ turns at fixed wire and MLT (docs/engineering/wire-and-resistance.md): 20 % high readings imply 14 × 1.2 ≈ 17 turns.
   it('flags turns that disagree with the measured resistance, with the turns the readings imply', () => {
     const r = EXAMPLE_A_SHEET.resistance!;
     const s = { ...EXAMPLE_A_SHEET, resistance: { ...r, readings: r.readings.map((x) => x * 1.2) as [number, number, number] } };
@@ -77,7 +77,7 @@ describe('consistency checks of an as-found sheet', () => {
   });
 
   it('reports flux too high for the supply with the limit it used', () => {
-    // Half the turns doubles the flux per pole: yoke 2 × 1.2045 T (reference §2) is above 1.7 T.
+    // Half the turns doubles the flux per pole: yoke 2 × 1.2045 T (docs/engineering/flux-density.md) is above 1.7 T.
     const s = { ...EXAMPLE_A_SHEET, winding: { ...EXAMPLE_A_SHEET.winding, turnsPerCoil: [7] }, resistance: undefined };
     const f = findings(s);
     expect(f.map((x) => x.id)).toEqual(expect.arrayContaining(['flux-yoke', 'flux-tooth']));

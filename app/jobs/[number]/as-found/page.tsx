@@ -1,6 +1,4 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { draftPayloadSchema } from '@/lib/as-found/draft-schema';
@@ -14,7 +12,7 @@ import { fmt } from '@/lib/presentation/format';
 import { PhotoUpload } from '../photo-upload';
 import { SheetEditor, type SheetEditorProps } from './_parts/sheet-editor';
 import './sheet.css';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
 
 
@@ -23,11 +21,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 }
 
 export default async function SheetPage({ params }: { params: Promise<{ number: string }> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await getJobForSheet(parsed.data.number);
-  if (!job) notFound();
+  const { user, job } = await loadJobRoute(params, getJobForSheet);
   const frozen = isSheetFrozen(job.status, job.heldFrom);
   const mayEdit = can(user.role, 'sheet.edit');
   const editable = mayEdit && !frozen;

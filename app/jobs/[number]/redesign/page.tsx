@@ -1,7 +1,5 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { getJobByNumber } from '@/lib/jobs/job-queries';
 import { redesignReport } from '@/lib/engine/redesign/report';
@@ -16,8 +14,9 @@ import { CandidateTable } from './candidate-table';
 import { Cautions, ComparisonTable, NameplateProposal } from './comparison';
 import { ApproveForm } from './approve-form';
 import './redesign.css';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
+import { spansLabel, layoutLabel } from '@/lib/engine/notation';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
@@ -59,11 +58,7 @@ function RevisionList({ revisions, selected, number }: { revisions: RedesignRevi
 }
 
 export default async function RedesignPage({ params, searchParams }: { params: Promise<{ number: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await getJobByNumber(parsed.data.number);
-  if (!job) notFound();
+  const { user, job } = await loadJobRoute(params, getJobByNumber);
   const { rev } = searchSchema.parse(await searchParams);
   const [revisions, ctx] = await Promise.all([listRedesigns(job.id), loadRedesignContext(job.id)]);
   const latest = revisions[0];
@@ -134,7 +129,7 @@ function AsFound({ ctx }: { ctx: RedesignContext }) {
     <dl className="dl">
       <dt>Supply</dt><dd>{s.supply.lineVoltageV} V {s.supply.frequencyHz} Hz, {s.supply.poles} poles, {w.connection} · {fmt.num(s.supply.ratedCurrentA, 1, 'A')} · {fmt.power(s.supply.ratedOutputKw)}</dd>
       <dt>Core</dt><dd>{s.core.slots} slots · bore {s.core.boreMm} mm · length {s.core.coreLengthMm} mm · OD {s.core.outsideDiameterMm} mm</dd>
-      <dt>Winding</dt><dd>{w.layers === 2 ? 'double' : 'single'}-layer {w.style}, span {w.spans.map((y) => `1–${y + 1}`).join(', ')}, {w.turnsPerCoil.join('/')} turns, {w.parallelPaths} circuit(s)</dd>
+      <dt>Winding</dt><dd>{layoutLabel(w)}, span {spansLabel(w.spans)}, {w.turnsPerCoil.join('/')} turns, {w.parallelPaths} circuit(s)</dd>
       <dt>Wires in hand</dt><dd>{ctx.original.wires.map((x) => `${x.count} × ${x.label}`).join(' + ')}</dd>
       <dt>Sheet</dt><dd>revision {ctx.sheet.revision}, saved {fmt.dateTime(ctx.sheet.updatedAt)} · stock: {ctx.stock.length} sizes</dd>
     </dl>

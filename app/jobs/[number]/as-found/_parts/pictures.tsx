@@ -5,6 +5,7 @@ import { useEffect, useState } from 'react';
 import type { LiveAnalysis } from '@/lib/as-found/live-analysis';
 import { MmfCharts } from './mmf-charts';
 import { SlotDiagram, SlotTableView } from './slot-diagram';
+import { spansLabel } from '@/lib/engine/notation';
 
 
 export function Pictures({ live }: { live: LiveAnalysis }) {
@@ -23,7 +24,7 @@ export function Pictures({ live }: { live: LiveAnalysis }) {
       </section>
     );
   }
-  const caption = `${w.layout.layers === 2 ? 'double' : 'single'}-layer ${w.layout.source === 'explicit' ? '(winder’s slot table)' : style}${spans ? `, span${spans.length > 1 ? 's' : ''} ${spans.map((y) => `1–${y + 1}`).join(', ')}` : ''}`;
+  const caption = `${w.layout.layers === 2 ? 'double' : 'single'}-layer ${w.layout.source === 'explicit' ? '(winder’s slot table)' : style}${spans ? `, span${spans.length > 1 ? 's' : ''} ${spansLabel(spans)}` : ''}`;
   return (
     <section className="card pictures" aria-labelledby="pics-h">
       <h2 id="pics-h">Slot diagram and MMF</h2>
