@@ -203,7 +203,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
           )}
           <FindingsStrip live={live} open={drawer.open} onToggle={drawer.toggle} controls="live-analysis" />
         </form>
-        <aside id="live-analysis" className={`sheet-analysis${drawer.open ? ' open' : ''}`} aria-labelledby="live-h" ref={drawer.ref} tabIndex={-1} onKeyDown={drawer.onKeyDown}>
+        <aside id="live-analysis" className={`sheet-analysis${drawer.open ? ' open' : ''}`} aria-labelledby="live-h" ref={drawer.ref} tabIndex={0} onKeyDown={drawer.onKeyDown}>
           <div className="analysis-head">
             <h2 id="live-h">Live analysis</h2>
             <button type="button" className="btn quiet analysis-close" onClick={drawer.close}>Close</button>
