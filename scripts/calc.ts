@@ -8,6 +8,8 @@ import { analyseWinding } from '@/lib/engine/analyse-winding';
 import { CALC_USAGE, parseCalcArgs } from '@/lib/cli/args';
 import { formatSheet } from '@/lib/cli/format-sheet';
 import { formatWinding } from '@/lib/cli/format-winding';
+import { formatRescale } from '@/lib/cli/format-rescale';
+import { supplyScaling } from '@/lib/engine/supply-scaling';
 import type { EngineError } from '@/lib/engine/result';
 import { parseWindingSheetExport, windingSheetSchema } from '@/lib/as-found/winding-sheet-schema';
 
@@ -44,6 +46,12 @@ function main(argv: readonly string[]): void {
     const r = analyseWinding(cmd.input);
     if (!r.ok) die(engineMessage(r.error));
     process.stdout.write(cmd.json ? `${JSON.stringify(r.value, null, 2)}\n` : `${formatWinding(cmd.input.winding, r.value, cmd.orders)}\n`);
+    return;
+  }
+  if (cmd.kind === 'rescale') {
+    const r = supplyScaling(cmd.old, cmd.next);
+    if (!r.ok) die(engineMessage(r.error));
+    process.stdout.write(cmd.json ? `${JSON.stringify(r.value, null, 2)}\n` : `${formatRescale(cmd.old, cmd.next, r.value)}\n`);
     return;
   }
   const data = readJson(cmd.file);

@@ -4,7 +4,6 @@
  * (server actions) have checked the session and role and parsed the input with the schemas.
  */
 import { db, Prisma } from '@/lib/db/client';
-import type { JobStatus } from '@/lib/db/generated/enums';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { recordJobEvent } from '@/lib/jobs/job-writes';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
@@ -13,15 +12,9 @@ import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import type { LengthUnit } from './length-entry';
 import { SHEET_MESSAGES } from './as-found-messages';
 import { layoutLabel } from '@/lib/engine/notation';
+import { isRecordLocked } from '@/lib/jobs/record-locks';
 
 type Tx = Prisma.TransactionClient;
-
-/** Statuses past winding: the as-found record is closed (the rewind was made from it). */
-export const SHEET_FROZEN_STATUSES: readonly JobStatus[] = ['TESTING', 'READY', 'SHIPPED', 'RETURNED_UNREPAIRED'];
-
-/** A job on hold is judged by the status it was held from. */
-export const isSheetFrozen = (status: JobStatus, heldFrom: JobStatus | null): boolean =>
-  SHEET_FROZEN_STATUSES.includes(status === 'ON_HOLD' && heldFrom ? heldFrom : status);
 
 async function editableJob(tx: Tx, jobId: string) {
   const job = await tx.job.findUnique({
@@ -29,7 +22,7 @@ async function editableJob(tx: Tx, jobId: string) {
     select: { id: true, number: true, status: true, heldFrom: true, motor: { select: { manufacturer: true, model: true, outputKw: true } } },
   });
   if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
-  if (isSheetFrozen(job.status, job.heldFrom)) throw new DomainError('frozen', SHEET_MESSAGES.frozen(STATUS_LABELS[job.status]));
+  if (isRecordLocked('asFoundSheet', job.status, job.heldFrom)) throw new DomainError('frozen', SHEET_MESSAGES.frozen(STATUS_LABELS[job.status]));
   return job;
 }
 

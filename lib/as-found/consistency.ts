@@ -32,9 +32,6 @@ export interface ConsistencyOptions {
   resistanceAgreementPercent?: number;
 }
 
-/** Coils a standard winding has: one per slot double layer, one per two slots single layer. */
-export const expectedCoils = (slots: number, layers: 1 | 2): number => (layers === 2 ? slots : slots / 2);
-
 /** Coil groups: one per pole per phase (3P), or one per pole pair per phase (3P/2) when single-layer half-coiled. */
 export const expectedGroups = (poles: number, layers: 1 | 2, coiling?: 'whole' | 'half'): number =>
   layers === 1 && coiling !== 'whole' ? (3 * poles) / 2 : 3 * poles;
@@ -46,7 +43,6 @@ function countChecks(sheet: WindingSheet, a: SheetAnalysis): SheetFinding[] {
   const { slots } = sheet.core;
   const { poles } = sheet.supply;
   const w = sheet.winding;
-  const coils = expectedCoils(slots, w.layers);
   const groups = expectedGroups(poles, w.layers, w.singleLayerCoiling);
   const layoutCoils = a.winding.layout.sides.length / 2;
   if (w.coilsPerGroup !== undefined && w.groups !== undefined && w.coilsPerGroup * w.groups !== layoutCoils)

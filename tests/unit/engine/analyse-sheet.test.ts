@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { analyseSheet, windingInputFromSheet } from '@/lib/engine/analyse-sheet';
-import { EXAMPLE_A_CORE, EXAMPLE_A_SHEET, errorOf, rel, value } from './winding-fixtures';
+import { EXAMPLE_A_CORE, EXAMPLE_A_SHEET, errorOf, rel, value } from '../../support/fixtures/winding-fixtures';
 
 describe('analyseSheet on example A as a data sheet', () => {
   const a = value(analyseSheet(EXAMPLE_A_SHEET));
