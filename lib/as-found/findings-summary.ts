@@ -4,7 +4,7 @@
  * and the figures a winder watches (air-gap density, current density, slot fill).
  */
 import type { LiveAnalysis } from './live-analysis';
-import type { FindingSeverity } from './consistency';
+import type { FindingSeverity } from '@/lib/engine/sheet-findings';
 
 export interface FindingsSummary {
   /** e.g. "1 problem, 2 checks", "No inconsistencies found", "12 fields to fill in". */

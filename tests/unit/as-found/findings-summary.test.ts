@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { findingsSummary } from '@/lib/as-found/findings-summary';
 import type { LiveAnalysis } from '@/lib/as-found/live-analysis';
-import type { SheetFinding } from '@/lib/as-found/consistency';
+import type { SheetFinding } from '@/lib/engine/sheet-findings';
 
 const empty: LiveAnalysis = { sheet: null, full: null, winding: null, findings: [], issues: [], engineError: null };
 const finding = (severity: SheetFinding['severity'], message: string): SheetFinding => ({ id: `x-${message}`, severity, message, check: 'look again' });
