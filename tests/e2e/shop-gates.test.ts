@@ -43,7 +43,7 @@ describe('final tests and the Ready gate', () => {
     expect(await text(page, 'gate-READY')).toContain('Testing → Ready needs a final-test record whose overall verdict is PASS');
     await page.getByRole('button', { name: 'Move to Ready' }).click();
     await expect.poll(() => page.getByRole('alert').filter({ hasText: 'needs a final-test record' }).count(), { timeout: 30_000 }).toBe(1);
-    expect(await page.getByRole('heading', { name: 'Status: Testing' }).count(), { timeout: 30_000 }).toBe(1);
+    expect(await page.getByRole('heading', { name: 'Status: Testing' }).count()).toBe(1);
     await page.close();
   });
 
