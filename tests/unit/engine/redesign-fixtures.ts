@@ -15,7 +15,7 @@ export const EXAMPLE_A_ORIGINAL: RedesignOriginal = value(originalFromSheet(EXAM
 /** A request on example A: same poles, span and layers unless overridden, shop default limits. */
 export function requestFor(target: Partial<RedesignTarget>, limits: Partial<RedesignRequest['limits']> = {}): RedesignRequest {
   return {
-    target: { lineVoltageV: 400, frequencyHz: 50, poles: 4, connection: 'star', spans: [], layers: 'keep', parallelPaths: [], ...target },
+    target: { lineVoltageV: 400, frequencyHz: 50, poles: 4, connection: 'star', spans: [], layers: 'keep', parallelPaths: [], allowOverPitch: false, ...target },
     limits: { ...DEFAULT_REDESIGN_LIMITS, ...limits },
   };
 }

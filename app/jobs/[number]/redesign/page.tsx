@@ -31,7 +31,7 @@ function formDefaults(jobId: string, request: RedesignRequest, draftVersion?: nu
     ...(draftVersion ? { draftVersion } : {}),
     target: {
       lineVoltageV: t.lineVoltageV, frequencyHz: t.frequencyHz, poles: t.poles, connection: t.connection,
-      spans: t.spans.join(', '), layers: t.layers, parallelPaths: t.parallelPaths.join(', '),
+      spans: t.spans.join(', '), layers: t.layers, parallelPaths: t.parallelPaths.join(', '), allowOverPitch: t.allowOverPitch,
     },
     limits: limitsToForm(request.limits),
   };
@@ -74,7 +74,7 @@ export default async function RedesignPage({ params, searchParams }: { params: P
   if (ctx.ok) {
     const s = ctx.value.sheet.sheet;
     const fromSheet: RedesignRequest = {
-      target: { lineVoltageV: s.supply.lineVoltageV, frequencyHz: s.supply.frequencyHz, poles: s.supply.poles, connection: s.winding.connection, spans: [], layers: 'keep', parallelPaths: [] },
+      target: { lineVoltageV: s.supply.lineVoltageV, frequencyHz: s.supply.frequencyHz, poles: s.supply.poles, connection: s.winding.connection, spans: [], layers: 'keep', parallelPaths: [], allowOverPitch: false },
       limits: ctx.value.shopLimits,
     };
     requestDefaults = latest?.status === 'DRAFT' ? formDefaults(job.id, latest.request, latest.version) : formDefaults(job.id, latest?.request ?? fromSheet);
