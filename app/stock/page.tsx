@@ -2,12 +2,13 @@ import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { DEFAULT_REDESIGN_LIMITS } from '@/lib/engine/redesign/from-sheet';
 import { mmToInches } from '@/lib/engine/units';
-import { fmt } from '@/lib/format';
-import { limitsToForm } from '@/lib/schemas/redesign';
+import { fmt } from '@/lib/presentation/format';
+import { limitsToForm } from '@/lib/redesign/redesign-schema';
 import { getShopLimits } from '@/lib/settings/settings-queries';
 import { listStock } from '@/lib/stock/stock-queries';
 import { AddStockForm, RemoveStockButton } from './stock-forms';
 import { SettingsForm } from './settings-form';
+import { mm2ToCircularMils } from '@/lib/engine/units';
 
 export const metadata = { title: 'Wire stock and shop limits' };
 
@@ -36,7 +37,7 @@ export default async function StockPage() {
                   <td>{s.enamelGrade}{s.standard === 'awg' ? ` (${['single', 'heavy', 'triple'][s.enamelGrade - 1]} build)` : ''}</td>
                   <td className="num">{s.wire ? `${s.wire.bareMm.toFixed(3)} mm (${mmToInches(s.wire.bareMm).toFixed(4)} in)` : '—'}</td>
                   <td className="num">{s.wire ? `${s.wire.overallMm.toFixed(3)} mm` : '—'}</td>
-                  <td className="num">{s.wire ? `${s.wire.areaMm2.toFixed(4)} mm² (${fmt.num(s.wire.areaMm2 * 1973.525, 0)} CM)` : '—'}</td>
+                  <td className="num">{s.wire ? `${s.wire.areaMm2.toFixed(4)} mm² (${fmt.num(mm2ToCircularMils(s.wire.areaMm2), 0)} CM)` : '—'}</td>
                   <td className="num">{fmt.num(s.quantityKg, 1, 'kg')}</td>
                   <td>{s.note ?? ''}</td>
                   <td><RemoveStockButton id={s.id} label={s.wire?.label ?? s.size} /></td>

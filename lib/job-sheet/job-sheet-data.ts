@@ -4,18 +4,19 @@
  */
 import { db } from '@/lib/db/client';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
-import { CONNECTION_LABELS } from '@/lib/schemas/motor';
-import { getAsFoundSheet } from '@/lib/sheets/sheet-queries';
-import type { WindingSheet } from '@/lib/schemas/winding-sheet';
-import { listTestRecords } from '@/lib/tests-domain/test-record-queries';
-import { readingSections, type ReadingSection } from '@/lib/tests-domain/test-readings';
-import { judgeTestRecord, type OverallVerdict, type SectionJudgement } from '@/lib/tests-domain/test-verdicts';
-import { temperatureText } from '@/lib/tests-domain/test-display';
+import { CONNECTION_LABELS } from '@/lib/jobs/motor-schema';
+import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
+import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
+import { listTestRecords } from '@/lib/final-tests/record-queries';
+import { readingSections, type ReadingSection } from '@/lib/final-tests/readings';
+import { judgeTestRecord, type OverallVerdict, type SectionJudgement } from '@/lib/final-tests/verdicts';
+import { temperatureText } from '@/lib/final-tests/display';
 import { mmToInches } from '@/lib/engine/units';
-import { fmt } from '@/lib/format';
+import { fmt } from '@/lib/presentation/format';
 import { getApprovedRedesignSummary, type ApprovedRedesignSummary } from './redesign-summary';
 import { CLOSING_STATEMENT, SAFETY_NOTICES, type SafetyNotice } from './safety-notices';
 import { shopDetails, type ShopDetails } from './shop-details';
+import { spansLabel, layoutLabel } from '@/lib/engine/notation';
 
 export interface Row {
   label: string;
@@ -61,11 +62,11 @@ const dash = (v: string | null | undefined) => (v && v.trim() ? v : '—');
 
 function asFoundRows(s: WindingSheet): Row[] {
   const w = s.winding;
-  const spans = w.spans.map((y) => `1–${y + 1}`).join(', ');
+  const spans = spansLabel(w.spans);
   const wires = s.wires.map((x) => `${x.count} × ${x.standard === 'awg' ? `AWG ${x.size}` : `${x.size} mm`} (grade ${x.enamelGrade})`).join(' + ');
   const rows: Row[] = [
     { label: 'Core', value: `${s.core.slots} slots · bore ${mmIn(s.core.boreMm)} · length ${mmIn(s.core.coreLengthMm)} · OD ${mmIn(s.core.outsideDiameterMm)}` },
-    { label: 'Winding', value: `${w.layers === 2 ? 'double' : 'single'}-layer ${w.style} · span ${spans} · ${w.turnsPerCoil.join(', ')} turns per coil · ${w.parallelPaths} path(s) · ${w.connection}` },
+    { label: 'Winding', value: `${layoutLabel(w)} · span ${spans} · ${w.turnsPerCoil.join(', ')} turns per coil · ${w.parallelPaths} path(s) · ${w.connection}` },
     { label: 'Wire', value: wires },
     { label: 'Insulation', value: `class ${s.insulation.thermalClass}${s.insulation.varnish ? ` · ${s.insulation.varnish}` : ''}` },
     { label: 'Supply', value: `${fmt.num(s.supply.lineVoltageV, 0, 'V')} · ${fmt.num(s.supply.frequencyHz, 0, 'Hz')} · ${s.supply.poles} poles` },

@@ -4,8 +4,10 @@
  * result linearly, so the search never re-analyses a layout.
  */
 import { analyseWinding, type WindingAnalysis } from '../analyse-winding';
+import { spanLabel } from '../notation';
 import { usualSingleLayerSpans, type Layer, type WindingSpec } from '../winding-layout';
 import type { LayoutFamily, RedesignOriginal, RedesignTarget, RejectedFamily } from './types';
+import { spansLabel, layoutLabel } from '../notation';
 
 /** Most circuits the search offers when the engineer does not list them. */
 export const MAX_DEFAULT_PATHS = 8;
@@ -50,7 +52,7 @@ export const pitchOf = (slots: number, poles: number, spans: readonly number[], 
 /** A double-layer span longer than the pole pitch (single-layer coils are full-pitch electrically whatever their shape). */
 export const isOverPitched = (layers: number, pitch: number): boolean => layers === 2 && pitch > 1 + 1e-9;
 
-const spanName = (y: number): string => `1–${y + 1}`;
+const spanName = spanLabel;
 
 interface LayoutTry {
   spec: WindingSpec;
@@ -123,7 +125,7 @@ const fmtSlots = (tau: number): string => (Number.isInteger(tau) ? String(tau) :
 
 /** "double-layer lap 1–8" / "single-layer concentric 1–12, 1–10". */
 export function describeLayout(spec: Pick<WindingSpec, 'layers' | 'style' | 'spans'>): string {
-  return `${spec.layers === 2 ? 'double' : 'single'}-layer ${spec.style} ${spec.spans.map((y) => `1–${y + 1}`).join(', ')}`;
+  return `${layoutLabel(spec)} ${spansLabel(spec.spans)}`;
 }
 
 /** Analyses each layout to try; layouts the core cannot carry come back as rejections with the engine's reason. */

@@ -20,6 +20,7 @@ import { checkRedesignInput } from './validate';
 import { meanTurnLengthMm, wireMassKg } from './wire-mass';
 import { largestArea, partsLabel, wireGroups, type WireGroups } from './wire-sets';
 import { pickFromWindow, wireWindow, type WireWindow } from './wire-window';
+import { layoutLabel, spansLabel } from '../notation';
 import type { AsFoundCheck, Candidate, LayoutFamily, RedesignLimits, RedesignOriginal, RedesignRequest, RedesignSearch, RejectedFamily, StockWire, WireNeed, WireSet } from './types';
 
 /** Turn counts tried per family (closest to the original densities first). */
@@ -329,8 +330,8 @@ function buildCandidate(x: BuildContext, c: FamilyChoice, turns: number, wires: 
   if (turnsChanged) changes.push(`turns per coil ${oldTurns} → ${turns}`);
   if (c.connection !== ow.connection) changes.push(`connection ${ow.connection} → ${c.connection}`);
   if (c.paths !== ow.parallelPaths) changes.push(`circuits ${ow.parallelPaths} → ${c.paths}`);
-  if (!sameSpans || !polesKept) changes.push(`span ${ow.spans.map((y) => `1–${y + 1}`).join(', ')} → ${L.spans.map((y) => `1–${y + 1}`).join(', ')}`);
-  if (!sameLayers) changes.push(`${ow.layers === 2 ? 'double' : 'single'}-layer ${ow.style} → ${L.layers === 2 ? 'double' : 'single'}-layer ${L.style}`);
+  if (!sameSpans || !polesKept) changes.push(`span ${spansLabel(ow.spans)} → ${spansLabel(L.spans)}`);
+  if (!sameLayers) changes.push(`${layoutLabel(ow)} → ${layoutLabel(L)}`);
   const oldWires = partsLabel(original.wires.map((w) => ({ wire: w, count: w.count })));
   if (oldWires !== wires.label) changes.push(`wire ${oldWires} → ${wires.label}`);
   const keepsAsFoundWire = L.asFoundLayout && oldWires === wires.label;

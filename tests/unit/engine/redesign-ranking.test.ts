@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { narrowingAdvice, searchRedesign, WORK_BUDGET } from '@/lib/engine/redesign/search';
 import { RANKING_POINTS, RANKING_RULE } from '@/lib/engine/redesign/ranking';
 import type { StockWire } from '@/lib/engine/redesign/types';
-import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from './redesign-fixtures';
-import { errorOf, value } from './winding-fixtures';
+import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from '../../support/fixtures/redesign-fixtures';
+import { errorOf, value } from '../../support/fixtures/winding-fixtures';
 
 const search = (...args: Parameters<typeof requestFor>) => value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor(...args), METRIC_STOCK));
 
