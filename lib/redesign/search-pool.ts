@@ -35,12 +35,13 @@ function failAll(message: string): void {
 }
 
 function start(): Worker {
-  const url = new URL('./search-worker.ts', import.meta.url);
-  // Unbundled (the test runner): load the TypeScript source through tsx inside the worker. The bootstrap is
-  // a string, so the bundler never sees it.
-  const w = url.pathname.endsWith('.ts')
-    ? new Worker(`import('tsx/esm/api').then((m) => m.tsImport(${JSON.stringify(url.href)}, ${JSON.stringify(url.href)}))`, { eval: true })
-    : new Worker(url);
+  // Unbundled (the test runner runs this file as TypeScript): load the worker's source through tsx. The
+  // bootstrap is a string, so the bundler never sees it. Bundled: the bundler recognises exactly the form
+  // `new Worker(new URL('./file', import.meta.url))` and emits the worker as its own chunk.
+  const source = import.meta.url.endsWith('.ts') ? import.meta.url.replace(/search-pool\.ts$/, 'search-worker.ts') : null;
+  const w = source
+    ? new Worker(`import('tsx/esm/api').then((m) => m.tsImport(${JSON.stringify(source)}, ${JSON.stringify(source)}))`, { eval: true })
+    : new Worker(new URL('./search-worker.ts', import.meta.url));
   w.unref();
   w.on('message', (m: Reply) => {
     const p = pending.get(m.id);
