@@ -80,7 +80,7 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
         {board.total} job{board.total === 1 ? '' : 's'} · page {q.page} of {board.pages}
       </p>
       <div style={{ overflowX: 'auto' }}>
-        <table>
+        <table className="board">
           <caption className="sr-only">Jobs, sorted by {q.sort} {q.dir === 'asc' ? 'ascending' : 'descending'}</caption>
           <thead>
             <tr>

@@ -14,6 +14,7 @@ import { temperatureText } from '@/lib/final-tests/display';
 import { mmToInches } from '@/lib/engine/units';
 import { fmt } from '@/lib/presentation/format';
 import { getApprovedRedesignSummary, type ApprovedRedesignSummary } from './redesign-summary';
+import { lossStatementForJob, type LossStatementResult } from '@/lib/losses/loss-statement-source';
 import { CLOSING_STATEMENT, SAFETY_NOTICES, type SafetyNotice } from './safety-notices';
 import { shopDetails, type ShopDetails } from './shop-details';
 import { spansLabel, layoutLabel } from '@/lib/engine/notation';
@@ -45,6 +46,8 @@ export interface JobSheetData {
   asFound: { revision: number; updatedAt: string; rows: Row[] } | null;
   redesign: (Omit<ApprovedRedesignSummary, 'approvedAt'> & { approvedAt: string }) | null;
   tests: JobSheetTests | null;
+  /** What the rewind did to copper loss and efficiency (lib/losses). */
+  losses: LossStatementResult;
   notices: readonly SafetyNotice[];
   closing: string;
   /** Lines for handwritten signatures and dates. */
@@ -91,11 +94,12 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
     include: { customer: { include: { contacts: true } }, motor: true, assignee: { select: { name: true } } },
   });
   if (!job) return null;
-  const [sheet, records, redesign, events] = await Promise.all([
+  const [sheet, records, redesign, events, losses] = await Promise.all([
     getAsFoundSheet(job.id),
     listTestRecords(job.id),
     getApprovedRedesignSummary(job.id),
     db().jobEvent.aggregate({ where: { jobId: job.id }, _count: { _all: true }, _max: { at: true } }),
+    lossStatementForJob(job.id),
   ]);
   const m = job.motor;
   const contact = job.customer.contacts[0];
@@ -155,6 +159,7 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
     asFound: sheet ? { revision: sheet.revision, updatedAt: fmt.date(sheet.updatedAt), rows: asFoundRows(sheet.sheet) } : null,
     redesign: redesign ? { ...redesign, approvedAt: fmt.date(redesign.approvedAt) } : null,
     tests,
+    losses,
     notices: SAFETY_NOTICES,
     closing: CLOSING_STATEMENT,
     signatures: SIGNATURE_LINES,

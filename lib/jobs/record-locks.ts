@@ -10,6 +10,8 @@ export const RECORD_LOCKS = {
   asFoundSheet: ['TESTING', 'READY', 'SHIPPED', 'RETURNED_UNREPAIRED'],
   /** Final tests can be recorded and retested until the motor leaves the shop. */
   finalTests: ['SHIPPED', 'RETURNED_UNREPAIRED'],
+  /** Core-loss (loop) tests likewise: a repeat test after a core repair is normal until the motor leaves. */
+  coreTests: ['SHIPPED', 'RETURNED_UNREPAIRED'],
 } as const satisfies Record<string, readonly JobStatus[]>;
 
 export type LockedRecord = keyof typeof RECORD_LOCKS;

@@ -127,5 +127,5 @@ export const approveRedesignSchema = z.object({
 });
 
 /** Shop settings form: the redesign limits with the version it was loaded from. */
-export const shopSettingsSchema = z.object({ version: z.coerce.number().int().positive(), limits: limitsFormSchema });
+export const shopSettingsSchema = z.object({ version: z.coerce.number().int().nonnegative(), limits: limitsFormSchema });
 export type ShopSettingsInput = z.input<typeof shopSettingsSchema>;

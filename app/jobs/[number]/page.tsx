@@ -1,7 +1,8 @@
 import Link from 'next/link';
 import { can } from '@/lib/auth/permissions';
 import { getJobByNumber, listStaff, motorHistory } from '@/lib/jobs/job-queries';
-import { MAIN_PATH, STATUS_LABELS, allowedMoves, moveLabel } from '@/lib/jobs/status-flow';
+import { STATUS_LABELS, allowedMoves, moveLabel } from '@/lib/jobs/status-flow';
+import { ShopPath } from '@/app/_components/shop-path';
 import { CONNECTION_LABELS } from '@/lib/jobs/motor-schema';
 import { fmt } from '@/lib/presentation/format';
 import { polesFromSpeed } from '@/lib/engine/speed';
@@ -25,7 +26,6 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
   const moves = can(user.role, 'job.move')
     ? allowedMoves(job.status, job.heldFrom, user.role).map((to) => ({ to, label: moveLabel(job.status, to) }))
     : [];
-  const currentIndex = MAIN_PATH.indexOf(job.status);
   const contact = job.customer.contacts[0];
 
   return (
@@ -34,14 +34,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
       <h1>
         Job {job.number} · {job.customer.company}
       </h1>
-      <ol className="status-path" aria-label="Shop path">
-        {MAIN_PATH.map((s, i) => (
-          <li key={s} aria-current={s === job.status ? 'step' : undefined} className={currentIndex > i ? 'done' : undefined}>
-            {STATUS_LABELS[s]}
-          </li>
-        ))}
-        {!MAIN_PATH.includes(job.status) && <li aria-current="step">{STATUS_LABELS[job.status]}{job.heldFrom ? ` (from ${STATUS_LABELS[job.heldFrom]})` : ''}</li>}
-      </ol>
+      <ShopPath status={job.status} heldFrom={job.heldFrom} />
 
       <section className="card" aria-labelledby="moves-h">
         <h2 id="moves-h">Status: {STATUS_LABELS[job.status]}</h2>
@@ -53,13 +46,14 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
         <ul className="row" style={{ listStyle: 'none', padding: 0, gap: '1.5rem' }}>
           <li><Link href={jobRoutes(job.number).asFound}>As-found data sheet</Link></li>
           <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>{redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}</li>
+          <li><Link href={jobRoutes(job.number).coreTest}>Core-loss (loop) test</Link></li>
           <li><Link href={jobRoutes(job.number).finalTests}>Final tests</Link></li>
           <li><Link href={`/jobs/${job.number}/job-sheet`}>Job sheet</Link></li>
           <li><a className="btn secondary" href={`/jobs/${job.number}/job-sheet/pdf`} download>Download job sheet (PDF)</a></li>
         </ul>
       </nav>
 
-      <div className="grid" style={{ gridTemplateColumns: 'repeat(auto-fit, minmax(340px, 1fr))' }}>
+      <div className="grid" style={{ gridTemplateColumns: 'repeat(auto-fit, minmax(min(340px, 100%), 1fr))' }}>
         <section className="card" aria-labelledby="cust-h">
           <h2 id="cust-h">Customer</h2>
           <dl className="dl">

@@ -54,6 +54,9 @@ export default async function SheetPage({ params }: { params: Promise<{ number: 
         {job.customer.company} · {m.manufacturer} {m.model ?? ''} · S/N {m.serial ?? '—'} · {fmt.power(m.outputKw)} · {fmt.num(m.ratedVoltageV, 0, 'V')} · {fmt.num(m.speedRpm, 0, 'rpm')} ·
         status {STATUS_LABELS[job.status]} · {saved ? `saved revision ${saved.revision}, ${fmt.dateTime(saved.updatedAt)}` : 'not recorded yet'}
       </p>
+      {saved && (
+        <p className="no-print"><Link href={`${jobRoutes(job.number).benchPack}?basis=original`}>Bench pack for a rewind to the original winding</Link> (coil groups, connections, wire to draw, coil sizes)</p>
+      )}
       {!saved && initial.source === 'nameplate' && editable && <p className="notice small">New sheet: supply and rating are filled in from the nameplate. Check them against the winding you find.</p>}
       <SheetEditor
         key={job.id}

@@ -16,6 +16,7 @@ import { RecordReadings } from './record-readings';
 import { TestsForm } from './tests-form';
 import './final-tests.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
+import { JobLosses } from '../_losses/job-losses';
 import { isRecordLocked } from '@/lib/jobs/record-locks';
 
 
@@ -76,6 +77,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
         )}
         {closed && <p className="notice">This job is {STATUS_LABELS[job.status].toLowerCase()}: its test records are kept as they were.</p>}
       </section>
+      <section className="card"><JobLosses jobId={job.id} headingId="losses-h" level="h2" /></section>
 
       {mayRecord && (
         <section className="card">

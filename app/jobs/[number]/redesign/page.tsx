@@ -15,6 +15,7 @@ import { fmt } from '@/lib/presentation/format';
 import { RequestForm } from './request-form';
 import { CandidateTable } from './candidate-table';
 import { Cautions, ComparisonTable, NameplateProposal } from './comparison';
+import { JobLosses } from '../_losses/job-losses';
 import { ApproveForm } from './approve-form';
 import './redesign.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
@@ -51,7 +52,7 @@ function RevisionList({ revisions, selected, number }: { revisions: RedesignRevi
           <span className="rev-status">{r.status === 'APPROVED' ? 'approved' : 'draft'}</span>
           {r === current && <strong> · current approved design</strong>}
           {r.status === 'APPROVED'
-            ? <> · by {r.approvedBy ?? '—'} on {fmt.dateTime(r.approvedAt)} · <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>printable winding</Link></>
+            ? <> · by {r.approvedBy ?? '—'} on {fmt.dateTime(r.approvedAt)} · <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>printable winding</Link> · <Link href={`${jobRoutes(number).benchPack}?rev=${r.revision}`}>bench pack</Link></>
             : <> · opened by {r.createdBy ?? '—'}, last changed {fmt.dateTime(r.updatedAt)}</>}
           {' · '}<span className="small muted">{r.request.target.lineVoltageV} V {r.request.target.frequencyHz} Hz, {r.request.target.poles} poles</span>
         </li>
@@ -147,9 +148,10 @@ function ApprovedRevision({ r, number }: { r: RedesignRevision; number: number }
       <h2 id="approved-h">Revision {r.revision}: approved and frozen</h2>
       <p className="notice ok">
         Approved by <strong>{snap.approval.byName}</strong> on {fmt.dateTime(new Date(snap.approval.at))}. Note: “{snap.approval.note}”. Candidate {snap.search.rank} of {snap.search.candidatesFound}.
-        This revision cannot be changed: a new request opens the next revision. <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>Printable winding for the winder</Link>
+        This revision cannot be changed: a new request opens the next revision. <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>Printable winding for the winder</Link> · <Link href={`${jobRoutes(number).benchPack}?rev=${r.revision}`}>Winder’s bench pack (groups, connections, wire, coil sizes)</Link>
       </p>
       <ComparisonTable report={snap.report} />
+      <JobLosses jobNumber={number} comparing={snap.report} headingId="losses-approved-h" />
       <h3>Proposed supplementary nameplate</h3>
       <NameplateProposal report={snap.report} />
       <h3>Cautions</h3>
@@ -184,6 +186,7 @@ async function DraftRevision({ r, ctx, canEdit, mayApprove }: { r: RedesignRevis
         <section className="card" aria-labelledby="chosen-h" id="chosen">
           <h2 id="chosen-h">Candidate {chosen.rank} beside the as-found winding</h2>
           <ComparisonTable report={report.value} />
+          <JobLosses jobId={ctx.sheet.jobId} comparing={report.value} headingId="losses-draft-h" />
           <h3>Proposed supplementary nameplate</h3>
           <NameplateProposal report={report.value} />
           <h3>Cautions</h3>

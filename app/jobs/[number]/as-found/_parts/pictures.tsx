@@ -1,7 +1,8 @@
 'use client';
 
 /** The slot diagram (with its table alternative) and the MMF plots, drawn from the live analysis. */
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
+import { useHydrated } from '@/app/_components/use-hydrated';
 import type { LiveAnalysis } from '@/lib/as-found/live-analysis';
 import { MmfCharts } from './mmf-charts';
 import { SlotDiagram, SlotTableView } from './slot-diagram';
@@ -11,8 +12,7 @@ import { spansLabel } from '@/lib/engine/notation';
 export function Pictures({ live }: { live: LiveAnalysis }) {
   const [showTable, setShowTable] = useState(false);
   // Charts measure their container, which only exists in the browser: draw them after hydration.
-  const [mounted, setMounted] = useState(false);
-  useEffect(() => setMounted(true), []);
+  const mounted = useHydrated();
   const w = live.winding;
   const style = live.sheet?.winding.style ?? '';
   const spans = live.sheet?.winding.spans;

@@ -5,7 +5,7 @@
  * the live analysis beside it, the slot diagram and MMF pictures below, drafts kept on the server as the
  * winder types, unit toggle, JSON import, and saving under optimistic locking.
  */
-import { useCallback, useEffect, useMemo, useRef, useState, useTransition } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, useTransition, type KeyboardEvent as ReactKeyboardEvent } from 'react';
 import { useRouter } from 'next/navigation';
 import { FormProvider, useForm } from 'react-hook-form';
 import { FormStatus } from '@/app/_components/form-status';
@@ -17,10 +17,12 @@ import { convertTypedLength, type LengthUnit } from '@/lib/as-found/length-entry
 import { liveAnalysis, type LiveAnalysis } from '@/lib/as-found/live-analysis';
 import { convertFormLengths, type SheetFormValues } from '@/lib/as-found/as-found-form';
 import { AnalysisPanel } from './analysis-panel';
+import { FindingsStrip } from './findings-strip';
 import { ImportSheet } from './import-sheet';
 import { Pictures } from './pictures';
 import { CoreSection, InsulationSection, NotesSection, ResistanceSection, SupplySection, WiresSection, WindingSection } from './sheet-sections';
 import { serverErrorsToForm, sheetResolver } from './sheet-resolver';
+import { ReadOnlyFields } from './sheet-fields';
 import { draftStatusText, useDraftAutosave } from './use-draft-autosave';
 import { jobRoutes } from '@/lib/routes';
 
@@ -140,6 +142,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
 
   const readOnly = !editable;
   const statusText = draftStatusText(autosave.state);
+  const drawer = useAnalysisDrawer();
 
   return (
     <FormProvider {...form}>
@@ -148,7 +151,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
           <span className="label">Lengths in</span>
           {(['mm', 'in'] as const).map((u) => (
             <label key={u} className="inline">
-              <input type="radio" name="length-unit" value={u} checked={unit === u} onChange={() => switchUnit(u)} disabled={readOnly} /> {u === 'mm' ? 'millimetres' : 'inches'}
+              <input type="radio" name="length-unit" value={u} checked={unit === u} onChange={() => switchUnit(u)} /> {u === 'mm' ? 'millimetres' : 'inches'}
             </label>
           ))}
         </div>
@@ -179,15 +182,17 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
       )}
       <div className="sheet-layout">
         <form onSubmit={onSave} noValidate aria-label="As-found data sheet" className="sheet-form">
-          <fieldset disabled={readOnly} className="plain">
-            <CoreSection unit={unit} />
-            <WindingSection unit={unit} />
-            <WiresSection />
-            <SupplySection />
-            <ResistanceSection />
-            <InsulationSection />
-            <NotesSection />
-          </fieldset>
+          <ReadOnlyFields value={readOnly}>
+            <div className="plain">
+              <CoreSection unit={unit} />
+              <WindingSection unit={unit} />
+              <WiresSection />
+              <SupplySection />
+              <ResistanceSection />
+              <InsulationSection />
+              <NotesSection />
+            </div>
+          </ReadOnlyFields>
           {slotTable && <p className="small muted">This sheet carries a slot table drawn by the winder ({slotTable.length} coil sides); the diagram and analysis use it.</p>}
           {editable && (
             <div className="row save-row no-print">
@@ -196,15 +201,46 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
               <span className="small muted">{baseRevision === null ? 'Not saved yet.' : `Editing from revision ${baseRevision}.`}</span>
             </div>
           )}
+          <FindingsStrip live={live} open={drawer.open} onToggle={drawer.toggle} controls="live-analysis" />
         </form>
-        <aside className="sheet-analysis" aria-labelledby="live-h">
-          <h2 id="live-h">Live analysis</h2>
+        <aside id="live-analysis" className={`sheet-analysis${drawer.open ? ' open' : ''}`} aria-labelledby="live-h" ref={drawer.ref} tabIndex={0} onKeyDown={drawer.onKeyDown}>
+          <div className="analysis-head">
+            <h2 id="live-h">Live analysis</h2>
+            <button type="button" className="btn quiet analysis-close" onClick={drawer.close}>Close</button>
+          </div>
           <AnalysisPanel live={live} />
         </aside>
       </div>
       <Pictures live={live} />
     </FormProvider>
   );
+}
+
+/**
+ * The analysis drawer of narrow screens: opening it moves focus into it, Escape or Close shuts it and
+ * returns focus to the strip's button.
+ */
+function useAnalysisDrawer() {
+  const [open, setOpen] = useState(false);
+  const ref = useRef<HTMLElement>(null);
+  const opener = useRef<HTMLElement | null>(null);
+  const close = useCallback(() => {
+    setOpen(false);
+    opener.current?.focus();
+  }, []);
+  const toggle = useCallback(() => {
+    if (open) return close();
+    opener.current = document.activeElement instanceof HTMLElement ? document.activeElement : null;
+    setOpen(true);
+    requestAnimationFrame(() => ref.current?.focus());
+  }, [open, close]);
+  const onKeyDown = (e: ReactKeyboardEvent) => {
+    if (open && e.key === 'Escape') {
+      e.preventDefault();
+      close();
+    }
+  };
+  return { open, toggle, close, ref, onKeyDown };
 }
 
 function LibraryLink({ jobNumber, values, unit }: { jobNumber: number; values: () => SheetFormValues; unit: LengthUnit }) {

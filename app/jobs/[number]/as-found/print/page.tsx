@@ -2,7 +2,7 @@ import Link from 'next/link';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import { mmToInches } from '@/lib/engine/units';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
-import { sheetConsistency } from '@/lib/as-found/consistency';
+import { sheetFindings } from '@/lib/engine/sheet-findings';
 import { getAsFoundSheet, getJobForSheet } from '@/lib/as-found/as-found-queries';
 import { fmt } from '@/lib/presentation/format';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
@@ -64,7 +64,7 @@ export default async function SheetPrintPage({ params }: { params: Promise<{ num
   if (!saved) return <>{back}<h1>As-found data sheet · job {job.number}</h1><p className="notice warn">No data sheet has been saved for this job yet; drafts are not printed.</p></>;
   const s = saved.sheet;
   const a = analyseSheet(s);
-  const findings = a.ok ? sheetConsistency(s, a.value) : [];
+  const findings = a.ok ? sheetFindings(s, a.value) : [];
   const rows = sheetRows(s);
   const m = job.motor;
   return (

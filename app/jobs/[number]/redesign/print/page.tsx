@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { jobRoutes } from '@/lib/routes';
 import { z } from 'zod';
 import { getJobByNumber } from '@/lib/jobs/job-queries';
 import { listRedesigns } from '@/lib/redesign/redesign-queries';
@@ -37,7 +38,7 @@ export default async function RedesignPrintPage({ params, searchParams }: { para
   const isCurrent = approved[0]?.revision === r.revision;
   return (
     <div className="winder-sheet">
-      <p className="no-print row"><Link href={`/jobs/${job.number}/redesign?rev=${r.revision}`}>← Redesign</Link> <PrintButton label="Print this winding" /></p>
+      <p className="no-print row"><Link href={`/jobs/${job.number}/redesign?rev=${r.revision}`}>← Redesign</Link> <PrintButton label="Print this winding" /> <Link className="btn secondary" href={`${jobRoutes(job.number).benchPack}?rev=${r.revision}`}>Bench pack: groups, connections, wire, coil sizes</Link></p>
       <h1>Approved winding · job {job.number} · revision {r.revision}</h1>
       <p className={isCurrent ? 'notice ok' : 'notice bad'}>
         {isCurrent ? 'Current approved revision.' : `Superseded: revision ${approved[0]?.revision} is the current approved revision. Do not wind from this one.`}{' '}
