@@ -143,7 +143,7 @@ describe('Winding waits for the redesign when another supply was asked for; test
     const ctx = await loadRedesignContext(jobId);
     if (!ctx.ok) throw new Error(ctx.reason);
     const row = await db().redesign.findUniqueOrThrow({ where: { id: redesignId } });
-    const search = runSearch(ctx.value, storedRequestSchema.parse(row.request));
+    const search = await runSearch(ctx.value, storedRequestSchema.parse(row.request));
     if (!search.ok || !search.value.candidates[0]) throw new Error('no candidate');
     const chosen = await chooseCandidate({ redesignId, version, key: search.value.candidates[0].key });
     if (!chosen.ok) throw new Error(chosen.message);
