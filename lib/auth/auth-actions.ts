@@ -7,12 +7,13 @@ import { db } from '@/lib/db/client';
 import { verifyPassword } from './password';
 import { SESSION_COOKIE, createSession, deleteSession } from './session-store';
 import { SIGN_IN_FAILED } from './messages';
+import { safeNextPath } from './safe-next';
 import { clearFailedSignIns, heldUntil, recordFailedSignIn, signInHeldMessage } from './sign-in-throttle';
 
 const signInSchema = z.object({
-  email: z.string().trim().toLowerCase().email('Enter your email address.'),
+  email: z.string().trim().toLowerCase().max(254, 'Enter your email address.').pipe(z.email('Enter your email address.')),
   password: z.string().min(1, 'Enter your password.').max(200),
-  next: z.string().regex(/^\/[^/]/).optional().catch(undefined),
+  next: z.unknown().transform(safeNextPath),
 });
 
 export interface SignInState {
@@ -47,7 +48,7 @@ export async function signIn(_prev: SignInState, form: FormData): Promise<SignIn
     path: '/',
     expires: expiresAt,
   });
-  redirect(parsed.data.next ?? '/jobs');
+  redirect(parsed.data.next);
 }
 
 export async function signOut(): Promise<void> {

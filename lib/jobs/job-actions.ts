@@ -10,6 +10,7 @@ import { success, type ActionResult } from '@/lib/errors/action-result';
 import { intakeSchema, jobEditSchema, statusMoveSchema } from '@/lib/schemas/job';
 import { addPhotos, checkPhotos, photosFromFormData } from './attachments';
 import { createIntake, moveJobStatus, updateJob } from './job-writes';
+import { noNul } from '@/lib/schemas/safe-text';
 import { findMotorsBySerial } from './job-queries';
 
 function jsonField(form: FormData, name: string): unknown {
@@ -57,7 +58,7 @@ export async function uploadJobPhotos(form: FormData): Promise<ActionResult<{ ad
 }
 
 export async function lookupSerial(raw: unknown) {
-  return guardedAction('job.intake', 'look up motors', z.object({ serial: z.string().trim().max(80) }), async (_user, input) => {
+  return guardedAction('job.intake', 'look up motors', z.object({ serial: noNul(z.string().trim().max(80)) }), async (_user, input) => {
     const motors = await findMotorsBySerial(input.serial);
     return success(
       motors.map((m) => ({

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { requiredText } from './fields';
+import { boundedEmail, requiredText } from './fields';
 
 export const ROLES = ['FRONT_DESK', 'WINDER', 'ENGINEER', 'ADMIN'] as const;
 export const MIN_PASSWORD = 10;
@@ -12,7 +12,7 @@ const password = z
 /** A new person in the shop, created by an administrator. */
 export const userCreateSchema = z.object({
   name: requiredText('Name', 120),
-  email: z.preprocess((v) => (typeof v === 'string' ? v.trim().toLowerCase() : v), z.email('Enter an email address like name@example.com.')),
+  email: z.preprocess((v) => (typeof v === 'string' ? v.trim().toLowerCase() : v), boundedEmail),
   role: z.enum(ROLES, { error: 'Pick a role.' }),
   password,
 });
