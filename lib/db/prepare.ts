@@ -5,7 +5,7 @@
  */
 import { db, dbEngine, prepareOnce, withSqlRunner } from './client';
 import { applyMigrations } from './migrate';
-import { isEmpty, seedDemoShop } from './seed/seed-demo';
+import { demoSeedNeeded, repairJobCounter, seedDemoShop } from './seed/seed-demo';
 import { bootstrapAdmin } from '@/lib/users/user-writes';
 
 export function prepareDatabase(): Promise<void> {
@@ -16,11 +16,12 @@ export function prepareDatabase(): Promise<void> {
     // queries keep good plans as the shop's data grows.
     if (dbEngine() === 'pglite') await withSqlRunner((sql) => sql.exec('ANALYZE'));
     const wantDemo = dbEngine() === 'pglite' ? process.env.COILWRIGHT_SEED_DEMO !== '0' : process.env.COILWRIGHT_SEED_DEMO === '1';
-    if (wantDemo && (await isEmpty(db()))) {
+    if (wantDemo && (await demoSeedNeeded(db()))) {
       await seedDemoShop(db());
       console.log('[coilwright] seeded the demo shop (see README for the demo sign-ins)');
     } else if (await bootstrapAdmin()) {
       console.log('[coilwright] created the first administrator from COILWRIGHT_ADMIN_EMAIL');
     }
+    await repairJobCounter(db());
   });
 }
