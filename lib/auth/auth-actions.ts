@@ -8,12 +8,16 @@ import { verifyPassword } from './password';
 import { SESSION_COOKIE, createSession, deleteSession } from './session-store';
 import { SIGN_IN_FAILED } from './messages';
 import { safeNextPath } from './safe-next';
-import { clearFailedSignIns, heldUntil, recordFailedSignIn, signInHeldMessage } from './sign-in-throttle';
+import { clientAddress } from './client-address';
+import {
+  accountAttemptFailed, addressAttemptFailed, addressAttemptSucceeded, addressHeldMessage, clearFailedSignIns, reserveAccountAttempt,
+  reserveAddressAttempt, signInHeldMessage,
+} from './sign-in-throttle';
 
 const signInSchema = z.object({
   email: z.string().trim().toLowerCase().max(254, 'Enter your email address.').pipe(z.email('Enter your email address.')),
   password: z.string().min(1, 'Enter your password.').max(200),
-  next: z.unknown().transform(safeNextPath),
+  next: z.unknown().optional().transform(safeNextPath),
 });
 
 export interface SignInState {
@@ -32,13 +36,25 @@ export async function signIn(_prev: SignInState, form: FormData): Promise<SignIn
     const fe = z.flattenError(parsed.error).fieldErrors;
     return { email, fieldErrors: { email: fe.email?.[0], password: fe.password?.[0] } };
   }
+  const address = await clientAddress();
+  const fromAddress = await reserveAddressAttempt(address);
+  if (!fromAddress.ok) return { email, message: addressHeldMessage(fromAddress.until) };
   const user = await db().user.findUnique({ where: { email: parsed.data.email } });
-  const held = user ? heldUntil(user) : null;
-  if (held) return { email, message: signInHeldMessage(held) };
+  if (user) {
+    const forAccount = await reserveAccountAttempt(user.id);
+    if (!forAccount.ok) {
+      await addressAttemptFailed(address);
+      return { email, message: signInHeldMessage(forAccount.until) };
+    }
+  }
   const good = await verifyPassword(parsed.data.password, user?.passwordHash ?? DUMMY_HASH);
-  if (user && !good) await recordFailedSignIn(user.id);
-  if (!user || !good || !user.active) return { email, message: SIGN_IN_FAILED };
+  if (!user || !good || !user.active) {
+    if (user) await accountAttemptFailed(user.id);
+    await addressAttemptFailed(address);
+    return { email, message: SIGN_IN_FAILED };
+  }
   await clearFailedSignIns(user.id);
+  await addressAttemptSucceeded(address);
   const { token, expiresAt } = await createSession(user.id);
   const jar = await cookies();
   jar.set(SESSION_COOKIE, token, {
