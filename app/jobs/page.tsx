@@ -4,8 +4,8 @@ import { can } from '@/lib/auth/permissions';
 import { listBoard, listCustomers, listStaff } from '@/lib/jobs/job-queries';
 import { boardHref } from '@/lib/jobs/board-url';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
-import { boardQuerySchema, boardSearchRefusal, JOB_STATUSES, type BoardQuery } from '@/lib/schemas/job';
-import { fmt } from '@/lib/format';
+import { boardQuerySchema, boardSearchRefusal, JOB_STATUSES, type BoardQuery } from '@/lib/jobs/job-schema';
+import { fmt } from '@/lib/presentation/format';
 
 export const metadata = { title: 'Job board' };
 

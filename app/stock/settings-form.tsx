@@ -5,11 +5,12 @@ import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { shopSettingsSchema, type LimitsForm, type ShopSettingsInput } from '@/lib/schemas/redesign';
+import { shopSettingsSchema, type LimitsForm, type ShopSettingsInput } from '@/lib/redesign/redesign-schema';
 import { saveShopSettings } from '@/lib/settings/settings-actions';
 import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { InputField } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 
 const FIELDS: [keyof LimitsForm, string, string][] = [
   ['gapRisePercent', 'Gap density may rise by', '%'], ['gapFallPercent', 'Gap density may fall by', '%'],
@@ -33,7 +34,7 @@ export function SettingsForm({ version, defaults, starting }: { version: number;
   const onSubmit = handleSubmit(
     (values) =>
       startTransition(async () => {
-        const r = await saveShopSettings({ ...values, version: base });
+        const r = await callAction(() => saveShopSettings({ ...values, version: base }));
         if (r.ok) {
           setBase(r.data.version);
           setSummary({ tone: 'ok', text: r.message ?? 'Saved.' });

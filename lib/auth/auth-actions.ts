@@ -13,6 +13,7 @@ import {
   accountAttemptFailed, addressAttemptFailed, addressAttemptSucceeded, addressHeldMessage, clearFailedSignIns, reserveAccountAttempt,
   reserveAddressAttempt, signInHeldMessage,
 } from './sign-in-throttle';
+import { env } from '@/lib/env';
 
 const signInSchema = z.object({
   email: z.string().trim().toLowerCase().max(254, 'Enter your email address.').pipe(z.email('Enter your email address.')),
@@ -60,7 +61,7 @@ export async function signIn(_prev: SignInState, form: FormData): Promise<SignIn
   jar.set(SESSION_COOKIE, token, {
     httpOnly: true,
     sameSite: 'lax',
-    secure: process.env.COILWRIGHT_SECURE_COOKIES === '1',
+    secure: env().COILWRIGHT_SECURE_COOKIES === '1',
     path: '/',
     expires: expiresAt,
   });

@@ -7,7 +7,7 @@ import { redirect } from 'next/navigation';
 import type { z } from 'zod';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { invalid, toActionFailure, type ActionResult } from '@/lib/errors/action-result';
-import { NUL_MESSAGE, findNul } from '@/lib/schemas/safe-text';
+import { NUL_MESSAGE, findNul } from '@/lib/validation/safe-text';
 import { can, type Permission } from './permissions';
 import { SESSION_COOKIE, findSessionUser, type SessionUser } from './session-store';
 

@@ -2,7 +2,7 @@
  * Three-phase stator winding layouts: the types every winding calculation shares, the builder of the
  * standard 60°-belt layout (lap or concentric, single or double layer, integral or fractional q), and the
  * check of a slot table drawn by the winder. Field paths in errors follow the winding data sheet
- * (lib/schemas/winding-sheet.ts): `core.slots`, `supply.poles`, `winding.spans.0`, `winding.slotTable.3.slot`.
+ * (lib/as-found/winding-sheet-schema.ts, lib/engine/winding-sheet.ts): `core.slots`, `supply.poles`, `winding.spans.0`, `winding.slotTable.3.slot`.
  */
 import { canBalance, gcd, slotsPerPolePerPhase } from './closed-form';
 import { fail, ok, type EngineResult } from './result';
@@ -211,7 +211,7 @@ function sidesFromPlan(plan: CoilPlan[], spec: WindingSpec): EngineResult<SlotTa
  * that holds its phasor on the slot star (electrical angle s·p·360°/S): the usual slot-star allocation,
  * which also yields balanced fractional double-layer layouts. Double layer: the return side lies one span
  * on in layer 2. Single layer: groups join a belt to its partner one pole pitch on (half-coiled: one group
- * per pole pair; whole-coiled: half-belts, one group per pole). [derived, reference §1]
+ * per pole pair; whole-coiled: half-belts, one group per pole). [derived, docs/engineering/winding-factor.md]
  */
 export function buildStandardLayout(spec: WindingSpec): EngineResult<SlotTable> {
   const base = checkSlotsAndPoles(spec.slots, spec.poles);

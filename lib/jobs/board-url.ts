@@ -1,4 +1,4 @@
-import type { BoardQuery } from '@/lib/schemas/job';
+import type { BoardQuery } from '@/lib/jobs/job-schema';
 
 /** The board's URL for a query with some parts changed (filters, sort and page live in the URL). */
 export function boardHref(q: BoardQuery, change: Partial<BoardQuery>): string {

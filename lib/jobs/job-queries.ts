@@ -4,7 +4,7 @@
  */
 import { db, type Prisma } from '@/lib/db/client';
 import type { JobStatus } from '@/lib/db/generated/enums';
-import { PAGE_SIZE, type BoardQuery } from '@/lib/schemas/job';
+import { PAGE_SIZE, type BoardQuery } from '@/lib/jobs/job-schema';
 import { CLOSED_STATUSES, OPEN_STATUSES } from './status-flow';
 
 export function startOfToday(now = new Date()): Date {
@@ -82,6 +82,11 @@ export async function listBoard(q: BoardQuery, now = new Date()) {
   };
 }
 export type BoardRow = Awaited<ReturnType<typeof listBoard>>['rows'][number];
+
+/** A job's id and number, for downloads that need nothing else of it. */
+export async function findJobRef(number: number): Promise<{ id: string; number: number } | null> {
+  return db().job.findUnique({ where: { number }, select: { id: true, number: true } });
+}
 
 export async function getJobByNumber(number: number) {
   return db().job.findUnique({

@@ -6,11 +6,12 @@
 import { db, Prisma } from '@/lib/db/client';
 import type { JobStatus, Role } from '@/lib/db/generated/enums';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
-import type { Intake } from '@/lib/schemas/job';
-import type { z } from 'zod';
-import type { jobEditSchema, statusMoveSchema } from '@/lib/schemas/job';
-import { toMotorRecord } from '@/lib/schemas/motor';
+import type { Intake } from '@/lib/jobs/job-schema';
+import { z } from 'zod';
+import type { jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
+import { toMotorRecord } from '@/lib/jobs/motor-schema';
 import { isMoveAllowed, STATUS_LABELS } from './status-flow';
+import { claimRequestKey, storeRequestResult } from '@/lib/errors/idempotency';
 
 type Tx = Prisma.TransactionClient;
 export const FIRST_JOB_NUMBER = 1001;
@@ -29,10 +30,16 @@ export async function allocateJobNumber(tx: Tx): Promise<number> {
   return Number(value);
 }
 
+const intakeResultShape = z.object({ jobId: z.string(), number: z.number().int() });
+
 const dateOrNull = (d: string | undefined): Date | null => (d ? new Date(`${d}T12:00:00Z`) : null);
 
-export async function createIntake(userId: string, input: Intake): Promise<{ jobId: string; number: number }> {
+export async function createIntake(userId: string, input: Intake): Promise<{ jobId: string; number: number; replayed?: boolean }> {
   return db().$transaction(async (tx) => {
+    if (input.requestKey) {
+      const first = await claimRequestKey(tx, input.requestKey, userId, 'intake', intakeResultShape);
+      if (first) return { ...first, replayed: true };
+    }
     const customerId =
       input.customer.mode === 'existing'
         ? (await tx.customer.findUnique({ where: { id: input.customer.customerId }, select: { id: true } }))?.id
@@ -80,6 +87,7 @@ export async function createIntake(userId: string, input: Intake): Promise<{ job
     await tx.jobEvent.create({
       data: { jobId: job.id, userId, kind: 'CREATED', toStatus: 'RECEIVED', message: `Job ${number} logged at intake.` },
     });
+    if (input.requestKey) await storeRequestResult(tx, input.requestKey, { jobId: job.id, number });
     return { jobId: job.id, number };
   });
 }

@@ -3,7 +3,7 @@
 /** Shop settings: only an administrator may change them ('settings.manage'). */
 import { guardedAction } from '@/lib/auth/guard';
 import { success } from '@/lib/errors/action-result';
-import { limitsFromForm, shopSettingsSchema } from '@/lib/schemas/redesign';
+import { limitsFromForm, shopSettingsSchema } from '@/lib/redesign/redesign-schema';
 import { saveShopLimits } from './settings-writes';
 
 export async function saveShopSettings(raw: unknown) {

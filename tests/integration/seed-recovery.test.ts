@@ -5,8 +5,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { db } from '@/lib/db/client';
-import { DEMO_USERS } from '@/lib/db/seed/demo-data';
-import { demoSeedNeeded, repairJobCounter, seedDemoShop } from '@/lib/db/seed/seed-demo';
+import { DEMO_USERS } from '@/lib/setup/demo/demo-data';
+import { demoSeedNeeded, repairJobCounter, seedDemoShop } from '@/lib/setup/demo/seed-demo';
 import { submitIntake } from '@/lib/jobs/job-actions';
 import { allowedMoves } from '@/lib/jobs/status-flow';
 import { useTestDatabase } from '../support/test-db';

@@ -5,11 +5,12 @@ import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { jobEditSchema, PRIORITIES, type JobEditInput } from '@/lib/schemas/job';
+import { jobEditSchema, PRIORITIES, type JobEditInput } from '@/lib/jobs/job-schema';
 import { saveJobDetails } from '@/lib/jobs/job-actions';
 import { FIX_FIELDS_SUMMARY, showActionFailure } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 
 export interface JobDetails {
   jobId: string;
@@ -41,7 +42,7 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
   const onSubmit = handleSubmit(
     (values) =>
       startTransition(async () => {
-        const result = await saveJobDetails({ ...values, version: baseVersion });
+        const result = await callAction(() => saveJobDetails({ ...values, version: baseVersion }));
         if (result.ok) {
           setBaseVersion(result.data.version);
           setConflict(false);

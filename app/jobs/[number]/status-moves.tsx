@@ -5,6 +5,7 @@ import { useRouter } from 'next/navigation';
 import { moveStatus } from '@/lib/jobs/job-actions';
 import type { JobStatus } from '@/lib/db/generated/enums';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 
 /** Buttons for the status moves this user may make from the job's current status (and only those). */
 export function StatusMoves({ jobId, version, moves }: { jobId: string; version: number; moves: { to: JobStatus; label: string }[] }) {
@@ -15,10 +16,12 @@ export function StatusMoves({ jobId, version, moves }: { jobId: string; version:
   if (moves.length === 0) return <p className="muted">No further moves: this job is closed.</p>;
   const move = (to: JobStatus) =>
     startTransition(async () => {
-      const result = await moveStatus({ jobId, version, to, note });
+      const result = await callAction(() => moveStatus({ jobId, version, to, note }));
       setSummary(result.ok ? { tone: 'ok', text: result.message ?? 'Moved.' } : { tone: 'bad', text: result.message });
       if (result.ok) setNote('');
-      router.refresh();
+      // Refresh only when the job changed (or someone else changed it): during an outage a refresh would
+      // render the error page over the message and the note.
+      if (result.ok || result.code === 'stale') router.refresh();
     });
   return (
     <div className="no-print">

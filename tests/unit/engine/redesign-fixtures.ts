@@ -9,7 +9,7 @@ export const METRIC_STOCK: StockWire[] = listMetricSizes()
   .filter((s) => s.bareMm >= 0.4 && s.bareMm <= 1.6)
   .map((s) => value(stockWire({ standard: 'metric', size: s.size, enamelGrade: 2 })));
 
-/** Example A (reference §2) as the search's original: 36 slots, 4 poles, lap 1–8, N_c 14, star, 400 V 50 Hz. */
+/** Example A (docs/engineering/flux-density.md) as the search's original: 36 slots, 4 poles, lap 1–8, N_c 14, star, 400 V 50 Hz. */
 export const EXAMPLE_A_ORIGINAL: RedesignOriginal = value(originalFromSheet(EXAMPLE_A_SHEET, 1440));
 
 /** A request on example A: same poles, span and layers unless overridden, shop default limits. */

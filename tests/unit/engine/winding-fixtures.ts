@@ -2,7 +2,7 @@
 import type { CoreGeometry } from '@/lib/engine/flux';
 import type { EngineResult } from '@/lib/engine/result';
 import { buildStandardLayout, type SlotTable, type WindingSpec } from '@/lib/engine/winding-layout';
-import type { WindingSheet } from '@/lib/schemas/winding-sheet';
+import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 
 export function value<T>(r: EngineResult<T>): T {
   if (!r.ok) throw new Error(`expected ok, got ${r.error.code} at ${r.error.field ?? '-'}: ${r.error.message}`);
@@ -27,7 +27,7 @@ export const singleLayer = (slots: number, poles: number, spans: number[], coili
 
 export const layoutOf = (spec: WindingSpec): SlotTable => value(buildStandardLayout(spec));
 
-/** Worked example A (reference §2): 36 slots, 4 poles, double-layer lap 1–8, N_c 14, a 1, star, 400 V 50 Hz. */
+/** Worked example A (docs/engineering/flux-density.md): 36 slots, 4 poles, double-layer lap 1–8, N_c 14, a 1, star, 400 V 50 Hz. */
 export const EXAMPLE_A_SPEC: WindingSpec = lap(36, 4, 7, { turnsPerCoil: [14] });
 export const EXAMPLE_A_SUPPLY = { lineVoltageV: 400, frequencyHz: 50 };
 /** D 150 mm, L 120 mm, k_fe 0.95, tooth 6.5 mm, OD 240 mm, slot depth 20 mm. */
