@@ -39,8 +39,8 @@ export async function startApp(): Promise<AppServer> {
     env.COILWRIGHT_DATA_DIR = dir;
     cleanup = async () => rmSync(dir, { recursive: true, force: true });
   }
-  const child: ChildProcess = spawn(join('node_modules', '.bin', 'next'), ['start', '-p', String(port), '-H', '127.0.0.1'], {
-    env,
+  const child: ChildProcess = spawn(process.execPath, [join('scripts', 'serve.mjs')], {
+    env: { ...env, HOST: '127.0.0.1' },
     stdio: ['ignore', 'pipe', 'pipe'],
     detached: true,
   });
