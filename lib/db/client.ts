@@ -20,6 +20,8 @@ interface DbHandle {
   openRunner(): Promise<SqlRunner>;
   close(): Promise<void>;
   prepared?: Promise<void>;
+  /** The embedded engine itself, for its consistent dump (lib/setup/backup.ts); absent on PostgreSQL. */
+  pglite?: PGlite;
 }
 
 /**
@@ -53,6 +55,7 @@ function open(config: DbConfig): DbHandle {
   return {
     config,
     prisma,
+    pglite,
     openRunner: async () => pgliteRunner(pglite),
     close: async () => {
       await prisma.$disconnect();
@@ -69,6 +72,11 @@ function handle(): DbHandle {
 /** The Prisma client for the configured database. */
 export function db(): PrismaClient {
   return handle().prisma;
+}
+
+/** The open embedded database, or null on PostgreSQL. */
+export function embeddedDatabase(): PGlite | null {
+  return handle().pglite ?? null;
 }
 
 export function dbEngine(): DbConfig['engine'] {
