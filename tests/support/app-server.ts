@@ -22,6 +22,8 @@ async function freePort(): Promise<number> {
 
 export interface AppServer {
   baseUrl: string;
+  /** The PostgreSQL database the app uses (E2E_DB=postgres), for tests that check what was stored. */
+  databaseUrl?: string;
   stop(): Promise<void>;
 }
 
@@ -63,6 +65,7 @@ export async function startApp(): Promise<AppServer> {
   }
   return {
     baseUrl,
+    databaseUrl: env.DATABASE_URL,
     async stop() {
       if (child.pid && child.exitCode === null) {
         const exited = new Promise((r) => child.once('exit', r));
