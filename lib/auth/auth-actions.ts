@@ -31,6 +31,8 @@ export interface SignInState {
 const DUMMY_HASH = '$2b$11$ZDezhSfYMwaTGGae8CZ1heOLylYlRuIar2WWRtz8q9qZB0sxirsoy';
 
 export async function signIn(_prev: SignInState, form: FormData): Promise<SignInState> {
+  // A public endpoint: anything but the form's FormData is refused plainly, never a 500.
+  if (!(form instanceof FormData)) return { message: SIGN_IN_FAILED };
   const parsed = signInSchema.safeParse(Object.fromEntries(form));
   const email = String(form.get('email') ?? '');
   if (!parsed.success) {

@@ -13,7 +13,12 @@ import { createIntake, moveJobStatus, updateJob } from './job-writes';
 import { noNul } from '@/lib/validation/safe-text';
 import { findMotorsBySerial } from './job-queries';
 
-function jsonField(form: FormData, name: string): unknown {
+// A server action is a public endpoint: the argument may be anything a client sends, not the FormData
+// the form sends, so it is checked before use (a bare `form.get` on a JSON body was an HTTP 500).
+const isForm = (v: unknown): v is FormData => v instanceof FormData;
+
+function jsonField(form: unknown, name: string): unknown {
+  if (!isForm(form)) return undefined;
   const raw = form.get(name);
   if (typeof raw !== 'string') return undefined;
   try {
@@ -26,7 +31,7 @@ function jsonField(form: FormData, name: string): unknown {
 // Photos are read only inside the guarded work: after the session and role checks (issue 12).
 export async function submitIntake(form: FormData): Promise<ActionResult<{ number: number }>> {
   const run = guardedAction('job.intake', 'log motors at intake', intakeSchema, async (user, input) => {
-    const photos = await photosFromFormData(form);
+    const photos = isForm(form) ? await photosFromFormData(form) : [];
     const problems = checkPhotos(photos);
     if (Object.keys(problems).length) {
       return { ok: false, code: 'invalid', message: 'Some photos cannot be stored.', fieldErrors: { photos: Object.values(problems) } };
@@ -54,11 +59,11 @@ export async function moveStatus(raw: unknown) {
 export async function uploadJobPhotos(form: FormData): Promise<ActionResult<{ added: number }>> {
   const schema = z.object({ jobId: z.uuid(), kind: z.enum(['NAMEPLATE', 'DAMAGE', 'OTHER']) });
   return guardedAction('job.attach', 'add photos', schema, async (user, input) => {
-    const photos = await photosFromFormData(form);
+    const photos = isForm(form) ? await photosFromFormData(form) : [];
     if (photos.length === 0) return { ok: false, code: 'invalid', message: 'Choose at least one photo to add.', fieldErrors: { photos: ['Choose at least one photo to add.'] } };
     const added = await addPhotos(input.jobId, user.id, input.kind, photos);
     return success({ added }, `${added} photo${added === 1 ? '' : 's'} added.`);
-  })({ jobId: form.get('jobId'), kind: form.get('kind') });
+  })(isForm(form) ? { jobId: form.get('jobId'), kind: form.get('kind') } : form);
 }
 
 export async function lookupSerial(raw: unknown) {
