@@ -4,7 +4,7 @@ import { convertTypedLength } from '@/lib/as-found/length-entry';
 import { convertFormLengths, emptySheetForm, formToSheetInput, sheetPathToFormPath, sheetToForm } from '@/lib/as-found/as-found-form';
 import { restoreDraftValues } from '@/lib/as-found/draft-values';
 import { prefillFromNameplate } from '@/lib/as-found/prefill';
-import { EXAMPLE_A_SHEET } from '../engine/winding-fixtures';
+import { EXAMPLE_A_SHEET } from '../../support/fixtures/winding-fixtures';
 
 describe('the sheet form model', () => {
   it('round-trips a saved sheet through the form in mm unchanged', () => {

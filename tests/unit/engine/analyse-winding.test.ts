@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { analyseWinding, type AnalyseWindingInput } from '@/lib/engine/analyse-winding';
 import type { WindingSpec } from '@/lib/engine/winding-layout';
-import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, singleLayer, value } from './winding-fixtures';
+import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, singleLayer, value } from '../../support/fixtures/winding-fixtures';
 
 const input = (over: Partial<AnalyseWindingInput> = {}): AnalyseWindingInput => ({
   winding: EXAMPLE_A_SPEC, supply: EXAMPLE_A_SUPPLY, core: EXAMPLE_A_CORE, ...over,

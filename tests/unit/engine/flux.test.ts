@@ -5,7 +5,7 @@ import {
   type FluxInput,
 } from '@/lib/engine/flux';
 import { KILOLINES_PER_IN2_PER_TESLA, teslaToKilolinesPerIn2 } from '@/lib/engine/units';
-import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, rel, singleLayer, value } from './winding-fixtures';
+import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, rel, singleLayer, value } from '../../support/fixtures/winding-fixtures';
 
 const exampleA = () => value(analyseWinding({ winding: EXAMPLE_A_SPEC, supply: EXAMPLE_A_SUPPLY, core: EXAMPLE_A_CORE }));
 

@@ -3,7 +3,7 @@ import { mmfSpectrum, mmfWaveform, type MmfPoint } from '@/lib/engine/mmf-spectr
 import { harmonicWindingFactors } from '@/lib/engine/slot-star';
 import type { SlotTable, WindingSpec } from '@/lib/engine/winding-layout';
 import { fft } from './fft';
-import { lap, layoutOf, singleLayer } from './winding-fixtures';
+import { lap, layoutOf, singleLayer } from '../../support/fixtures/winding-fixtures';
 
 // Source for this file: docs/engineering/winding-factor.md "MMF space harmonics", [derived], verified numerically by FFT of the
 // slot-current staircase (the FFT checks below).

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { allowedParallelPaths, checkParallelPaths, ruleOfThumbParallelPaths } from '@/lib/engine/parallel-paths';
 import type { WindingSpec } from '@/lib/engine/winding-layout';
-import { errorOf, lap, layoutOf, singleLayer, value } from './winding-fixtures';
+import { errorOf, lap, layoutOf, singleLayer, value } from '../../support/fixtures/winding-fixtures';
 
 // Source for the check values: docs/engineering/redesign.md "Allowed parallel paths", [derived].
 describe('allowed parallel paths check values (docs/engineering/redesign.md, [derived])', () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { DEFAULT_BALANCE_TOLERANCE, phaseBalance } from '@/lib/engine/phase-balance';
 import { SlotStar } from '@/lib/engine/slot-star';
 import type { SlotTable, WindingSpec } from '@/lib/engine/winding-layout';
-import { lap, layoutOf, singleLayer } from './winding-fixtures';
+import { lap, layoutOf, singleLayer } from '../../support/fixtures/winding-fixtures';
 
 const balanceOf = (t: SlotTable) => phaseBalance(new SlotStar(t).phasors(t.poles / 2));
 

@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { redesignReport } from '@/lib/engine/redesign/report';
 import { searchRedesign } from '@/lib/engine/redesign/search';
 import { redesignWarnings } from '@/lib/engine/redesign/warnings';
-import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from './redesign-fixtures';
-import { value } from './winding-fixtures';
+import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from '../../support/fixtures/redesign-fixtures';
+import { value } from '../../support/fixtures/winding-fixtures';
 
 /** Searches with the shop defaults, then reports the best candidate against `judgeLimits` (default: the same). */
 function reportFor(target: Parameters<typeof requestFor>[0], judgeLimits: Parameters<typeof requestFor>[1] = {}) {

@@ -3,8 +3,8 @@ import { layoutFamilies } from '@/lib/engine/redesign/families';
 import { searchRedesign } from '@/lib/engine/redesign/search';
 import { stockWire } from '@/lib/engine/redesign/from-sheet';
 import type { Candidate } from '@/lib/engine/redesign/types';
-import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from './redesign-fixtures';
-import { errorOf, value } from './winding-fixtures';
+import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from '../../support/fixtures/redesign-fixtures';
+import { errorOf, value } from '../../support/fixtures/winding-fixtures';
 
 const search = (...args: Parameters<typeof requestFor>) => value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor(...args), METRIC_STOCK));
 const find = (cs: Candidate[], turns: number, paths: number, connection: 'star' | 'delta' = 'star') =>

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { fluxRatio, supplyScaling, type ScalingCase } from '@/lib/engine/supply-scaling';
 import type { WindingSpec } from '@/lib/engine/winding-layout';
-import { EXAMPLE_A_SPEC, errorOf, value } from './winding-fixtures';
+import { EXAMPLE_A_SPEC, errorOf, value } from '../../support/fixtures/winding-fixtures';
 
 const baseline: ScalingCase = { winding: EXAMPLE_A_SPEC, supply: { lineVoltageV: 400, frequencyHz: 50 } };
 const moved = (winding: Partial<WindingSpec>, supply: Partial<ScalingCase['supply']> = {}): ScalingCase => ({

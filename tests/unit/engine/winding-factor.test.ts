@@ -3,7 +3,7 @@ import {
   canBalance, closedFormFactors, concentricPitchFactor, distributionFactor, pitchFactor, slotsPerPolePerPhase,
 } from '@/lib/engine/closed-form';
 import { harmonicWindingFactors, SlotStar } from '@/lib/engine/slot-star';
-import { lap, layoutOf, singleLayer } from './winding-fixtures';
+import { lap, layoutOf, singleLayer } from '../../support/fixtures/winding-fixtures';
 
 /** docs/engineering/winding-factor.md check values: double-layer 60°-belt lap, tolerance ±0.0005. */
 const TOL = 0.0005;

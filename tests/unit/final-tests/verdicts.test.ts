@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { judgeTestRecord, overallVerdict, type SectionStatus } from '@/lib/final-tests/verdicts';
-import { PASSING, record } from './fixtures';
+import { PASSING, record } from '../../support/fixtures/final-test-fixtures';
 
 const section = (j: ReturnType<typeof judgeTestRecord>, key: string) => j.sections.find((s) => s.key === key)!;
 

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
-import { expectedCoils, expectedGroups, RESISTANCE_AGREEMENT_PERCENT, sheetConsistency } from '@/lib/as-found/consistency';
-import { EXAMPLE_A_SHEET, value } from '../engine/winding-fixtures';
+import { expectedGroups, RESISTANCE_AGREEMENT_PERCENT, sheetFindings } from '@/lib/engine/sheet-findings';
+import { EXAMPLE_A_SHEET, value } from '../../support/fixtures/winding-fixtures';
 
-const findings = (s: WindingSheet) => sheetConsistency(s, value(analyseSheet(s)));
+const findings = (s: WindingSheet) => sheetFindings(s, value(analyseSheet(s)));
 const ids = (s: WindingSheet) => findings(s).map((f) => f.id);
 
 /** 36 slots, 4 poles, single-layer concentric half-coiled, spans 11/9/7 (usual τ+q−1, −2 …) [derived, docs/engineering/winding-factor.md]. */
@@ -15,16 +15,11 @@ const CONCENTRIC: WindingSheet = {
 };
 
 describe('consistency checks of an as-found sheet', () => {
-  it('finds nothing wrong with worked example A (docs/engineering/flux-density.md, §4)', () => {
+  it('finds nothing wrong with worked example A (docs/engineering/flux-density.md and wire-and-resistance.md)', () => {
     expect(findings(EXAMPLE_A_SHEET)).toEqual([]);
   });
 
-  // Coils: double layer one per slot, single layer one per two slots; groups 3P, or 3P/2 half-coiled [common practice].
-  it.each([
-    [36, 2, 36],
-    [36, 1, 18],
-    [48, 2, 48],
-  ] as const)('%s slots, %s layer(s) → %s coils', (slots, layers, coils) => expect(expectedCoils(slots, layers)).toBe(coils));
+  // Groups: 3P, or 3P/2 single-layer half-coiled [common practice]. (Coil counts come from the engine's layout.)
   it.each([
     [4, 2, undefined, 12],
     [4, 1, 'half', 6],
@@ -66,7 +61,7 @@ describe('consistency checks of an as-found sheet', () => {
     const r = EXAMPLE_A_SHEET.resistance!;
     const s = { ...EXAMPLE_A_SHEET, resistance: { ...r, readings: r.readings.map((x) => x * 1.08) as [number, number, number] } };
     expect(ids(s)).not.toContain('resistance-turns');
-    expect(sheetConsistency(s, value(analyseSheet(s)), { resistanceAgreementPercent: 5 }).map((f) => f.id)).toContain('resistance-turns');
+    expect(sheetFindings(s, value(analyseSheet(s)), { resistanceAgreementPercent: 5 }).map((f) => f.id)).toContain('resistance-turns');
   });
 
   it('notes an unusual lead count and a copper weight far from the turns and wire', () => {
