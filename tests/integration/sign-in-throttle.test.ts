@@ -54,7 +54,7 @@ describe('sign-in throttle under concurrency', () => {
     requestHeaders.set('x-forwarded-for', '10.14.0.1');
     expect(await attempt(ENGINEER.email, ENGINEER.password)).toMatch(/^Too many failed sign-ins for this account/);
     await db().user.update({ where: { id: user.id }, data: { failedSignIns: 0, signInHeldUntil: null } });
-  });
+  }, 300_000);
 
   it(`one address gets ${ADDRESS_LIMIT} failed attempts across any accounts, then is held; other addresses are not`, async () => {
     requestHeaders.set('x-forwarded-for', '10.15.0.1');
@@ -64,14 +64,14 @@ describe('sign-in throttle under concurrency', () => {
     expect(await attempt(ENGINEER.email, ENGINEER.password)).toMatch(/from this network address/);
     requestHeaders.set('x-forwarded-for', '10.15.0.2');
     expect(await attempt(ENGINEER.email, ENGINEER.password)).toBe('NEXT_REDIRECT /jobs');
-  });
+  }, 300_000);
 
   it('a correct sign-in gives back only its own reserved attempt on the address', async () => {
     requestHeaders.set('x-forwarded-for', '10.16.0.1');
     for (let i = 0; i < 3; i++) expect(await attempt('nobody@example.com', 'guess-guess-1')).toBe(SIGN_IN_FAILED);
     expect(await attempt(ENGINEER.email, ENGINEER.password)).toBe('NEXT_REDIRECT /jobs');
     expect((await db().signInAddress.findUniqueOrThrow({ where: { address: '10.16.0.1' } })).failures).toBe(3);
-  });
+  }, 300_000);
 
   it('reads the proxy’s entry (the last) from X-Forwarded-For and refuses junk', () => {
     expect(addressFromForwardedFor('203.0.113.9, 10.0.0.2')).toBe('10.0.0.2');
