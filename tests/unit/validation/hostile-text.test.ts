@@ -22,7 +22,7 @@ describe('wire size parsers are linear', () => {
       const ms = performance.now() - t0;
       expect(r.success).toBe(false);
       if (!r.success) expect(Object.keys(zodFieldErrors(r.error))).toContain('size');
-      expect(ms).toBeLessThan(50); // before: ~12 s for 80,000 characters
+      expect(ms).toBeLessThan(500); // before: ~12 s for 80,000 characters (margin for a busy machine)
     }
   });
 
@@ -33,7 +33,8 @@ describe('wire size parsers are linear', () => {
       expect(parseAwg(spaced(n, 'awg'))).toBeNull();
       expect(parseMetricSize(spaced(n, 'mm'))).toBeNull();
       expect(parseMetricSize(`${'1'.repeat(n)}x`)).toBeNull();
-      expect(performance.now() - t0).toBeLessThan(50);
+      // quadratic code took seconds here; linear code takes milliseconds (margin for a busy machine)
+      expect(performance.now() - t0).toBeLessThan(500);
     }
   });
 
@@ -95,6 +96,6 @@ describe('NUL bytes are refused with a field error', () => {
     const t0 = performance.now();
     expect(findNul(deep)).toBeNull();
     expect(findNul(wide)).toBeNull();
-    expect(performance.now() - t0).toBeLessThan(100);
+    expect(performance.now() - t0).toBeLessThan(1000);
   });
 });
