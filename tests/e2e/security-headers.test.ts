@@ -51,8 +51,8 @@ describe('security headers', () => {
   });
 
   it('an unknown address shows the not-found screen with a way back', async () => {
+    // The browser context is already signed in by the test before (it shares cookies).
     const page = await e2e.browser.context.newPage();
-    await signIn(page, e2e.app.baseUrl, ADMIN.email, ADMIN.password);
     const res = await page.goto(`${e2e.app.baseUrl}/no-such-screen`);
     expect(res?.status()).toBe(404);
     await expect(page.getByRole('heading', { name: 'Nothing here' }).isVisible()).resolves.toBe(true);
