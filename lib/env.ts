@@ -18,6 +18,19 @@ const envSchema = z.object({
   /** First administrator on an empty real database. */
   COILWRIGHT_ADMIN_EMAIL: z.string().trim().toLowerCase().max(254).optional(),
   COILWRIGHT_ADMIN_PASSWORD: z.string().max(200).optional(),
+  /** Connections per app instance to PostgreSQL (lib/db/client.ts). */
+  COILWRIGHT_DB_POOL_SIZE: z.coerce.number().int().min(1).max(200).default(10),
+  /**
+   * 1 when a reverse proxy (TLS terminator, load balancer) forwards to the app: X-Forwarded-For (its last
+   * entry) names the client for the sign-in limit, and X-Forwarded-Host/-Proto are believed. Unset: the
+   * server started by `npm start` drops those headers from clients (scripts/serve.mjs).
+   */
+  COILWRIGHT_TRUST_PROXY: flag,
+  /**
+   * Extra origins (host[:port], comma-separated) allowed to post to server actions, for a proxy that
+   * rewrites the Host header; the app's own host is always allowed (next.config.js).
+   */
+  COILWRIGHT_ALLOWED_ORIGINS: z.string().trim().max(1000).regex(/^[A-Za-z0-9.:*,\- ]*$/, 'host names and ports, comma-separated').optional(),
   /** 1 when served over HTTPS: session cookies get the Secure flag. */
   COILWRIGHT_SECURE_COOKIES: flag,
   /** The shop's own details at the head of the job sheet. */

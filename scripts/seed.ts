@@ -1,14 +1,14 @@
 /**
- * `npm run db:seed`: seed the invented demo shop into an EMPTY database (the embedded one, or DATABASE_URL).
+ * `npm run db:seed`: seed the invented demo shop into an EMPTY database (or complete an interrupted demo seed) (the embedded one, or DATABASE_URL).
  * Refuses a database that already holds people or jobs, so it never mixes demo data with a shop's records.
  */
 import { closeDb, db, withSqlRunner } from '@/lib/db/client';
 import { applyMigrations } from '@/lib/db/migrate';
-import { isEmpty, seedDemoShop } from '@/lib/setup/demo/seed-demo';
+import { demoSeedNeeded, seedDemoShop } from '@/lib/setup/demo/seed-demo';
 
 async function main(): Promise<number> {
   await withSqlRunner((sql) => applyMigrations(sql));
-  if (!(await isEmpty(db()))) {
+  if (!(await demoSeedNeeded(db()))) {
     console.error('The database already holds records: the demo shop is seeded only into an empty database.');
     return 2;
   }

@@ -27,7 +27,7 @@ if (built < Math.max(...sources.map(newestMtime))) {
 
 console.log(`Starting Coilwright on http://${host}:${port} …`);
 console.log(process.env.DATABASE_URL ? 'Database: PostgreSQL from DATABASE_URL' : `Database: embedded, in ${process.env.COILWRIGHT_DATA_DIR ?? './data/pglite'}`);
-const server = spawn(next, ['start', '-p', port, '-H', host], { stdio: 'inherit' });
+const server = spawn(process.execPath, [join('scripts', 'serve.mjs')], { stdio: 'inherit', env: { ...process.env, PORT: port, HOST: host } });
 const stop = (signal) => server.kill(signal);
 process.on('SIGINT', stop);
 process.on('SIGTERM', stop);

@@ -4,7 +4,7 @@ import { can } from '@/lib/auth/permissions';
 import { listBoard, listCustomers, listStaff } from '@/lib/jobs/job-queries';
 import { boardHref } from '@/lib/jobs/board-url';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
-import { boardQuerySchema, JOB_STATUSES, type BoardQuery } from '@/lib/jobs/job-schema';
+import { boardQuerySchema, boardSearchRefusal, JOB_STATUSES, type BoardQuery } from '@/lib/jobs/job-schema';
 import { fmt } from '@/lib/presentation/format';
 
 export const metadata = { title: 'Job board' };
@@ -29,7 +29,9 @@ const SORT_WORDS: Record<BoardQuery['sort'], string> = {
 
 export default async function JobBoard({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser('job.read');
-  const q = boardQuerySchema.parse(await searchParams);
+  const raw = await searchParams;
+  const q = boardQuerySchema.parse(raw);
+  const qRefusal = boardSearchRefusal(raw.q);
   const [board, customers, staff] = await Promise.all([listBoard(q), listCustomers(), listStaff()]);
   const statusValue = q.status[0] ?? '';
   return (
@@ -42,7 +44,8 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
         <div className="grid">
           <div>
             <label htmlFor="q">Search</label>
-            <input id="q" name="q" type="search" defaultValue={q.q ?? ''} placeholder="Job no., customer, serial, model" />
+            <input id="q" name="q" type="search" defaultValue={q.q ?? ''} placeholder="Job no., customer, serial, model" maxLength={80} aria-invalid={qRefusal ? true : undefined} aria-describedby={qRefusal ? 'q-error' : undefined} />
+            {qRefusal && <p id="q-error" className="field-error">{qRefusal}</p>}
           </div>
           <div>
             <label htmlFor="status">Status</label>

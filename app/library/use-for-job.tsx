@@ -4,6 +4,7 @@ import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { copyLibrarySheetToJob } from '@/lib/as-found/as-found-actions';
 import { jobRoutes } from '@/lib/routes';
+import { callAction } from '@/lib/errors/call-action';
 
 /** "Use for job N": copies the match into job N's sheet draft and opens the sheet. */
 export function UseForJob({ jobNumber, sheetId, from }: { jobNumber: number; sheetId: string; from: number }) {
@@ -18,7 +19,7 @@ export function UseForJob({ jobNumber, sheetId, from }: { jobNumber: number; she
         disabled={pending}
         onClick={() =>
           start(async () => {
-            const r = await copyLibrarySheetToJob({ jobNumber, sheetId });
+            const r = await callAction(() => copyLibrarySheetToJob({ jobNumber, sheetId }));
             if (r.ok) router.push(jobRoutes(jobNumber).asFound);
             else setError(r.message);
           })

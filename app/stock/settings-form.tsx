@@ -10,6 +10,7 @@ import { saveShopSettings } from '@/lib/settings/settings-actions';
 import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { InputField } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 
 const FIELDS: [keyof LimitsForm, string, string][] = [
   ['gapRisePercent', 'Gap density may rise by', '%'], ['gapFallPercent', 'Gap density may fall by', '%'],
@@ -34,7 +35,7 @@ export function SettingsForm({ version, defaults, starting }: { version: number;
   const onSubmit = handleSubmit(
     (values) =>
       startTransition(async () => {
-        const r = await saveShopSettings({ ...values, version: base });
+        const r = await callAction(() => saveShopSettings({ ...values, version: base }));
         if (r.ok) {
           setBase(r.data.version);
           setSummary({ tone: 'ok', text: r.message ?? 'Saved.' });

@@ -9,6 +9,7 @@ import { addStockWire, deleteStockWire } from '@/lib/stock/stock-actions';
 import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 
 /** Adds a size on hand (the same size and grade again updates its quantity and note). */
 export function AddStockForm() {
@@ -22,7 +23,7 @@ export function AddStockForm() {
   const onSubmit = handleSubmit(
     (values) =>
       startTransition(async () => {
-        const r = await addStockWire(values);
+        const r = await callAction(() => addStockWire(values));
         if (r.ok) {
           setSummary({ tone: 'ok', text: r.message ?? 'Added.' });
           reset({ standard: values.standard, size: '', enamelGrade: values.enamelGrade, quantityKg: '', note: '' });
@@ -75,7 +76,7 @@ export function RemoveStockButton({ id, label }: { id: string; label: string }) 
         onClick={() => {
           if (!window.confirm(`Remove ${label} from the stock? The redesign search will no longer use it.`)) return;
           startTransition(async () => {
-            const r = await deleteStockWire({ id });
+            const r = await callAction(() => deleteStockWire({ id }));
             if (r.ok) router.refresh();
             else setError(r.message);
           });

@@ -5,11 +5,12 @@
 import { z } from 'zod';
 import { LENGTH_UNITS } from '@/lib/as-found/length-entry';
 import { coilSideSchema } from './winding-sheet-schema';
+import { noNul } from '@/lib/validation/safe-text';
 
 /** Largest draft accepted, as JSON text. A full sheet form is 2–4 kB; a 2400-side slot table ~150 kB. */
 export const MAX_DRAFT_BYTES = 256 * 1024;
 
-const typed = z.string().max(5000);
+const typed = noNul(z.string().max(5000));
 const section = z.record(z.string().max(40), z.union([typed, z.array(z.unknown()).max(24)]));
 
 /** What the client sends and what is stored. */

@@ -8,6 +8,7 @@ import { z } from 'zod';
 import { parseAwg } from '@/lib/engine/awg';
 import { parseMetricSize } from '@/lib/engine/metric-wire';
 import type { WindingSheetData } from '@/lib/engine/winding-sheet';
+import { noNul } from '@/lib/validation/safe-text';
 import { THERMAL_CLASSES, WIRE_STANDARDS } from '@/lib/engine/winding-sheet';
 
 interface MeasureRule {
@@ -28,7 +29,7 @@ function measure(label: string, { unit, int, min = 0, above = true, max }: Measu
   return s.max(max, `${label} must be at most ${max}${u}.`);
 }
 
-const text = (label: string, max: number) => z.string({ error: `${label} must be text.` }).max(max, `${label}: at most ${max} characters.`);
+const text = (label: string, max: number) => noNul(z.string({ error: `${label} must be text.` }).max(max, `${label}: at most ${max} characters.`));
 
 export { THERMAL_CLASSES, WIRE_STANDARDS };
 
@@ -91,7 +92,7 @@ export const wireSchema = z
   .object({
     standard: z.enum(WIRE_STANDARDS, { error: 'Wire standard is AWG or metric.' }),
     /** AWG gauge as written ("18", "4/0"), or the metric nominal bare diameter in mm ("0.85"). */
-    size: z.string({ error: 'Enter the wire size.' }).trim().min(1, 'Enter the wire size.'),
+    size: noNul(z.string({ error: 'Enter the wire size.' }).trim().min(1, 'Enter the wire size.').max(20, 'Wire size: at most 20 characters.')),
     count: measure('Wires in hand', { int: true, min: 1, above: false, max: 100 }),
     enamelGrade: z.union([z.literal(1), z.literal(2), z.literal(3)], { error: 'Enamel grade is 1, 2 or 3.' }),
   })

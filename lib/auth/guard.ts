@@ -7,6 +7,7 @@ import { redirect } from 'next/navigation';
 import type { z } from 'zod';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { invalid, toActionFailure, type ActionResult } from '@/lib/errors/action-result';
+import { NUL_MESSAGE, findNul } from '@/lib/validation/safe-text';
 import { can, PERMISSION_WORDS, type Permission } from './permissions';
 import { SESSION_COOKIE, findSessionUser, type SessionUser } from './session-store';
 
@@ -44,6 +45,10 @@ export function guardedAction<S extends z.ZodType, T>(
   return async (raw: unknown) => {
     try {
       const user = await requireActionUser(permission, what);
+      // A NUL anywhere (a record key, a draft value a schema passes through) is refused by path before
+      // the schema, so no shape of input can carry one into PostgreSQL.
+      const nul = findNul(raw);
+      if (nul) return { ok: false, code: 'invalid', message: MESSAGES.invalid, fieldErrors: { [nul.join('.') || '_form']: [NUL_MESSAGE] } };
       const parsed = schema.safeParse(raw);
       if (!parsed.success) return invalid(parsed.error);
       return await work(user, parsed.data);

@@ -47,7 +47,13 @@ export function awgLabel(n: number): string {
  * between 4/0 and 44.
  */
 export function parseAwg(size: string): number | null {
-  const s = size.trim().toLowerCase().replace(/^awg\s*/, '').replace(/^#\s*/, '').replace(/\s*awg$/, '');
+  // No regular expression with a repeat before an anchor runs on the user's text: `/\s*awg$/` took
+  // quadratic time on a long run of inner spaces. Prefixes and suffixes are cut with string methods.
+  if (size.length > 40) return null;
+  let s = size.trim().toLowerCase();
+  if (s.startsWith('awg')) s = s.slice(3).trimStart();
+  if (s.startsWith('#')) s = s.slice(1).trimStart();
+  if (s.endsWith('awg')) s = s.slice(0, -3).trimEnd();
   const ought = OUGHT_ALIASES[s];
   if (ought !== undefined) return ought;
   if (!/^\d{1,2}$/.test(s)) return null;

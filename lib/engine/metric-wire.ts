@@ -51,8 +51,13 @@ export const METRIC_NOMINAL_SIZES: readonly MetricNominalSize[] = buildSeries();
  * is not a number or not on the series.
  */
 export function parseMetricSize(size: string): MetricNominalSize | null {
-  const s = size.trim().toLowerCase().replace(/\s*mm$/, '').replace(',', '.');
-  if (!/^\d*\.?\d+$/.test(s)) return null;
+  // Linear on any input: the suffix is cut with string methods (a `/\s*mm$/` pattern backtracks
+  // quadratically on inner spaces) and the number pattern has no overlapping repeats.
+  if (size.length > 40) return null;
+  let s = size.trim().toLowerCase();
+  if (s.endsWith('mm')) s = s.slice(0, -2).trimEnd();
+  s = s.replace(',', '.');
+  if (!/^(?:\d+(?:\.\d+)?|\.\d+)$/.test(s)) return null;
   const d = Number(s);
   return METRIC_NOMINAL_SIZES.find((m) => Math.abs(m.diameterMm - d) < 5e-7) ?? null;
 }

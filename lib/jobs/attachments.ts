@@ -6,9 +6,9 @@ import { db } from '@/lib/db/client';
 import type { AttachmentKind } from '@/lib/db/generated/enums';
 import { DomainError } from '@/lib/errors/domain-errors';
 import { recordJobEvent } from './job-writes';
+import { MAX_PHOTO_BYTES, MAX_PHOTOS_PER_UPLOAD } from './photo-rules';
 
-export const MAX_PHOTO_BYTES = 5 * 1024 * 1024;
-export const MAX_PHOTOS_PER_UPLOAD = 6;
+export { MAX_PHOTO_BYTES, MAX_PHOTOS_PER_UPLOAD } from './photo-rules';
 
 const SIGNATURES: { mime: string; test: (b: Uint8Array) => boolean }[] = [
   { mime: 'image/jpeg', test: (b) => b[0] === 0xff && b[1] === 0xd8 && b[2] === 0xff },
@@ -31,7 +31,8 @@ export function checkPhotos(photos: PhotoUpload[]): Record<string, string> {
   const problems: Record<string, string> = {};
   if (photos.length > MAX_PHOTOS_PER_UPLOAD) problems._count = `At most ${MAX_PHOTOS_PER_UPLOAD} photos at a time.`;
   for (const p of photos) {
-    if (p.bytes.byteLength > MAX_PHOTO_BYTES) problems[p.filename] = `${p.filename} is larger than 5 MB; take a smaller photo.`;
+    if (p.bytes.byteLength === 0) problems[p.filename] = `${p.filename} is empty (0 bytes); choose the photo again.`;
+    else if (p.bytes.byteLength > MAX_PHOTO_BYTES) problems[p.filename] = `${p.filename} is larger than 5 MB; take a smaller photo.`;
     else if (!sniffImageType(p.bytes)) problems[p.filename] = `${p.filename} is not a JPEG, PNG, WebP or GIF image.`;
   }
   return problems;
@@ -62,8 +63,9 @@ export async function addPhotos(jobId: string, userId: string, kind: AttachmentK
   });
 }
 
+// An empty file input submits a nameless zero-byte part: that is "no photo", not an empty photo.
 export async function photosFromFormData(form: FormData, field = 'photos'): Promise<PhotoUpload[]> {
-  const files = form.getAll(field).filter((f): f is File => typeof f === 'object' && f !== null && 'arrayBuffer' in f && f.size > 0);
+  const files = form.getAll(field).filter((f): f is File => typeof f === 'object' && f !== null && 'arrayBuffer' in f && (f.size > 0 || f.name !== ''));
   return Promise.all(files.map(async (f) => ({ filename: f.name || 'photo', bytes: new Uint8Array(await f.arrayBuffer()) })));
 }
 

@@ -10,9 +10,15 @@ import { success, type ActionResult } from '@/lib/errors/action-result';
 import { gateDecisionSchema, intakeSchema, jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
 import { addPhotos, checkPhotos, photosFromFormData } from './attachments';
 import { createIntake, moveJobStatus, recordGateDecision, updateJob } from './job-writes';
+import { noNul } from '@/lib/validation/safe-text';
 import { findMotorsBySerial } from './job-queries';
 
-function jsonField(form: FormData, name: string): unknown {
+// A server action is a public endpoint: the argument may be anything a client sends, not the FormData
+// the form sends, so it is checked before use (a bare `form.get` on a JSON body was an HTTP 500).
+const isForm = (v: unknown): v is FormData => v instanceof FormData;
+
+function jsonField(form: unknown, name: string): unknown {
+  if (!isForm(form)) return undefined;
   const raw = form.get(name);
   if (typeof raw !== 'string') return undefined;
   try {
@@ -22,15 +28,17 @@ function jsonField(form: FormData, name: string): unknown {
   }
 }
 
+// Photos are read only inside the guarded work: after the session and role checks (issue 12).
 export async function submitIntake(form: FormData): Promise<ActionResult<{ number: number }>> {
-  const photos = await photosFromFormData(form);
   const run = guardedAction('job.intake', 'log motors at intake', intakeSchema, async (user, input) => {
+    const photos = isForm(form) ? await photosFromFormData(form) : [];
     const problems = checkPhotos(photos);
     if (Object.keys(problems).length) {
       return { ok: false, code: 'invalid', message: 'Some photos cannot be stored.', fieldErrors: { photos: Object.values(problems) } };
     }
-    const { jobId, number } = await createIntake(user.id, input);
-    await addPhotos(jobId, user.id, 'NAMEPLATE', photos);
+    const { jobId, number, replayed } = await createIntake(user.id, input);
+    // A replayed request (same idempotency key) already stored its photos with the first answer.
+    if (!replayed) await addPhotos(jobId, user.id, 'NAMEPLATE', photos);
     return success({ number }, `Job ${number} logged.`);
   });
   return run(jsonField(form, 'payload'));
@@ -56,15 +64,17 @@ export async function recordGateDecisionAction(raw: unknown) {
 }
 
 export async function uploadJobPhotos(form: FormData): Promise<ActionResult<{ added: number }>> {
-  const photos = await photosFromFormData(form);
   const schema = z.object({ jobId: z.uuid(), kind: z.enum(['NAMEPLATE', 'DAMAGE', 'OTHER']) });
-  return guardedAction('job.attach', 'add photos', schema, async (user, input) =>
-    success({ added: await addPhotos(input.jobId, user.id, input.kind, photos) }, 'Photos added.'),
-  )({ jobId: form.get('jobId'), kind: form.get('kind') });
+  return guardedAction('job.attach', 'add photos', schema, async (user, input) => {
+    const photos = isForm(form) ? await photosFromFormData(form) : [];
+    if (photos.length === 0) return { ok: false, code: 'invalid', message: 'Choose at least one photo to add.', fieldErrors: { photos: ['Choose at least one photo to add.'] } };
+    const added = await addPhotos(input.jobId, user.id, input.kind, photos);
+    return success({ added }, `${added} photo${added === 1 ? '' : 's'} added.`);
+  })(isForm(form) ? { jobId: form.get('jobId'), kind: form.get('kind') } : form);
 }
 
 export async function lookupSerial(raw: unknown) {
-  return guardedAction('job.intake', 'look up motors', z.object({ serial: z.string().trim().max(80) }), async (_user, input) => {
+  return guardedAction('job.intake', 'look up motors', z.object({ serial: noNul(z.string().trim().max(80)) }), async (_user, input) => {
     const motors = await findMotorsBySerial(input.serial);
     return success(
       motors.map((m) => ({

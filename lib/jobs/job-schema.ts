@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { customerSchema } from './customer-schema';
 import { motorSchema } from './motor-schema';
 import { optionalDate, optionalText, requiredText } from '../validation/fields';
+import { NUL_MESSAGE, hasNul, noNul } from '@/lib/validation/safe-text';
 import { JobStatus, Priority } from '@/lib/db/generated/enums';
 
 /** Statuses and priorities come from the database's own enums (prisma/schema/shop.prisma): one list each. */
@@ -26,6 +27,8 @@ export const intakeSchema = z.object({
   existingMotorId: z.preprocess((v) => (v === '' ? undefined : v), z.uuid().optional()),
   motor: motorSchema,
   job: z.object(jobDetails),
+  /** Made once per form by the browser: a retry of the same intake returns the first job, never a second. */
+  requestKey: z.uuid().optional(),
 });
 export type IntakeInput = z.input<typeof intakeSchema>;
 export type Intake = z.output<typeof intakeSchema>;
@@ -69,9 +72,17 @@ export const boardQuerySchema = z.object({
   customerId: z.uuid().optional().catch(undefined),
   assigneeId: z.union([z.uuid(), z.literal('none')]).optional().catch(undefined),
   due: z.enum(DUE_FILTERS).default('any').catch('any'),
-  q: z.string().trim().max(80).optional().catch(undefined),
+  q: noNul(z.string().trim().max(80)).optional().catch(undefined),
   sort: z.enum(BOARD_SORTS).default('promisedAt').catch('promisedAt'),
   dir: z.enum(['asc', 'desc']).default('asc').catch('asc'),
   page: z.coerce.number().int().min(1).max(100_000).default(1).catch(1),
 });
 export type BoardQuery = z.output<typeof boardQuerySchema>;
+
+/** Why the board ignored the search text (shown beside the box), or null when it was used or absent. */
+export function boardSearchRefusal(raw: unknown): string | null {
+  if (typeof raw !== 'string' || raw.trim() === '') return null;
+  if (hasNul(raw)) return `Search: ${NUL_MESSAGE}`;
+  if (raw.trim().length > 80) return 'Search: at most 80 characters.';
+  return null;
+}

@@ -7,10 +7,11 @@ import { db, Prisma } from '@/lib/db/client';
 import type { JobStatus, Role } from '@/lib/db/generated/enums';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import type { Intake } from '@/lib/jobs/job-schema';
-import type { z } from 'zod';
+import { z } from 'zod';
 import type { jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
 import { toMotorRecord } from '@/lib/jobs/motor-schema';
 import { isMoveAllowed, STATUS_LABELS } from './status-flow';
+import { claimRequestKey, storeRequestResult } from '@/lib/errors/idempotency';
 import { DECISION_EVENT_KIND, loadGateFacts } from './gate-facts';
 import { decisionMessage, gateRefusal, type GateDecisionKind } from './shop-gates';
 import type { JobEventKind } from './job-events';
@@ -32,10 +33,16 @@ export async function allocateJobNumber(tx: Tx): Promise<number> {
   return Number(value);
 }
 
+const intakeResultShape = z.object({ jobId: z.string(), number: z.number().int() });
+
 const dateOrNull = (d: string | undefined): Date | null => (d ? new Date(`${d}T12:00:00Z`) : null);
 
-export async function createIntake(userId: string, input: Intake): Promise<{ jobId: string; number: number }> {
+export async function createIntake(userId: string, input: Intake): Promise<{ jobId: string; number: number; replayed?: boolean }> {
   return db().$transaction(async (tx) => {
+    if (input.requestKey) {
+      const first = await claimRequestKey(tx, input.requestKey, userId, 'intake', intakeResultShape);
+      if (first) return { ...first, replayed: true };
+    }
     const customerId =
       input.customer.mode === 'existing'
         ? (await tx.customer.findUnique({ where: { id: input.customer.customerId }, select: { id: true } }))?.id
@@ -83,6 +90,7 @@ export async function createIntake(userId: string, input: Intake): Promise<{ job
     await tx.jobEvent.create({
       data: { jobId: job.id, userId, kind: 'CREATED', toStatus: 'RECEIVED', message: `Job ${number} logged at intake.` },
     });
+    if (input.requestKey) await storeRequestResult(tx, input.requestKey, { jobId: job.id, number });
     return { jobId: job.id, number };
   });
 }

@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import { jobNumberSchema } from '../jobs/job-schema';
+import { noNul } from '@/lib/validation/safe-text';
 
 const optNum = (max: number, int = false) =>
   z.preprocess(
@@ -23,7 +24,7 @@ export const libraryQuerySchema = z.object({
   kwTolPct: optNum(100),
   volts: optNum(15_000),
   voltsTolPct: optNum(100),
-  q: z.string().trim().max(80).optional().catch(undefined),
+  q: noNul(z.string().trim().max(80)).optional().catch(undefined),
   forJob: jobNumberSchema.optional().catch(undefined),
   /** Up to 3 sheet ids to show side by side (extra ones are dropped). */
   compare: z

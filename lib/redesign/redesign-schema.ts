@@ -7,6 +7,7 @@ import { z } from 'zod';
 import type { RedesignLimits, RedesignRequest } from '@/lib/engine/redesign/types';
 import { DEFAULT_REDESIGN_LIMITS } from '@/lib/engine/redesign/from-sheet';
 import { requiredNumber, uuid } from '../validation/fields';
+import { noNul } from '@/lib/validation/safe-text';
 
 /** "7, 8" or "7 8" → [7, 8]; "" → []. Messages name the field. */
 const wholeList = (label: string, max: number) =>
@@ -116,14 +117,14 @@ export const storedRequestSchema = z.object({
 export const chooseCandidateSchema = z.object({
   redesignId: uuid('Redesign'),
   version: z.coerce.number().int().positive(),
-  key: z.string().min(1, 'Choose a candidate.').max(400),
+  key: noNul(z.string().min(1, 'Choose a candidate.').max(400)),
 });
 
 /** Approving a draft revision: the note says what was checked. */
 export const approveRedesignSchema = z.object({
   redesignId: uuid('Redesign'),
   version: z.coerce.number().int().positive(),
-  note: z.preprocess((v) => (typeof v === 'string' ? v.trim() : v), z.string({ error: 'Write an approval note.' }).min(3, 'Write an approval note: what you checked and any condition.').max(2000, 'At most 2000 characters.')),
+  note: z.preprocess((v) => (typeof v === 'string' ? v.trim() : v), noNul(z.string({ error: 'Write an approval note.' }).min(3, 'Write an approval note: what you checked and any condition.').max(2000, 'At most 2000 characters.'))),
 });
 
 /** Shop settings form: the redesign limits with the version it was loaded from. */

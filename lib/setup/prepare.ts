@@ -5,7 +5,8 @@
  */
 import { db, dbEngine, prepareOnce, withSqlRunner } from '../db/client';
 import { applyMigrations } from '../db/migrate';
-import { isEmpty, seedDemoShop } from './demo/seed-demo';
+import { demoSeedNeeded, repairJobCounter, seedDemoShop } from './demo/seed-demo';
+import { forgetOldRequestKeys } from '@/lib/errors/idempotency';
 import { bootstrapAdmin } from '@/lib/users/user-writes';
 import { env } from '@/lib/env';
 
@@ -18,11 +19,13 @@ export function prepareDatabase(): Promise<void> {
     if (dbEngine() === 'pglite') await withSqlRunner((sql) => sql.exec('ANALYZE'));
     const seed = env().COILWRIGHT_SEED_DEMO;
     const wantDemo = dbEngine() === 'pglite' ? seed !== '0' : seed === '1';
-    if (wantDemo && (await isEmpty(db()))) {
+    if (wantDemo && (await demoSeedNeeded(db()))) {
       await seedDemoShop(db());
       console.log('[coilwright] seeded the demo shop (see README for the demo sign-ins)');
     } else if (await bootstrapAdmin()) {
       console.log('[coilwright] created the first administrator from COILWRIGHT_ADMIN_EMAIL');
     }
+    await repairJobCounter(db());
+    await forgetOldRequestKeys(db());
   });
 }

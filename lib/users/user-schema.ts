@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { requiredText } from '../validation/fields';
+import { boundedEmail, requiredText } from '../validation/fields';
 import { Role } from '@/lib/db/generated/enums';
 
 /** The roles come from the database's own enum (prisma/schema/auth.prisma). */
@@ -14,7 +14,7 @@ const password = z
 /** A new person in the shop, created by an administrator. */
 export const userCreateSchema = z.object({
   name: requiredText('Name', 120),
-  email: z.preprocess((v) => (typeof v === 'string' ? v.trim().toLowerCase() : v), z.email('Enter an email address like name@example.com.')),
+  email: z.preprocess((v) => (typeof v === 'string' ? v.trim().toLowerCase() : v), boundedEmail),
   role: z.enum(ROLES, { error: 'Pick a role.' }),
   password,
 });

@@ -26,6 +26,8 @@ export async function updateUser(actorId: string, input: z.output<typeof userUpd
   if (actorId === input.userId && (!input.active || input.role !== 'ADMIN')) {
     throw new DomainError('invalid', 'You cannot remove your own administrator role or deactivate yourself; ask another administrator.');
   }
+  // bcrypt is slow on purpose: hash before the transaction so it holds no connection while hashing.
+  const passwordHash = input.newPassword ? await hashPassword(input.newPassword) : null;
   await db().$transaction(async (tx) => {
     const updated = await tx.user.updateMany({
       where: { id: input.userId },
@@ -33,7 +35,7 @@ export async function updateUser(actorId: string, input: z.output<typeof userUpd
         role: input.role,
         active: input.active,
         // A new password also lifts a sign-in hold (lib/auth/sign-in-throttle.ts).
-        ...(input.newPassword ? { passwordHash: await hashPassword(input.newPassword), failedSignIns: 0, signInHeldUntil: null } : {}),
+        ...(passwordHash ? { passwordHash, failedSignIns: 0, signInHeldUntil: null } : {}),
       },
     });
     if (updated.count === 0) throw new DomainError('not-found', MESSAGES.notFound('person'));

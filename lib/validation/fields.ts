@@ -3,6 +3,7 @@
  * turn "" / NaN / null into "not given" so optional fields stay optional and messages stay in trade words.
  */
 import { z } from 'zod';
+import { noNul } from './safe-text';
 import { numberTextMessage, parseDecimal } from './number-text';
 
 const blankToUndefined = (v: unknown): unknown =>
@@ -44,18 +45,24 @@ export const requiredNumber = (rule: NumberRule) =>
     .transform((v) => v as number);
 
 export const optionalText = (max = 200) =>
-  z.preprocess((v) => (typeof v === 'string' ? v.trim() : v), z.string().max(max, `At most ${max} characters.`))
+  z.preprocess((v) => (typeof v === 'string' ? v.trim() : v), noNul(z.string().max(max, `At most ${max} characters.`)))
     .optional()
     .transform((v) => (v ? v : undefined));
 
 export const requiredText = (label: string, max = 200) =>
   z.preprocess(
     (v) => (typeof v === 'string' ? v.trim() : v),
-    z.string({ error: `${label} is required.` }).min(1, `${label} is required.`).max(max, `At most ${max} characters.`),
+    noNul(z.string({ error: `${label} is required.` }).min(1, `${label} is required.`).max(max, `At most ${max} characters.`)),
   );
 
+/** An email address, length checked first so the format pattern never runs on a huge string. */
+export const boundedEmail = z
+  .string({ error: 'Enter an email address like name@example.com.' })
+  .max(254, 'An email address has at most 254 characters.')
+  .pipe(z.email('Enter an email address like name@example.com.'));
+
 export const optionalEmail = z
-  .preprocess((v) => (typeof v === 'string' ? v.trim() : v), z.union([z.literal(''), z.email('Enter an email address like name@example.com.')]))
+  .preprocess((v) => (typeof v === 'string' ? v.trim() : v), z.union([z.literal(''), boundedEmail]))
   .optional()
   .transform((v) => (v ? v : undefined));
 

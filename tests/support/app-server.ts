@@ -22,6 +22,8 @@ async function freePort(): Promise<number> {
 
 export interface AppServer {
   baseUrl: string;
+  /** The PostgreSQL database the app uses (E2E_DB=postgres), for tests that check what was stored. */
+  databaseUrl?: string;
   stop(): Promise<void>;
 }
 
@@ -39,8 +41,8 @@ export async function startApp(): Promise<AppServer> {
     env.COILWRIGHT_DATA_DIR = dir;
     cleanup = async () => rmSync(dir, { recursive: true, force: true });
   }
-  const child: ChildProcess = spawn(join('node_modules', '.bin', 'next'), ['start', '-p', String(port), '-H', '127.0.0.1'], {
-    env,
+  const child: ChildProcess = spawn(process.execPath, [join('scripts', 'serve.mjs')], {
+    env: { ...env, HOST: '127.0.0.1' },
     stdio: ['ignore', 'pipe', 'pipe'],
     detached: true,
   });
@@ -63,6 +65,7 @@ export async function startApp(): Promise<AppServer> {
   }
   return {
     baseUrl,
+    databaseUrl: env.DATABASE_URL,
     async stop() {
       if (child.pid && child.exitCode === null) {
         const exited = new Promise((r) => child.once('exit', r));

@@ -1,6 +1,6 @@
 /** vitest setup for integration tests: next/headers reads the test cookie jar; redirects become errors. */
 import { vi } from 'vitest';
-import { cookieJar } from './session';
+import { cookieJar, requestHeaders } from './session';
 
 vi.mock('next/headers', () => ({
   cookies: async () => ({
@@ -8,7 +8,7 @@ vi.mock('next/headers', () => ({
     set: (name: string, value: string) => void cookieJar.set(name, value),
     delete: (name: string) => void cookieJar.delete(name),
   }),
-  headers: async () => new Headers(),
+  headers: async () => requestHeaders,
 }));
 
 vi.mock('next/navigation', () => ({

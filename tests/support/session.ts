@@ -7,6 +7,8 @@ import { db } from '@/lib/db/client';
 import { SESSION_COOKIE, createSession } from '@/lib/auth/session-store';
 
 export const cookieJar = new Map<string, string>();
+/** The request headers next/headers' `headers()` returns in integration tests (e.g. X-Forwarded-For). */
+export const requestHeaders = new Headers();
 
 export async function actAs(email: string): Promise<void> {
   const user = await db().user.findUniqueOrThrow({ where: { email } });

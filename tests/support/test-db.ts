@@ -22,7 +22,8 @@ export function useTestDatabase(): void {
       process.env.COILWRIGHT_DATA_DIR = 'memory://';
     }
     await prepareDatabase();
-  });
+    // Seeding the demo shop (bcrypt hashes, 40 jobs in one transaction) can take minutes on a busy machine.
+  }, 300_000);
   afterAll(async () => {
     await closeDb();
     if (url) await dropTestDatabase(url);

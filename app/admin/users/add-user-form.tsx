@@ -11,6 +11,7 @@ import { addUser } from '@/lib/users/user-actions';
 import { applyFieldErrors } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 
 export function AddUserForm() {
   const router = useRouter();
@@ -22,7 +23,7 @@ export function AddUserForm() {
   });
   const onSubmit = handleSubmit((values) =>
     startTransition(async () => {
-      const result = await addUser(values);
+      const result = await callAction(() => addUser(values));
       if (result.ok) {
         setSummary({ tone: 'ok', text: result.message ?? 'Added.' });
         reset();

@@ -6,6 +6,7 @@ import type { Role } from '@/lib/db/generated/enums';
 import { ROLE_LABELS } from '@/lib/auth/permissions';
 import { ROLES } from '@/lib/users/user-schema';
 import { changeUser } from '@/lib/users/user-actions';
+import { callAction } from '@/lib/errors/call-action';
 
 interface Person { id: string; name: string; email: string; role: Role; active: boolean }
 
@@ -20,7 +21,7 @@ export function UserRow({ user, self }: { user: Person; self: boolean }) {
   const id = `u-${user.id}`;
   const save = () =>
     startTransition(async () => {
-      const result = await changeUser({ userId: user.id, role, active, newPassword: password });
+      const result = await callAction(() => changeUser({ userId: user.id, role, active, newPassword: password }));
       setMessage(result.ok ? { ok: true, text: 'Saved.' } : { ok: false, text: result.fieldErrors?.newPassword?.[0] ?? result.message });
       if (result.ok) {
         setPassword('');

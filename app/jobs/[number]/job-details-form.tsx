@@ -10,6 +10,7 @@ import { saveJobDetails } from '@/lib/jobs/job-actions';
 import { FIX_FIELDS_SUMMARY, showActionFailure } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 import { onJobVersion } from './job-version';
 
 export interface JobDetails {
@@ -44,7 +45,7 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
   const onSubmit = handleSubmit(
     (values) =>
       startTransition(async () => {
-        const result = await saveJobDetails({ ...values, version: baseVersion });
+        const result = await callAction(() => saveJobDetails({ ...values, version: baseVersion }));
         if (result.ok) {
           setBaseVersion(result.data.version);
           setConflict(false);

@@ -4,6 +4,8 @@ import { useRef, useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { uploadJobPhotos } from '@/lib/jobs/job-actions';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
+import { photoSizeProblems } from '@/lib/jobs/photo-rules';
 
 export function PhotoUpload({ jobId }: { jobId: string }) {
   const router = useRouter();
@@ -13,14 +15,20 @@ export function PhotoUpload({ jobId }: { jobId: string }) {
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad'; text: string } | null>(null);
   const upload = () =>
     startTransition(async () => {
+      const files = Array.from(fileRef.current?.files ?? []);
+      // Checked here first: an over-size body would be refused by the server before it could answer.
+      const problems = files.length === 0 ? ['Choose at least one photo to add.'] : photoSizeProblems(files);
+      if (problems.length) return setSummary({ tone: 'bad', text: problems.join(' ') });
       const fd = new FormData();
       fd.set('jobId', jobId);
       fd.set('kind', kind);
-      for (const f of Array.from(fileRef.current?.files ?? [])) fd.append('photos', f);
-      const result = await uploadJobPhotos(fd);
-      setSummary(result.ok ? { tone: 'ok', text: `${result.data.added} photo(s) added.` } : { tone: 'bad', text: result.message });
-      if (result.ok && fileRef.current) fileRef.current.value = '';
-      router.refresh();
+      for (const f of files) fd.append('photos', f);
+      const result = await callAction(() => uploadJobPhotos(fd));
+      setSummary(result.ok ? { tone: 'ok', text: result.message ?? 'Photos added.' } : { tone: 'bad', text: result.message });
+      if (result.ok) {
+        if (fileRef.current) fileRef.current.value = '';
+        router.refresh();
+      }
     });
   return (
     <div className="no-print">

@@ -6,6 +6,7 @@ import { moveStatus, recordGateDecisionAction } from '@/lib/jobs/job-actions';
 import type { JobStatus } from '@/lib/db/generated/enums';
 import type { GateDecisionKind } from '@/lib/jobs/shop-gates';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 import { announceJobVersion } from './job-version';
 
 export interface MoveOption {
@@ -32,13 +33,15 @@ export function StatusMoves({ jobId, version, moves, mayRelease }: { jobId: stri
   if (moves.length === 0) return <p className="muted">No further moves: this job is closed.</p>;
   const move = (to: JobStatus) =>
     startTransition(async () => {
-      const result = await moveStatus({ jobId, version, to, note });
+      const result = await callAction(() => moveStatus({ jobId, version, to, note }));
       setSummary(result.ok ? { tone: 'ok', text: result.message ?? 'Moved.' } : { tone: 'bad', text: result.message });
       if (result.ok) {
         setNote('');
         announceJobVersion({ jobId, from: version, to: result.data.version });
       }
-      router.refresh();
+      // Refresh only when the job changed (or someone else changed it): during an outage a refresh would
+      // render the error page over the message and the note.
+      if (result.ok || result.code === 'stale') router.refresh();
     });
   const release = (decision: GateDecisionKind) =>
     startTransition(async () => {

@@ -10,6 +10,9 @@ import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
 import { NameplateFields } from '@/app/_components/nameplate-fields';
+import { callAction } from '@/lib/errors/call-action';
+import { photoSizeProblems } from '@/lib/jobs/photo-rules';
+import { newRequestKey } from '@/lib/errors/request-key';
 
 type Option = { id: string; name: string };
 type Match = Extract<Awaited<ReturnType<typeof lookupSerial>>, { ok: true }>['data'][number];
@@ -27,6 +30,7 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(null);
   const [matches, setMatches] = useState<Match[] | null>(null);
   const photosRef = useRef<HTMLInputElement>(null);
+  const [requestKey] = useState(newRequestKey);
   const form = useForm<IntakeInput, unknown, Intake>({ resolver: zodResolver(intakeSchema), defaultValues: DEFAULTS });
   const { register, handleSubmit, watch, setValue, setError, formState: { errors } } = form;
   const anyRegister = register as unknown as UseFormRegister<Record<string, unknown>>;
@@ -38,11 +42,18 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
   const onSubmit = handleSubmit(
     (values) =>
       startTransition(async () => {
+        const photos = Array.from(photosRef.current?.files ?? []);
+        const problems = photoSizeProblems(photos);
+        if (problems.length) {
+          applyFieldErrors({ photos: problems }, setError);
+          return setSummary({ tone: 'bad', text: problems.join(' ') });
+        }
         setSummary({ tone: 'warn', text: 'Saving…' });
         const fd = new FormData();
-        fd.set('payload', JSON.stringify(values));
-        for (const f of Array.from(photosRef.current?.files ?? [])) fd.append('photos', f);
-        const result = await submitIntake(fd);
+        // The same key on every retry of this form: the server returns the first job instead of a second.
+        fd.set('payload', JSON.stringify({ ...values, requestKey }));
+        for (const f of photos) fd.append('photos', f);
+        const result = await callAction(() => submitIntake(fd));
         if (result.ok) {
           setSummary({ tone: 'ok', text: result.message ?? 'Saved.' });
           router.push(`/jobs/${result.data.number}`);
@@ -56,7 +67,7 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
 
   async function checkSerial() {
     const serial = String(form.getValues('motor.serial') ?? '');
-    const result = await lookupSerial({ serial });
+    const result = await callAction(() => lookupSerial({ serial }));
     setMatches(result.ok ? result.data : []);
   }
 

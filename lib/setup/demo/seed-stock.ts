@@ -3,7 +3,7 @@
  * series, grade 2, and AWG 14–22 heavy build, with made-up quantities; the shop settings row with the
  * documented default limits.
  */
-import type { PrismaClient } from '@/lib/db/generated/client';
+import type { Prisma } from '@/lib/db/generated/client';
 import { DEFAULT_REDESIGN_LIMITS, stockWire } from '@/lib/engine/redesign/from-sheet';
 import { listAwgSizes, listMetricSizes } from '@/lib/engine/wire';
 
@@ -13,7 +13,13 @@ export const DEMO_STOCK = [
   ...listAwgSizes().filter((w) => w.n >= 14 && w.n <= 22).map((w) => ({ standard: 'awg' as const, size: w.size })),
 ];
 
-export async function seedStock(prisma: PrismaClient): Promise<void> {
+/** Idempotent: a table that already has rows is left alone (a re-run completes a half-done seed). */
+export async function seedStock(prisma: Prisma.TransactionClient): Promise<void> {
+  if ((await prisma.wireStock.count()) === 0) await seedWires(prisma);
+  if ((await prisma.shopSettings.count()) === 0) await seedSettings(prisma);
+}
+
+async function seedWires(prisma: Prisma.TransactionClient): Promise<void> {
   for (const [i, w] of DEMO_STOCK.entries()) {
     const found = stockWire({ ...w, enamelGrade: 2 });
     if (!found.ok) throw new Error(`demo stock: ${found.error.message}`);
@@ -21,6 +27,9 @@ export async function seedStock(prisma: PrismaClient): Promise<void> {
       data: { standard: w.standard, size: found.value.size, enamelGrade: 2, bareMm: found.value.bareMm, quantityKg: 5 + ((i * 7) % 23), note: i % 9 === 4 ? 'Last reel: reorder' : null },
     });
   }
+}
+
+async function seedSettings(prisma: Prisma.TransactionClient): Promise<void> {
   const l = DEFAULT_REDESIGN_LIMITS;
   await prisma.shopSettings.create({
     data: {

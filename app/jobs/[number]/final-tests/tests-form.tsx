@@ -29,6 +29,7 @@ import { FormStatus } from '@/app/_components/form-status';
 import { Field, describe } from '@/app/_components/field';
 import { NumberField, SelectField, TextField, idOf, useFieldError } from './test-fields';
 import { OverallVerdict, SectionVerdict } from './judgement-view';
+import { callAction } from '@/lib/errors/call-action';
 
 const RESULT_OPTIONS = [['pass', 'Pass'], ['fail', 'Fail']] as const;
 const CASE_LABELS: Record<(typeof HIPOT_CASES)[number], string> = { new: 'New winding', repeat: 'Repeat test (80 %)', reconditioned: 'Reconditioned / partial rewind' };
@@ -93,7 +94,7 @@ export function TestsForm(props: {
   const onSubmit = handleSubmit(
     (values) =>
       startTransition(async () => {
-        const result = await saveTestRecordAction({ ...values, ...target, recordId: target.recordId ?? '', version: target.version ?? '' });
+        const result = await callAction(() => saveTestRecordAction({ ...values, ...target, recordId: target.recordId ?? '', version: target.version ?? '' }));
         if (result.ok) {
           setTarget({ recordId: result.data.recordId, version: result.data.version, previousSequence: result.data.sequence });
           setMode('edit');

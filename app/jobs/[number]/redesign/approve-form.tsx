@@ -10,6 +10,7 @@ import { approveRedesignRevision } from '@/lib/redesign/redesign-actions';
 import { applyFieldErrors } from '@/lib/errors/form-errors';
 import { Field, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 
 /**
  * Approval of a draft revision with a note. Shown to everyone who can open the page: the server decides,
@@ -26,7 +27,7 @@ export function ApproveForm({ redesignId, version, revision, mayApprove }: { red
   const onSubmit = handleSubmit(
     (values) =>
       startTransition(async () => {
-        const r = await approveRedesignRevision(values);
+        const r = await callAction(() => approveRedesignRevision(values));
         if (r.ok) {
           setSummary({ tone: 'ok', text: r.message ?? 'Approved.' });
           router.refresh();

@@ -3,6 +3,7 @@
 import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { chooseCandidate } from '@/lib/redesign/redesign-actions';
+import { callAction } from '@/lib/errors/call-action';
 
 /** Chooses one candidate of a draft revision; a refusal (approved, stale) is shown beside the button. */
 export function ChooseButton({ redesignId, version, candidateKey, rank }: { redesignId: string; version: number; candidateKey: string; rank: number }) {
@@ -19,7 +20,7 @@ export function ChooseButton({ redesignId, version, candidateKey, rank }: { rede
         onClick={() =>
           startTransition(async () => {
             setError(null);
-            const r = await chooseCandidate({ redesignId, version, key: candidateKey });
+            const r = await callAction(() => chooseCandidate({ redesignId, version, key: candidateKey }));
             if (r.ok) {
               router.push(`?rev=${new URLSearchParams(window.location.search).get('rev') ?? ''}#chosen`);
               router.refresh();

@@ -9,6 +9,7 @@ import { submitRedesignRequest } from '@/lib/redesign/redesign-actions';
 import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
+import { callAction } from '@/lib/errors/call-action';
 
 /** Limits fields: name, label, unit, hint. */
 const LIMIT_FIELDS: [keyof RedesignRequestFormInput['limits'], string, string, string?][] = [
@@ -51,7 +52,7 @@ export function RequestForm({ defaults, submitLabel, intro }: { defaults: Redesi
     (values) =>
       startTransition(async () => {
         setSummary(null);
-        const result = await submitRedesignRequest(values);
+        const result = await callAction(() => submitRedesignRequest(values));
         if (result.ok) {
           setSummary({ tone: 'ok', text: result.message ?? 'Saved.' });
           router.push(`?rev=${result.data.revision}#candidates`);

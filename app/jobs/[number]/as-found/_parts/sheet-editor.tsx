@@ -25,6 +25,7 @@ import { serverErrorsToForm, sheetResolver } from './sheet-resolver';
 import { ReadOnlyFields } from './sheet-fields';
 import { draftStatusText, useDraftAutosave } from './use-draft-autosave';
 import { jobRoutes } from '@/lib/routes';
+import { callAction } from '@/lib/errors/call-action';
 
 export interface SheetEditorProps {
   jobId: string;
@@ -106,7 +107,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   const onSave = handleSubmit(
     (sheet) =>
       startTransition(async () => {
-        const r = await saveAsFoundSheet({ jobId, baseRevision, sheet });
+        const r = await callAction(() => saveAsFoundSheet({ jobId, baseRevision, sheet }));
         if (r.ok) {
           setBaseRevision(r.data.revision);
           setConflict(false);
@@ -128,7 +129,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
 
   const discard = () =>
     startTransition(async () => {
-      const r = await discardSheetDraft({ jobId });
+      const r = await callAction(() => discardSheetDraft({ jobId }));
       if (r.ok) {
         autosave.clear('Draft discarded.');
         setHasDraft(false);

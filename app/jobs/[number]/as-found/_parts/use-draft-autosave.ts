@@ -8,6 +8,7 @@ import { useCallback, useEffect, useRef, useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { saveSheetDraft } from '@/lib/as-found/as-found-actions';
 import type { DraftPayload } from '@/lib/as-found/draft-schema';
+import { callAction } from '@/lib/errors/call-action';
 
 /** Quiet time after the last change before the draft is sent. */
 export const DRAFT_DELAY_MS = 2500;
@@ -58,7 +59,7 @@ export function useDraftAutosave(jobId: string, enabled: boolean, snapshot: () =
     dirty.current = false;
     setState({ kind: 'saving' });
     try {
-      const r = await saveSheetDraft({ jobId, draft: snap.current() });
+      const r = await callAction(() => saveSheetDraft({ jobId, draft: snap.current() }));
       // Changes typed while this draft was in flight are not in it: do not claim they are saved.
       if (r.ok) setState(dirty.current ? { kind: 'pending' } : { kind: 'saved', at: new Date(r.data.savedAt) });
       else {

@@ -1,0 +1,11 @@
+/**
+ * A fresh idempotency key (UUID v4) in the browser. `crypto.randomUUID` exists only in secure contexts
+ * (HTTPS or localhost); a shop serving on its LAN over plain HTTP still has `getRandomValues`.
+ */
+export function newRequestKey(): string {
+  const b = crypto.getRandomValues(new Uint8Array(16));
+  b[6] = ((b[6] ?? 0) & 0x0f) | 0x40;
+  b[8] = ((b[8] ?? 0) & 0x3f) | 0x80;
+  const h = Array.from(b, (x) => x.toString(16).padStart(2, '0')).join('');
+  return `${h.slice(0, 8)}-${h.slice(8, 12)}-${h.slice(12, 16)}-${h.slice(16, 20)}-${h.slice(20)}`;
+}
