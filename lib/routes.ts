@@ -14,5 +14,8 @@ export const jobRoutes = (jobNumber: number | string) => {
     redesignPrint: `${base}/redesign/print`,
     jobSheet: `${base}/job-sheet`,
     jobSheetPdf: `${base}/job-sheet/pdf`,
+    quote: `${base}/quote`,
+    quotePrint: (revision: number) => `${base}/quote/${revision}/print`,
+    quotePdf: (revision: number) => `${base}/quote/${revision}/pdf`,
   };
 };

@@ -16,6 +16,8 @@ export const PERMISSIONS = {
   'tests.record': ['WINDER', 'ENGINEER', 'ADMIN'],
   'stock.manage': ['ADMIN', 'ENGINEER'],
   'settings.manage': ['ADMIN'],
+  'quote.edit': ['FRONT_DESK', 'ENGINEER', 'ADMIN'],
+  'quote.send': ['FRONT_DESK', 'ADMIN'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

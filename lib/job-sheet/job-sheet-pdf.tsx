@@ -11,7 +11,7 @@ import type { JobSheetData, Row } from './job-sheet-data';
 const FONT_DIR = join(process.cwd(), 'node_modules', 'dejavu-fonts-ttf', 'ttf');
 let fontsReady = false;
 
-function registerFonts(): void {
+export function registerFonts(): void {
   if (fontsReady) return;
   const regular = join(FONT_DIR, 'DejaVuSans.ttf');
   if (!existsSync(regular)) throw new Error(`DejaVu fonts not found in ${FONT_DIR}: is the dejavu-fonts-ttf package installed?`);

@@ -57,6 +57,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
       <nav className="card no-print" aria-label="Workshop records">
         <h2>Workshop records</h2>
         <ul className="row" style={{ listStyle: 'none', padding: 0, gap: '1.5rem' }}>
+          <li><Link href={jobRoutes(job.number).quote}>Estimate and quote</Link></li>
           <li><Link href={jobRoutes(job.number).asFound}>As-found data sheet</Link></li>
           <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>{redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}</li>
           <li><Link href={jobRoutes(job.number).finalTests}>Final tests</Link></li>
