@@ -11,6 +11,7 @@ import type { z } from 'zod';
 import type { jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
 import { toMotorRecord } from '@/lib/jobs/motor-schema';
 import { isMoveAllowed, STATUS_LABELS } from './status-flow';
+import { refuseByQuoteRules } from '@/lib/quotes/quote-gates';
 
 type Tx = Prisma.TransactionClient;
 export const FIRST_JOB_NUMBER = 1001;
@@ -138,6 +139,7 @@ export async function moveJobStatus(userId: string, role: Role, input: StatusMov
         `A job in "${STATUS_LABELS[job.status]}" cannot move to "${STATUS_LABELS[input.to]}"${role === 'FRONT_DESK' || role === 'ADMIN' ? '' : ' by your role'}.`,
       );
     }
+    await refuseByQuoteRules(tx, input.jobId, job.status, input.to);
     const result = await tx.job.updateMany({
       where: { id: input.jobId, version: input.version, status: job.status },
       data: {

@@ -11,6 +11,7 @@ import { getApprovedRedesign } from '@/lib/redesign/redesign-queries';
 import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
 import { PhotoUpload } from './photo-upload';
+import { QuoteNote } from './quote-note';
 import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
 import { jobRoutes } from '@/lib/routes';
 
@@ -52,6 +53,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
       <section className="card" aria-labelledby="moves-h">
         <h2 id="moves-h">Status: {STATUS_LABELS[job.status]}</h2>
         <StatusMoves jobId={job.id} version={job.version} moves={moves} />
+        <QuoteNote jobId={job.id} jobNumber={job.number} status={job.status} />
       </section>
 
       <nav className="card no-print" aria-label="Workshop records">
