@@ -18,6 +18,7 @@ export const PERMISSIONS = {
   'settings.manage': ['ADMIN'],
   'quote.edit': ['FRONT_DESK', 'ENGINEER', 'ADMIN'],
   'quote.send': ['FRONT_DESK', 'ADMIN'],
+  'labour.book': ['FRONT_DESK', 'WINDER', 'ENGINEER', 'ADMIN'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

@@ -9,6 +9,8 @@ import { success } from '@/lib/errors/action-result';
 import { decisionSchema, estimateSaveSchema, quoteRefSchema, startQuoteSchema } from './quote-schema';
 import { saveEstimate as save, sendQuote as send, startQuote as start } from './quote-writes';
 import { recordDecision as decide } from './decision-writes';
+import { labourBookingSchema } from './labour-schema';
+import { bookLabour as book } from './labour-writes';
 
 export async function startEstimate(raw: unknown) {
   return guardedAction('quote.edit', 'build estimates', startQuoteSchema, async (user, input) =>
@@ -31,5 +33,11 @@ export async function sendQuote(raw: unknown) {
 export async function recordDecision(raw: unknown) {
   return guardedAction('quote.send', 'record the customer’s decision', decisionSchema, async (user, input) =>
     success(await decide(user.id, input), input.decision === 'ACCEPTED' ? 'Acceptance recorded.' : 'Decline recorded.'),
+  )(raw);
+}
+
+export async function bookLabour(raw: unknown) {
+  return guardedAction('labour.book', 'book labour', labourBookingSchema, async (user, input) =>
+    success(await book(user.id, input), 'Labour booked.'),
   )(raw);
 }

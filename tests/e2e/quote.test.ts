@@ -35,7 +35,7 @@ describe('the front desk quotes a repair', () => {
     // 618.20 + 7.5 % (46.365 → 46.37) = 664.57 [derived]
     await expect.poll(() => page.locator('[data-total="total"]').textContent()).toBe('$664.57');
     await page.getByRole('button', { name: /Add rewind material/ }).click();
-    await expect.poll(async () => page.getByLabel('Line 3 unit').inputValue()).toBe('kg');
+    await expect.poll(async () => page.getByLabel('Line 3 unit', { exact: true }).inputValue()).toBe('kg');
     await expect.poll(() => page.locator('[data-total="total"]').textContent()).not.toBe('$664.57');
 
     await page.getByRole('button', { name: 'Save estimate' }).click();

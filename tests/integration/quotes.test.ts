@@ -1,7 +1,8 @@
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { db } from '@/lib/db/client';
 import { moveStatus } from '@/lib/jobs/job-actions';
-import { recordDecision, saveEstimate, sendQuote, startEstimate } from '@/lib/quotes/quote-actions';
+import { bookLabour, recordDecision, saveEstimate, sendQuote, startEstimate } from '@/lib/quotes/quote-actions';
+import { labourComparison } from '@/lib/quotes/labour-queries';
 import { QUOTE_MESSAGES } from '@/lib/quotes/quote-messages';
 import { QUOTE_GATE_MESSAGES } from '@/lib/quotes/quote-gates';
 import { estimateTotals } from '@/lib/quotes/estimate-totals';
@@ -137,6 +138,24 @@ describe('estimates and quote revisions', () => {
     const job = await db().job.findUniqueOrThrow({ where: { id: other.id } });
     expect(await moveStatus({ jobId: other.id, version: job.version, to: 'CUSTOMER_APPROVED' })).toMatchObject({ ok: false, message: QUOTE_GATE_MESSAGES.needsAccepted });
     expect(await moveStatus({ jobId: other.id, version: job.version, to: 'RETURNED_UNREPAIRED' })).toMatchObject({ ok: true });
+  });
+});
+
+describe('labour booked against the estimate', () => {
+  beforeEach(() => signOutTest());
+
+  it('sets the hours booked beside the accepted quote’s labour hours', async () => {
+    const job = await db().quote.findFirstOrThrow({ where: { status: 'ACCEPTED' }, select: { jobId: true, revision: true } });
+    const winder = await db().user.findUniqueOrThrow({ where: { email: WINDER.email } });
+    expect(await bookLabour({ jobId: job.jobId, personId: winder.id, task: 'Strip', hours: '4', workedOn: '2026-12-01' })).toMatchObject({ ok: false, code: 'unauthenticated' });
+    await actAs(WINDER.email);
+    expect(await bookLabour({ jobId: job.jobId, personId: winder.id, task: 'Strip and clean core', hours: '4', workedOn: '2026-12-01' })).toMatchObject({ ok: true });
+    expect(await bookLabour({ jobId: job.jobId, personId: winder.id, task: 'Wind and connect', hours: '3.25', workedOn: '2026-12-02' })).toMatchObject({ ok: true });
+    const bad = await bookLabour({ jobId: job.jobId, personId: winder.id, task: 'x', hours: '25', workedOn: '2026-12-02' });
+    expect(bad.ok ? {} : bad.fieldErrors).toHaveProperty(['hours']);
+    const c = await labourComparison(job.jobId);
+    expect(c).toMatchObject({ actualMilli: 7250, estimateMilli: 6500, estimateSource: `revision ${job.revision} (accepted)` });
+    expect(c.bookings.map((b) => [b.personName, b.hoursMilli])).toEqual([[WINDER.name, 4000], [WINDER.name, 3250]]);
   });
 });
 

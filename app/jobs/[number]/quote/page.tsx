@@ -20,6 +20,10 @@ import { fmt } from '@/lib/presentation/format';
 import { EstimateForm } from './estimate-form';
 import { StartEstimateButton } from './quote-buttons';
 import { DecisionForm } from './decision-form';
+import { LabourForm } from './labour-section';
+import { labourComparison } from '@/lib/quotes/labour-queries';
+import { formatScaledShort } from '@/lib/quotes/decimal-input';
+import { listStaff } from '@/lib/jobs/job-queries';
 import './quote.css';
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -34,7 +38,7 @@ export default async function QuotePage({ params }: { params: Promise<{ number: 
   if (!parsed.success) notFound();
   const job = await db().job.findUnique({ where: { number: parsed.data.number }, select: { id: true, number: true, status: true, customer: { select: { company: true } } } });
   if (!job) notFound();
-  const [quotes, { settings }, rewind] = await Promise.all([listQuotes(job.id), getCommercialSettings(), rewindCopperFor(job.id)]);
+  const [quotes, { settings }, rewind, labour, staff] = await Promise.all([listQuotes(job.id), getCommercialSettings(), rewindCopperFor(job.id), labourComparison(job.id), listStaff()]);
   const latest = quotes[0];
   const draft = latest?.status === 'DRAFT' ? latest : null;
   const routes = jobRoutes(job.number);
@@ -86,6 +90,22 @@ export default async function QuotePage({ params }: { params: Promise<{ number: 
           <DecisionForm quoteId={latest.id} version={latest.version} quoteNumber={quoteNumber(job.number, latest.revision)} today={new Date().toISOString().slice(0, 10)} />
         </section>
       )}
+
+      <section className="card" aria-labelledby="labour-h">
+        <h2 id="labour-h">Labour: estimate against actual</h2>
+        <p>
+          Booked <strong>{formatScaledShort(labour.actualMilli, 3)} h</strong>
+          {labour.estimateMilli !== null ? <> against <strong>{formatScaledShort(labour.estimateMilli, 3)} h</strong> estimated (quote {labour.estimateSource})</> : ' (no estimate yet)'}
+          {labour.estimateMilli ? <> · {Math.round((labour.actualMilli / labour.estimateMilli) * 100)} % of the estimate</> : null}
+        </p>
+        {labour.bookings.length > 0 && (
+          <table>
+            <thead><tr><th scope="col">Day</th><th scope="col">Who</th><th scope="col">Task</th><th scope="col" className="num">Hours</th></tr></thead>
+            <tbody>{labour.bookings.map((b) => <tr key={b.id}><td>{fmt.date(b.workedOn)}</td><td>{b.personName}</td><td>{b.task}</td><td className="num">{formatScaledShort(b.hoursMilli, 3)}</td></tr>)}</tbody>
+          </table>
+        )}
+        {can(user.role, 'labour.book') && <LabourForm jobId={job.id} staff={staff.map((p) => ({ id: p.id, name: p.name }))} me={user.id} today={new Date().toISOString().slice(0, 10)} />}
+      </section>
 
       <section className="card" aria-labelledby="revisions-h">
         <h2 id="revisions-h">Quotes</h2>
