@@ -18,6 +18,14 @@ export interface StoredTestRecord {
   data: TestDataValues;
 }
 
+/** What the final-tests screen needs of a job: status, customer, nameplate. */
+export async function getJobForFinalTests(number: number) {
+  return db().job.findUnique({
+    where: { number },
+    select: { id: true, number: true, status: true, heldFrom: true, customer: { select: { company: true } }, motor: true },
+  });
+}
+
 /** Every test record of a job, newest (the current one) first. */
 export async function listTestRecords(jobId: string): Promise<StoredTestRecord[]> {
   const rows = await db().testRecord.findMany({

@@ -83,6 +83,11 @@ export async function listBoard(q: BoardQuery, now = new Date()) {
 }
 export type BoardRow = Awaited<ReturnType<typeof listBoard>>['rows'][number];
 
+/** A job's id and number, for downloads that need nothing else of it. */
+export async function findJobRef(number: number): Promise<{ id: string; number: number } | null> {
+  return db().job.findUnique({ where: { number }, select: { id: true, number: true } });
+}
+
 export async function getJobByNumber(number: number) {
   return db().job.findUnique({
     where: { number },

@@ -12,6 +12,7 @@ import type { jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
 import { toMotorRecord } from '@/lib/jobs/motor-schema';
 import { isMoveAllowed, STATUS_LABELS } from './status-flow';
 import { refuseByQuoteRules } from '@/lib/quotes/quote-gates';
+import type { JobEventKind } from './job-events';
 
 type Tx = Prisma.TransactionClient;
 export const FIRST_JOB_NUMBER = 1001;
@@ -178,7 +179,7 @@ export async function moveJobStatus(userId: string, role: Role, input: StatusMov
 /** Records any event on a job's timeline (used by the sheet, redesign and test modules too). */
 export async function recordJobEvent(
   tx: Tx,
-  event: { jobId: string; userId: string | null; kind: string; message: string; data?: Prisma.InputJsonValue },
+  event: { jobId: string; userId: string | null; kind: JobEventKind; message: string; data?: Prisma.InputJsonValue },
 ): Promise<void> {
   await tx.jobEvent.create({ data: { ...event, ...(event.data === undefined ? {} : { data: event.data }) } });
 }

@@ -10,8 +10,7 @@
  *                over that rate's lines for display (allocate again).
  * So in both modes the lines' gross amounts add up to the total to the cent.
  */
-import { allocate, toSnapshot } from 'dinero.js';
-import { money, sumMinor, timesBasisPoints, timesMilli, type CurrencyCode } from './money';
+import { allocateMinor, sumMinor, timesBasisPoints, timesMilli, type CurrencyCode } from './money';
 
 export type TaxMode = 'PER_LINE' | 'ON_TOTAL';
 export const TAX_MODES: readonly TaxMode[] = ['ON_TOTAL', 'PER_LINE'];
@@ -56,19 +55,12 @@ export interface TotalsRules {
   discountBp: number;
 }
 
-/** Shares `amount` over `weights` in proportion (all zero weights: nothing to share, all zero). */
-function share(amount: number, weights: readonly number[], code: CurrencyCode): number[] {
-  if (weights.length === 0) return [];
-  if (amount === 0 || weights.every((w) => w === 0)) return weights.map(() => 0);
-  return allocate(money(amount, code), weights).map((d) => toSnapshot(d).amount);
-}
-
 export function estimateTotals(lines: readonly PricedLine[], rules: TotalsRules): EstimateTotals {
   const code = rules.currency;
   const net = lines.map((l) => timesMilli(l.unitPriceMinor, l.quantityMilli, code));
   const subtotalMinor = sumMinor(net, code);
   const discountMinor = timesBasisPoints(subtotalMinor, rules.discountBp, code);
-  const lineDiscount = share(discountMinor, net, code);
+  const lineDiscount = allocateMinor(discountMinor, net, code);
   const taxable = net.map((n, i) => n - (lineDiscount[i] ?? 0));
 
   const rates = [...new Set(lines.map((l) => l.taxRateBp))].sort((a, b) => a - b);
@@ -79,7 +71,7 @@ export function estimateTotals(lines: readonly PricedLine[], rules: TotalsRules)
     if (rules.taxMode === 'PER_LINE') {
       for (const i of idx) lineTax[i] = timesBasisPoints(taxable[i] ?? 0, rateBp, code);
     } else {
-      const shares = share(timesBasisPoints(baseMinor, rateBp, code), idx.map((i) => taxable[i] ?? 0), code);
+      const shares = allocateMinor(timesBasisPoints(baseMinor, rateBp, code), idx.map((i) => taxable[i] ?? 0), code);
       idx.forEach((i, k) => { lineTax[i] = shares[k] ?? 0; });
     }
     return { rateBp, baseMinor, taxMinor: sumMinor(idx.map((i) => lineTax[i] ?? 0), code) };

@@ -7,6 +7,7 @@ import { db, dbEngine, prepareOnce, withSqlRunner } from '../db/client';
 import { applyMigrations } from '../db/migrate';
 import { isEmpty, seedDemoShop } from './demo/seed-demo';
 import { bootstrapAdmin } from '@/lib/users/user-writes';
+import { env } from '@/lib/env';
 
 export function prepareDatabase(): Promise<void> {
   return prepareOnce(async () => {
@@ -15,7 +16,8 @@ export function prepareDatabase(): Promise<void> {
     // The embedded engine runs no autovacuum: refresh planner statistics once per start so the board's
     // queries keep good plans as the shop's data grows.
     if (dbEngine() === 'pglite') await withSqlRunner((sql) => sql.exec('ANALYZE'));
-    const wantDemo = dbEngine() === 'pglite' ? process.env.COILWRIGHT_SEED_DEMO !== '0' : process.env.COILWRIGHT_SEED_DEMO === '1';
+    const seed = env().COILWRIGHT_SEED_DEMO;
+    const wantDemo = dbEngine() === 'pglite' ? seed !== '0' : seed === '1';
     if (wantDemo && (await isEmpty(db()))) {
       await seedDemoShop(db());
       console.log('[coilwright] seeded the demo shop (see README for the demo sign-ins)');

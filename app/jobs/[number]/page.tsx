@@ -1,6 +1,4 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { getJobByNumber, listStaff, motorHistory } from '@/lib/jobs/job-queries';
 import { MAIN_PATH, STATUS_LABELS, allowedMoves, moveLabel } from '@/lib/jobs/status-flow';
@@ -12,7 +10,7 @@ import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
 import { PhotoUpload } from './photo-upload';
 import { QuoteNote } from './quote-note';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
 
 
@@ -21,11 +19,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 }
 
 export default async function JobPage({ params }: { params: Promise<{ number: string }> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await getJobByNumber(parsed.data.number);
-  if (!job) notFound();
+  const { user, job } = await loadJobRoute(params, getJobByNumber);
   const [staff, history, redesign] = await Promise.all([listStaff(), motorHistory(job.motorId, job.id), getApprovedRedesign(job.id)]);
   const m = job.motor;
   const poles = m.frequencyHz && m.speedRpm ? polesFromSpeed(m.frequencyHz, m.speedRpm) : null;
@@ -62,6 +56,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
           <li><Link href={jobRoutes(job.number).quote}>Estimate and quote</Link></li>
           <li><Link href={jobRoutes(job.number).asFound}>As-found data sheet</Link></li>
           <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>{redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}</li>
+          <li><Link href={jobRoutes(job.number).coreTest}>Core-loss (loop) test</Link></li>
           <li><Link href={jobRoutes(job.number).finalTests}>Final tests</Link></li>
           <li><Link href={`/jobs/${job.number}/job-sheet`}>Job sheet</Link></li>
           <li><a className="btn secondary" href={`/jobs/${job.number}/job-sheet/pdf`} download>Download job sheet (PDF)</a></li>

@@ -1,5 +1,5 @@
 import Link from 'next/link';
-import { db } from '@/lib/db/client';
+import { latestSentQuoteSummary } from '@/lib/quotes/quote-queries';
 import type { JobStatus } from '@/lib/db/generated/enums';
 import { jobRoutes } from '@/lib/routes';
 import { quoteGateRefusal } from '@/lib/quotes/quote-gates';
@@ -8,7 +8,7 @@ import { formatMoney, isCurrencyCode } from '@/lib/quotes/money';
 
 /** Where the quote stands, beside the status moves: what the next move needs, and the choice after a decline. */
 export async function QuoteNote({ jobId, jobNumber, status }: { jobId: string; jobNumber: number; status: JobStatus }) {
-  const sent = await db().quote.findFirst({ where: { jobId, status: { not: 'DRAFT' } }, orderBy: { revision: 'desc' }, select: { revision: true, status: true, totalMinor: true, currency: true, customerOrderNumber: true } });
+  const sent = await latestSentQuoteSummary(jobId);
   const href = jobRoutes(jobNumber).quote;
   const next = status === 'INSPECTION' ? 'QUOTE_SENT' : status === 'QUOTE_SENT' ? 'CUSTOMER_APPROVED' : null;
   const refusal = next ? quoteGateRefusal(status, next, sent) : null;

@@ -115,6 +115,13 @@ describe('estimate totals', () => {
     }));
   });
 
+  it('shares a discount exactly even when amount × weight passes 2^53 (found by the property above)', () => {
+    const lines = [{ quantityMilli: 2927362, unitPriceMinor: 86924818, taxRateBp: 0 }, { quantityMilli: 1500131, unitPriceMinor: 22063796, taxRateBp: 0 }];
+    const t = estimateTotals(lines, { currency: 'USD', taxMode: 'ON_TOTAL', discountBp: 10_000 });
+    expect(t.lines.map((l) => l.grossMinor)).toEqual([0, 0]);
+    expect(t.totalMinor).toBe(0);
+  });
+
   it('an empty estimate is all zeros', () => {
     expect(estimateTotals([], { currency: 'USD', taxMode: 'ON_TOTAL', discountBp: 1000 })).toMatchObject({ subtotalMinor: 0, discountMinor: 0, taxMinor: 0, totalMinor: 0, bands: [] });
   });

@@ -6,7 +6,7 @@ import { windingCopper } from '@/lib/engine/winding-copper';
 import { kgToBuyMilli, rewindMaterialLines } from '@/lib/quotes/rewind-material';
 import { DEFAULT_COMMERCIAL_SETTINGS } from '@/lib/settings/commercial-defaults';
 import { timesBasisPoints, timesMilli } from '@/lib/quotes/money';
-import { EXAMPLE_A_SHEET } from '../engine/winding-fixtures';
+import { EXAMPLE_A_SHEET } from '../../support/fixtures/winding-fixtures';
 
 const value = <T,>(r: { ok: true; value: T } | { ok: false; error: { message: string } }): T => {
   if (!r.ok) throw new Error(r.error.message);

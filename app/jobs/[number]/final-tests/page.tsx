@@ -1,13 +1,10 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
-import { db } from '@/lib/db/client';
 import { listStaff } from '@/lib/jobs/job-queries';
-import { CLOSED_STATUSES, STATUS_LABELS } from '@/lib/jobs/status-flow';
+import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
 import { TEST_HAZARD_CAUTIONS } from '@/lib/job-sheet/safety-notices';
-import { listTestRecords } from '@/lib/final-tests/record-queries';
+import { getJobForFinalTests, listTestRecords } from '@/lib/final-tests/record-queries';
 import { basisDefaults, newRecordDefaults, recordToFormData } from '@/lib/final-tests/defaults';
 import { judgeTestRecord } from '@/lib/final-tests/verdicts';
 import { compareFinalResistance, RESISTANCE_CHECK_PERCENT, type ExpectedResistance } from '@/lib/final-tests/expected-resistance';
@@ -18,7 +15,9 @@ import { OverallVerdict, SectionVerdict } from './judgement-view';
 import { RecordReadings } from './record-readings';
 import { TestsForm } from './tests-form';
 import './final-tests.css';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute } from '@/lib/jobs/job-route';
+import { JobLosses } from '../_losses/job-losses';
+import { isRecordLocked } from '@/lib/jobs/record-locks';
 
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -29,20 +28,13 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 const nowLocal = () => new Date().toISOString().slice(0, 16);
 
 export default async function TestsPage({ params }: { params: Promise<{ number: string }> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await db().job.findUnique({
-    where: { number: parsed.data.number },
-    select: { id: true, number: true, status: true, customer: { select: { company: true } }, motor: true },
-  });
-  if (!job) notFound();
+  const { user, job } = await loadJobRoute(params, getJobForFinalTests);
   const [records, sheet, staff] = await Promise.all([listTestRecords(job.id), getAsFoundSheet(job.id), listStaff()]);
   const current = records[0] ?? null;
   const expected = await expectedResistanceFor(job.id, sheet);
   const motor = { ratedVoltageV: job.motor.ratedVoltageV, insulationClass: job.motor.insulationClass, outputKw: job.motor.outputKw, frequencyHz: job.motor.frequencyHz };
   const { sources } = basisDefaults(motor, sheet?.sheet ?? null);
-  const closed = CLOSED_STATUSES.includes(job.status);
+  const closed = isRecordLocked('finalTests', job.status, job.heldFrom);
   const mayRecord = can(user.role, 'tests.record') && !closed;
   const me = staff.find((s) => s.id === user.id)?.id ?? '';
 
@@ -85,6 +77,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
         )}
         {closed && <p className="notice">This job is {STATUS_LABELS[job.status].toLowerCase()}: its test records are kept as they were.</p>}
       </section>
+      <section className="card"><JobLosses jobId={job.id} headingId="losses-h" level="h2" /></section>
 
       {mayRecord && (
         <section className="card">

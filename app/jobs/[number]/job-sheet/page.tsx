@@ -1,13 +1,12 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
-import { db } from '@/lib/db/client';
+import { shippedSnapshotInfo } from '@/lib/job-sheet/job-sheet-snapshot';
 import { loadJobSheet, type Row } from '@/lib/job-sheet/job-sheet-data';
 import { OverallVerdict, SectionVerdict } from '../final-tests/judgement-view';
 import { PrintButton } from './print-button';
+import { LossStatementView } from '../_losses/loss-statement-view';
 import '../final-tests/final-tests.css';
 import './job-sheet.css';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute } from '@/lib/jobs/job-route';
 
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -29,12 +28,8 @@ function Rows({ rows }: { rows: Row[] }) {
  * For a shipped job, the stored PDF is what was handed over; this page says so and links to it.
  */
 export default async function JobSheetPage({ params }: { params: Promise<{ number: string }> }) {
-  await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const d = await loadJobSheet(parsed.data.number);
-  if (!d) notFound();
-  const snapshot = d.job.shipped ? await db().jobSheetSnapshot.findUnique({ where: { jobId: d.job.id }, select: { revision: true, generatedAt: true } }) : null;
+  const { job: d } = await loadJobRoute(params, loadJobSheet);
+  const snapshot = d.job.shipped ? await shippedSnapshotInfo(d.job.id) : null;
   const pdfHref = `/jobs/${d.job.number}/job-sheet/pdf`;
   const t = d.tests;
 
@@ -112,6 +107,7 @@ export default async function JobSheetPage({ params }: { params: Promise<{ numbe
             </>
           ) : <p>No final tests have been recorded yet.</p>}
         </section>
+        <LossStatementView result={d.losses} headingId="js-losses" level="h2" />
 
         <section aria-labelledby="js-sign">
           <h2 id="js-sign">Signatures</h2>

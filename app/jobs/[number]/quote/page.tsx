@@ -1,12 +1,9 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
-import { db } from '@/lib/db/client';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { loadJobRoute, type JobRouteParams } from '@/lib/jobs/job-route';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { jobRoutes } from '@/lib/routes';
-import { listQuotes } from '@/lib/quotes/quote-queries';
+import { jobForQuotePage, listQuotes } from '@/lib/quotes/quote-queries';
 import { quoteNumber } from '@/lib/quotes/quote-messages';
 import { quoteCurrency } from '@/lib/quotes/quote-writes';
 import { formatMoney, decimalText } from '@/lib/quotes/money';
@@ -32,12 +29,8 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 
 const STATUS_TEXT = { DRAFT: 'Draft estimate', SENT: 'Sent, awaiting the customer', ACCEPTED: 'Accepted', DECLINED: 'Declined' } as const;
 
-export default async function QuotePage({ params }: { params: Promise<{ number: string }> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await db().job.findUnique({ where: { number: parsed.data.number }, select: { id: true, number: true, status: true, customer: { select: { company: true } } } });
-  if (!job) notFound();
+export default async function QuotePage({ params }: JobRouteParams) {
+  const { user, job } = await loadJobRoute(params, jobForQuotePage);
   const [quotes, { settings }, rewind, labour, staff] = await Promise.all([listQuotes(job.id), getCommercialSettings(), rewindCopperFor(job.id), labourComparison(job.id), listStaff()]);
   const latest = quotes[0];
   const draft = latest?.status === 'DRAFT' ? latest : null;

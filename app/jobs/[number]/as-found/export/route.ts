@@ -1,7 +1,6 @@
 import { z } from 'zod';
-import { currentUser } from '@/lib/auth/guard';
-import { can } from '@/lib/auth/permissions';
-import { db } from '@/lib/db/client';
+import { guardedRoute } from '@/lib/auth/route-guard';
+import { findJobRef } from '@/lib/jobs/job-queries';
 import { makeWindingSheetExport } from '@/lib/as-found/winding-sheet-schema';
 import { getAsFoundSheet, getSheetRevision } from '@/lib/as-found/as-found-queries';
 import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
@@ -10,13 +9,8 @@ import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
  * Downloads a job's saved data sheet as JSON in the versioned export format (coilwright.winding-sheet,
  * version 1): the same file the sheet page imports and `npm run calc -- sheet` reads.
  */
-export async function GET(req: Request, { params }: { params: Promise<{ number: string }> }): Promise<Response> {
-  const user = await currentUser();
-  if (!user) return new Response('Sign in first.', { status: 401 });
-  if (!can(user.role, 'job.read')) return new Response('Not allowed.', { status: 403 });
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) return new Response('Not found.', { status: 404 });
-  const job = await db().job.findUnique({ where: { number: parsed.data.number }, select: { id: true, number: true } });
+export const GET = guardedRoute('job.read', jobNumberParamsSchema, async (req, _user, params) => {
+  const job = await findJobRef(params.number);
   if (!job) return new Response('Not found.', { status: 404 });
   const saved = await getAsFoundSheet(job.id);
   if (!saved) return new Response('This job has no saved data sheet yet.', { status: 404 });
@@ -34,4 +28,4 @@ export async function GET(req: Request, { params }: { params: Promise<{ number: 
       'X-Content-Type-Options': 'nosniff',
     },
   });
-}
+});

@@ -1,20 +1,13 @@
-import { currentUser } from '@/lib/auth/guard';
-import { can } from '@/lib/auth/permissions';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { z } from 'zod';
+import { guardedRoute } from '@/lib/auth/route-guard';
+import { jobNumberSchema } from '@/lib/jobs/job-schema';
 import { quoteDocument } from '@/lib/quotes/quote-document';
 import { renderQuotePdf } from '@/lib/quotes/quote-pdf';
 import { quoteRevisionParamSchema } from '@/lib/quotes/quote-schema';
 
 /** The quote as a PDF for a signed-in user who may read jobs: a download by default, in the browser with ?inline=1. */
-export async function GET(req: Request, { params }: { params: Promise<{ number: string; revision: string }> }): Promise<Response> {
-  const user = await currentUser();
-  if (!user) return new Response('Sign in first.', { status: 401 });
-  if (!can(user.role, 'job.read')) return new Response('Not allowed.', { status: 403 });
-  const p = await params;
-  const job = jobNumberParamsSchema.safeParse({ number: p.number });
-  const revision = quoteRevisionParamSchema.safeParse(p.revision);
-  if (!job.success || !revision.success) return new Response('Not found.', { status: 404 });
-  const doc = await quoteDocument(job.data.number, revision.data);
+export const GET = guardedRoute('job.read', z.object({ number: jobNumberSchema, revision: quoteRevisionParamSchema }), async (req, _user, params) => {
+  const doc = await quoteDocument(params.number, params.revision);
   if (!doc) return new Response('Not found.', { status: 404 });
   const pdf = await renderQuotePdf(doc);
   const inline = new URL(req.url).searchParams.get('inline') === '1';
@@ -27,4 +20,4 @@ export async function GET(req: Request, { params }: { params: Promise<{ number: 
       'X-Content-Type-Options': 'nosniff',
     },
   });
-}
+});

@@ -1,7 +1,7 @@
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { requirePageUser } from '@/lib/auth/guard';
-import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
+import { jobNumberSchema } from '@/lib/jobs/job-schema';
 import { jobRoutes } from '@/lib/routes';
 import { quoteDocument } from '@/lib/quotes/quote-document';
 import { quoteRevisionParamSchema } from '@/lib/quotes/quote-schema';
@@ -16,10 +16,10 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 export default async function QuotePrintPage({ params }: { params: Promise<{ number: string; revision: string }> }) {
   await requirePageUser('job.read');
   const p = await params;
-  const job = jobNumberParamsSchema.safeParse({ number: p.number });
+  const job = jobNumberSchema.safeParse(p.number);
   const revision = quoteRevisionParamSchema.safeParse(p.revision);
   if (!job.success || !revision.success) notFound();
-  const d = await quoteDocument(job.data.number, revision.data);
+  const d = await quoteDocument(job.data, revision.data);
   if (!d) notFound();
   const routes = jobRoutes(d.jobNumber);
   return (
