@@ -41,7 +41,7 @@ describe('the front desk quotes a repair', () => {
     await page.getByRole('button', { name: 'Save estimate' }).click();
     await expect.poll(() => page.getByRole('status').filter({ hasText: 'Estimate saved.' }).count()).toBe(1);
     await page.getByRole('button', { name: `Send quote Q${number}-1` }).click();
-    await expect.poll(() => page.getByRole('cell', { name: 'Sent, awaiting the customer' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('cell', { name: 'Sent, awaiting the customer' }).count(), { timeout: 20_000 }).toBe(1);
 
     // The PDF the customer receives, read back.
     const href = await page.getByRole('link', { name: 'PDF' }).first().getAttribute('href');
@@ -59,13 +59,13 @@ describe('the front desk quotes a repair', () => {
     await decision.getByLabel('How').selectOption('EMAIL');
     await decision.getByLabel('Customer order number').fill('PO-E2E-77');
     await decision.getByRole('button', { name: 'Record decision' }).click();
-    await expect.poll(() => page.getByRole('cell', { name: 'Accepted' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('cell', { name: 'Accepted' }).count(), { timeout: 20_000 }).toBe(1);
 
     await page.getByRole('link', { name: `← Job ${number}` }).click();
     await page.waitForURL(new RegExp(`/jobs/${number}$`));
-    await expect.poll(() => page.getByText('accepted, customer order PO-E2E-77').count()).toBe(1);
+    await expect.poll(() => page.getByText('accepted, customer order PO-E2E-77').count(), { timeout: 20_000 }).toBe(1);
     await page.getByRole('button', { name: 'Move to Customer approved' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: /^Status:/ }).textContent()).toContain('Customer approved');
+    await expect.poll(() => page.getByRole('heading', { name: /^Status:/ }).textContent(), { timeout: 20_000 }).toContain('Customer approved');
     await page.close();
   });
 });
