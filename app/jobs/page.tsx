@@ -22,6 +22,11 @@ const COLUMNS: { key: SortKey | null; label: string; className?: string }[] = [
   { key: null, label: 'Assigned to' },
 ];
 
+/** Sort keys in words for the table caption ("sorted by promised date, ascending"). */
+const SORT_WORDS: Record<BoardQuery['sort'], string> = {
+  number: 'job number', promisedAt: 'promised date', receivedAt: 'date received', status: 'status', customer: 'customer', priority: 'priority',
+};
+
 export default async function JobBoard({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser('job.read');
   const q = boardQuerySchema.parse(await searchParams);
@@ -80,8 +85,8 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
         {board.total} job{board.total === 1 ? '' : 's'} · page {q.page} of {board.pages}
       </p>
       <div style={{ overflowX: 'auto' }}>
-        <table>
-          <caption className="sr-only">Jobs, sorted by {q.sort} {q.dir === 'asc' ? 'ascending' : 'descending'}</caption>
+        <table className="board">
+          <caption className="sr-only">Jobs, sorted by {SORT_WORDS[q.sort]}, {q.dir === 'asc' ? 'ascending' : 'descending'}</caption>
           <thead>
             <tr>
               {COLUMNS.map((c) => {
