@@ -29,6 +29,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
                 <li><Link href="/library">Winding library</Link></li>
                 {can(user.role, 'stock.manage') && <li><Link href="/stock">Wire stock</Link></li>}
                 {can(user.role, 'settings.manage') && <li><Link href="/admin/users">People</Link></li>}
+                {can(user.role, 'settings.manage') && <li><Link href="/admin/commercial">Quoting settings</Link></li>}
               </ul>
             </nav>
           )}

@@ -17,5 +17,8 @@ export const jobRoutes = (jobNumber: number | string) => {
     benchPackPdf: `${base}/redesign/bench-pack/pdf`,
     jobSheet: `${base}/job-sheet`,
     jobSheetPdf: `${base}/job-sheet/pdf`,
+    quote: `${base}/quote`,
+    quotePrint: (revision: number) => `${base}/quote/${revision}/print`,
+    quotePdf: (revision: number) => `${base}/quote/${revision}/pdf`,
   };
 };

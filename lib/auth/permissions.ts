@@ -18,6 +18,9 @@ export const PERMISSIONS = {
   'tests.record': ['WINDER', 'ENGINEER', 'ADMIN'],
   'stock.manage': ['ADMIN', 'ENGINEER'],
   'settings.manage': ['ADMIN'],
+  'quote.edit': ['FRONT_DESK', 'ENGINEER', 'ADMIN'],
+  'quote.send': ['FRONT_DESK', 'ADMIN'],
+  'labour.book': ['FRONT_DESK', 'WINDER', 'ENGINEER', 'ADMIN'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;
@@ -36,6 +39,9 @@ export const PERMISSION_WORDS: Record<Permission, string> = {
   'tests.record': 'record final tests',
   'stock.manage': 'manage wire stock',
   'settings.manage': 'change shop settings',
+  'quote.edit': 'build estimates',
+  'quote.send': 'send quotes and record the customer’s decision',
+  'labour.book': 'book labour against jobs',
 };
 
 export function can(role: Role, permission: Permission): boolean {

@@ -19,3 +19,12 @@ export const REFERENCE_TEMPERATURE_C = 20;
 
 /** Density of annealed copper at 20 °C, 8890 kg/m³ (IEC 60028: 8.89 g/cm³). */
 export const COPPER_DENSITY_KG_PER_M3 = 8890;
+
+/**
+ * Mass of a copper conductor, kg = length × bare area × density: L[m] × A[mm²] × 10⁻⁶ × 8890 kg/m³
+ * (IEC 60028). Enamel is not counted (a few per cent of the copper; quoting adds an allowance).
+ * Check [derived]: 564.48 m of 0.85 mm wire (A = π/4 × 0.85² = 0.567450 mm²) → 2.8476 kg.
+ */
+export function copperMassKg(lengthM: number, bareAreaMm2: number): number {
+  return lengthM * bareAreaMm2 * 1e-6 * COPPER_DENSITY_KG_PER_M3;
+}

@@ -14,6 +14,7 @@ import { isMoveAllowed, STATUS_LABELS } from './status-flow';
 import { claimRequestKey, storeRequestResult } from '@/lib/errors/idempotency';
 import { DECISION_EVENT_KIND, loadGateFacts } from './gate-facts';
 import { decisionMessage, gateRefusal, type GateDecisionKind } from './shop-gates';
+import { refuseByQuoteRules } from '@/lib/quotes/quote-gates';
 import type { JobEventKind } from './job-events';
 
 type Tx = Prisma.TransactionClient;
@@ -176,6 +177,7 @@ export async function moveJobStatus(userId: string, role: Role, input: StatusMov
     // The records must support the move too (passing tests, an approved redesign, a winding record).
     const refusal = gateRefusal(job.status, input.to, await loadGateFacts(tx, input.jobId));
     if (refusal) throw new DomainError('conflict', refusal);
+    await refuseByQuoteRules(tx, input.jobId, job.status, input.to);
     const result = await tx.job.updateMany({
       where: { id: input.jobId, version: input.version, status: job.status },
       data: {

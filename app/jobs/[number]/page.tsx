@@ -12,6 +12,7 @@ import { gateRefusal, releasingDecision } from '@/lib/jobs/shop-gates';
 import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
 import { PhotoUpload } from './photo-upload';
+import { QuoteNote } from './quote-note';
 import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
 
@@ -48,11 +49,13 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
         <StatusMoves jobId={job.id} version={job.version} moves={moves} mayRelease={can(user.role, 'job.override')} />
         {facts.readyOverride && <p className="small" data-testid="ready-override">Engineer’s override on record ({facts.readyOverride.by}, {fmt.date(facts.readyOverride.at)}): {facts.readyOverride.reason}</p>}
         {facts.keepOriginal && <p className="small">Original winding kept ({facts.keepOriginal.by}, {fmt.date(facts.keepOriginal.at)}): {facts.keepOriginal.reason}</p>}
+        <QuoteNote jobId={job.id} jobNumber={job.number} status={job.status} />
       </section>
 
       <nav className="card no-print" aria-label="Workshop records">
         <h2>Workshop records</h2>
         <ul className="row" style={{ listStyle: 'none', padding: 0, gap: '1.5rem' }}>
+          <li><Link href={jobRoutes(job.number).quote}>Estimate and quote</Link></li>
           <li><Link href={jobRoutes(job.number).asFound}>As-found data sheet</Link></li>
           <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>{redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}</li>
           <li><Link href={jobRoutes(job.number).coreTest}>Core-loss (loop) test</Link></li>
