@@ -3,6 +3,7 @@
  * `guardedAction`, which checks the session and the role BEFORE it parses or writes anything.
  */
 import { cookies } from 'next/headers';
+import { ensureDisplaySettings } from '@/lib/settings/display-settings';
 import { redirect } from 'next/navigation';
 import type { z } from 'zod';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
@@ -11,6 +12,8 @@ import { can, type Permission } from './permissions';
 import { SESSION_COOKIE, findSessionUser, type SessionUser } from './session-store';
 
 export async function currentUser(): Promise<SessionUser | null> {
+  // Every page, route and action passes here first: keep the shop's date settings fresh (cheap when fresh).
+  await ensureDisplaySettings();
   const jar = await cookies();
   return findSessionUser(jar.get(SESSION_COOKIE)?.value);
 }

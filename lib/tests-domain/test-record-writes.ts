@@ -4,6 +4,7 @@
  * version they were made from; a retest names the sequence it follows, and the (jobId, sequence) unique
  * key refuses two retests racing for the same number.
  */
+import { fromZonedLocal } from '@/lib/format';
 import { db, Prisma } from '@/lib/db/client';
 import { recordJobEvent } from '@/lib/jobs/job-writes';
 import { CLOSED_STATUSES, STATUS_LABELS } from '@/lib/jobs/status-flow';
@@ -34,7 +35,8 @@ const isUniqueViolation = (err: unknown): boolean => err instanceof Prisma.Prism
 
 export async function saveTestRecord(userId: string, input: TestRecordForm): Promise<SavedTestRecord> {
   const judgement = judgeTestRecord(input.data);
-  const testedAt = new Date(`${input.testedAt.length === 16 ? `${input.testedAt}:00` : input.testedAt}Z`);
+  // Typed as the shop's wall-clock time (shop settings), stored as the instant it names.
+  const testedAt = fromZonedLocal(input.testedAt);
   const columns = {
     // JSON has no undefined: a blank reading inside a tuple (e.g. one phase current) is stored as null,
     // which the schema reads back as blank; blank fields of objects are simply left out.

@@ -12,7 +12,7 @@ import { basisDefaults, newRecordDefaults, recordToFormData } from '@/lib/tests-
 import { judgeTestRecord } from '@/lib/tests-domain/test-verdicts';
 import { compareFinalResistance, RESISTANCE_CHECK_PERCENT, type ExpectedResistance } from '@/lib/tests-domain/expected-resistance';
 import { expectedResistanceFor } from '@/lib/tests-domain/expected-resistance-source';
-import { fmt } from '@/lib/format';
+import { fmt, toZonedLocal } from '@/lib/format';
 import type { TestRecordFormInput } from '@/lib/schemas/test-record';
 import { OverallVerdict, SectionVerdict } from './judgement-view';
 import { RecordReadings } from './record-readings';
@@ -26,7 +26,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 }
 
 /** datetime-local value for now, in UTC (minutes). */
-const nowLocal = () => new Date().toISOString().slice(0, 16);
+const nowLocal = () => toZonedLocal(new Date());
 
 export default async function TestsPage({ params }: { params: Promise<{ number: string }> }) {
   const user = await requirePageUser('job.read');
@@ -53,7 +53,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
   const editValues: TestRecordFormInput | null = current
     ? {
         jobId: job.id, recordId: current.id, version: current.version, previousSequence: current.sequence,
-        testedAt: current.testedAt.toISOString().slice(0, 16), testedById: current.testedBy?.id ?? '', data: recordToFormData(current.data),
+        testedAt: toZonedLocal(current.testedAt), testedById: current.testedBy?.id ?? '', data: recordToFormData(current.data),
       }
     : null;
 

@@ -9,6 +9,7 @@ import { useCallback, useEffect, useMemo, useRef, useState, useTransition } from
 import { useRouter } from 'next/navigation';
 import { FormProvider, useForm } from 'react-hook-form';
 import { FormStatus } from '@/app/_components/form-status';
+import { fmt } from '@/lib/format';
 import { applyFieldErrors } from '@/lib/errors/form-errors';
 import type { CoilSide } from '@/lib/engine/winding-layout';
 import type { WindingSheet } from '@/lib/schemas/winding-sheet';
@@ -57,7 +58,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   baseRef.current = baseRevision;
   const [conflict, setConflict] = useState(false);
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(
-    initial.source === 'draft' ? { tone: 'warn', text: `Restored your unsaved draft from ${new Date(initial.draftSavedAt ?? Date.now()).toLocaleString()}. Save the sheet to keep it, or discard the draft.` } : null,
+    initial.source === 'draft' ? { tone: 'warn', text: `Restored your unsaved draft from ${fmt.dateTime(new Date(initial.draftSavedAt ?? Date.now()))}. Save the sheet to keep it, or discard the draft.` } : null,
   );
   const [hasDraft, setHasDraft] = useState(initial.source === 'draft');
   const [pending, startTransition] = useTransition();

@@ -7,6 +7,7 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { saveSheetDraft } from '@/lib/sheets/sheet-actions';
 import type { DraftPayload } from '@/lib/schemas/sheet-draft';
+import { fmt } from '@/lib/format';
 
 /** Quiet time after the last change before the draft is sent. */
 export const DRAFT_DELAY_MS = 2500;
@@ -20,7 +21,7 @@ export type DraftState =
   | { kind: 'failed'; message: string }
   | { kind: 'cleared'; text: string };
 
-const hhmm = (d: Date): string => d.toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
+const hhmm = (d: Date): string => fmt.time(d);
 
 export function draftStatusText(s: DraftState): string {
   switch (s.kind) {
