@@ -6,6 +6,14 @@ const nextConfig = {
   experimental: { serverActions: { bodySizeLimit: '32mb' } },
   poweredByHeader: false,
   typedRoutes: false,
+  // The as-found data sheet and the final tests moved from /sheet and /tests (names that were ambiguous with
+  // the customer's job sheet and with test code); bookmarks and printed links keep working.
+  async redirects() {
+    return [
+      { source: '/jobs/:number/sheet/:rest*', destination: '/jobs/:number/as-found/:rest*', permanent: true },
+      { source: '/jobs/:number/tests', destination: '/jobs/:number/final-tests', permanent: true },
+    ];
+  },
 };
 
 export default nextConfig;

@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { currentUser } from '@/lib/auth/guard';
 import { signOut } from '@/lib/auth/auth-actions';
 import { can, ROLE_LABELS } from '@/lib/auth/permissions';
-import { displaySettings } from '@/lib/format';
+import { displaySettings } from '@/lib/presentation/format';
 import { ShopFormat } from './_components/shop-format';
 import './globals.css';
 

@@ -4,10 +4,10 @@
  */
 import { randomUUID } from 'node:crypto';
 import { closeDb, db } from '@/lib/db/client';
-import { prepareDatabase } from '@/lib/db/prepare';
+import { prepareDatabase } from '@/lib/setup/prepare';
 import { listBoard } from '@/lib/jobs/job-queries';
-import { boardQuerySchema } from '@/lib/schemas/job';
-import { JOB_STATUSES } from '@/lib/schemas/job';
+import { boardQuerySchema } from '@/lib/jobs/job-schema';
+import { JOB_STATUSES } from '@/lib/jobs/job-schema';
 
 process.env.COILWRIGHT_DATA_DIR = 'memory://';
 process.env.COILWRIGHT_SEED_DEMO = '0';

@@ -1,10 +1,10 @@
 /**
- * `npm run bench`: engine timings. Each section is a BenchSection (lib/engine/bench-timer.ts); add a
+ * `npm run bench`: engine timings. Each section is a BenchSection (scripts/bench/timer.ts); add a
  * section (e.g. a redesign search) to SECTIONS below; sections may be async (the library search seeds an
  * in-memory database). `--quick` shortens the runs.
  */
 import { analyseWinding, type AnalyseWindingInput } from '@/lib/engine/analyse-winding';
-import { formatTiming, timeIt, type BenchSection, type TimeItOptions } from '@/lib/engine/bench-timer';
+import { formatTiming, timeIt, type BenchSection, type TimeItOptions } from '@/scripts/bench/timer';
 import { closedFormFactors } from '@/lib/engine/closed-form';
 import { DEFAULT_REDESIGN_LIMITS, stockWire } from '@/lib/engine/redesign/from-sheet';
 import { searchRedesign } from '@/lib/engine/redesign/search';

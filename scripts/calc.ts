@@ -5,11 +5,11 @@
 import { readFileSync } from 'node:fs';
 import { analyseSheet, windingInputFromSheet } from '@/lib/engine/analyse-sheet';
 import { analyseWinding } from '@/lib/engine/analyse-winding';
-import { CALC_USAGE, parseCalcArgs } from '@/lib/engine/cli/args';
-import { formatSheet } from '@/lib/engine/cli/format-sheet';
-import { formatWinding } from '@/lib/engine/cli/format-winding';
+import { CALC_USAGE, parseCalcArgs } from '@/lib/cli/args';
+import { formatSheet } from '@/lib/cli/format-sheet';
+import { formatWinding } from '@/lib/cli/format-winding';
 import type { EngineError } from '@/lib/engine/result';
-import { parseWindingSheetExport, windingSheetSchema } from '@/lib/schemas/winding-sheet';
+import { parseWindingSheetExport, windingSheetSchema } from '@/lib/as-found/winding-sheet-schema';
 
 function die(message: string): never {
   process.stderr.write(`calc: ${message.replace(/\s*\n\s*/g, ' ')}\n`);

@@ -1,7 +1,7 @@
 'use client';
 
 import type { FieldErrors, UseFormRegister } from 'react-hook-form';
-import { CONNECTIONS, CONNECTION_LABELS, INSULATION_CLASSES } from '@/lib/schemas/motor';
+import { CONNECTIONS, CONNECTION_LABELS, INSULATION_CLASSES } from '@/lib/jobs/motor-schema';
 import { Field, InputField, describe } from './field';
 import { SpeedReadout } from './speed-readout';
 

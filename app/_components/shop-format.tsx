@@ -1,6 +1,6 @@
 'use client';
 
-import { setDisplaySettings, type DisplaySettings } from '@/lib/format';
+import { setDisplaySettings, type DisplaySettings } from '@/lib/presentation/format';
 
 /**
  * Gives the browser's copy of the formatting module the shop's time zone and date format, so a time

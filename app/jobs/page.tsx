@@ -5,8 +5,8 @@ import { customerName, listBoard, listStaff } from '@/lib/jobs/job-queries';
 import { boardHref, sortInWords } from '@/lib/jobs/board-url';
 import { CustomerFilter } from './customer-filter';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
-import { boardQuerySchema, JOB_STATUSES, type BoardQuery } from '@/lib/schemas/job';
-import { fmt } from '@/lib/format';
+import { boardQuerySchema, JOB_STATUSES, type BoardQuery } from '@/lib/jobs/job-schema';
+import { fmt } from '@/lib/presentation/format';
 
 export const metadata = { title: 'Job board' };
 

@@ -1,14 +1,15 @@
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
-import { LIBRARY_DEFAULT_TOLERANCE, libraryQuerySchema, type LibraryQuery } from '@/lib/schemas/library-query';
-import { lengthToMm, mmToLength, type LengthUnit } from '@/lib/sheets/length-entry';
-import { getLibrarySheets, searchLibrary, type LibrarySearch } from '@/lib/sheets/library-queries';
-import { getLengthUnit } from '@/lib/sheets/sheet-queries';
-import { fmt } from '@/lib/format';
-import type { WindingSheet } from '@/lib/schemas/winding-sheet';
+import { LIBRARY_DEFAULT_TOLERANCE, libraryQuerySchema, type LibraryQuery } from '@/lib/library/library-query-schema';
+import { lengthToMm, mmToLength, type LengthUnit } from '@/lib/as-found/length-entry';
+import { getLibrarySheets, searchLibrary, type LibrarySearch } from '@/lib/library/library-queries';
+import { getLengthUnit } from '@/lib/as-found/as-found-queries';
+import { fmt } from '@/lib/presentation/format';
+import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { UseForJob } from './use-for-job';
-import '../jobs/[number]/sheet/sheet.css';
+import '../jobs/[number]/as-found/sheet.css';
+import { jobRoutes } from '@/lib/routes';
 
 export const metadata = { title: 'Winding library' };
 
@@ -93,7 +94,7 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
         <section className="card" aria-labelledby="cmp-h">
           <h2 id="cmp-h">Side by side</h2>
           <table>
-            <thead><tr><th scope="col">Job</th>{compared.map((c) => <th key={c.id} scope="col"><Link href={`/jobs/${c.jobNumber}/sheet/print`}>Job {c.jobNumber}</Link> <span className="muted">{c.manufacturer} {c.model}</span></th>)}</tr></thead>
+            <thead><tr><th scope="col">Job</th>{compared.map((c) => <th key={c.id} scope="col"><Link href={jobRoutes(c.jobNumber).asFoundPrint}>Job {c.jobNumber}</Link> <span className="muted">{c.manufacturer} {c.model}</span></th>)}</tr></thead>
             <tbody>
               {COMPARE_ROWS.map(([label, f]) => {
                 const cells = compared.map((c) => f(c.sheet, unit));
@@ -124,7 +125,7 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
                   {result.rows.map((r) => (
                     <tr key={r.id}>
                       <td><input type="checkbox" name="compare" value={r.id} defaultChecked={q.compare.includes(r.id)} aria-label={`Compare job ${r.jobNumber}`} style={{ width: 'auto' }} /></td>
-                      <td><Link href={`/jobs/${r.jobNumber}/sheet/print`}>{r.jobNumber}</Link></td>
+                      <td><Link href={jobRoutes(r.jobNumber).asFoundPrint}>{r.jobNumber}</Link></td>
                       <td>{r.manufacturer ?? '—'} {r.model ?? ''}</td>
                       <td className="num">{r.slots}</td><td className="num">{r.poles}</td>
                       <td className="num">{mmToLength(r.boreMm, unit)}</td><td className="num">{mmToLength(r.coreLengthMm, unit)}</td>

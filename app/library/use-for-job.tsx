@@ -2,7 +2,8 @@
 
 import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
-import { copyLibrarySheetToJob } from '@/lib/sheets/sheet-actions';
+import { copyLibrarySheetToJob } from '@/lib/as-found/as-found-actions';
+import { jobRoutes } from '@/lib/routes';
 
 /** "Use for job N": copies the match into job N's sheet draft and opens the sheet. */
 export function UseForJob({ jobNumber, sheetId, from }: { jobNumber: number; sheetId: string; from: number }) {
@@ -19,7 +20,7 @@ export function UseForJob({ jobNumber, sheetId, from }: { jobNumber: number; she
         onClick={() =>
           start(async () => {
             const r = await copyLibrarySheetToJob({ jobNumber, sheetId });
-            if (r.ok) router.push(`/jobs/${jobNumber}/sheet`);
+            if (r.ok) router.push(jobRoutes(jobNumber).asFound);
             else setError(r.message);
           })
         }

@@ -2,7 +2,7 @@
 
 import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
-import { DATE_FORMAT_LABELS, DATE_FORMATS, type DateFormat } from '@/lib/format';
+import { DATE_FORMAT_LABELS, DATE_FORMATS, type DateFormat } from '@/lib/presentation/format';
 import { saveShopDisplaySettings } from '@/lib/settings/settings-actions';
 import { FormStatus } from '@/app/_components/form-status';
 

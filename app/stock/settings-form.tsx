@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { shopSettingsSchema, type LimitsForm, type ShopSettingsInput } from '@/lib/schemas/redesign';
+import { shopSettingsSchema, type LimitsForm, type ShopSettingsInput } from '@/lib/redesign/redesign-schema';
 import { saveShopSettings } from '@/lib/settings/settings-actions';
 import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { InputField } from '@/app/_components/field';

@@ -4,7 +4,7 @@ import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { wireStockSchema, type WireStockEntry, type WireStockInput } from '@/lib/schemas/wire-stock';
+import { wireStockSchema, type WireStockEntry, type WireStockInput } from '@/lib/stock/wire-stock-schema';
 import { addStockWire, deleteStockWire } from '@/lib/stock/stock-actions';
 import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';

@@ -8,6 +8,7 @@ import { verifyPassword } from './password';
 import { SESSION_COOKIE, createSession, deleteSession } from './session-store';
 import { SIGN_IN_FAILED } from './messages';
 import { clearFailedSignIns, heldUntil, recordFailedSignIn, signInHeldMessage } from './sign-in-throttle';
+import { env } from '@/lib/env';
 
 const signInSchema = z.object({
   email: z.string().trim().toLowerCase().email('Enter your email address.'),
@@ -43,7 +44,7 @@ export async function signIn(_prev: SignInState, form: FormData): Promise<SignIn
   jar.set(SESSION_COOKIE, token, {
     httpOnly: true,
     sameSite: 'lax',
-    secure: process.env.COILWRIGHT_SECURE_COOKIES === '1',
+    secure: env().COILWRIGHT_SECURE_COOKIES === '1',
     path: '/',
     expires: expiresAt,
   });

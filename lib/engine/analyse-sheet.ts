@@ -4,7 +4,7 @@
  * synchronous speed from the wire, resistance, current-density, slot-fill and speed modules. Millimetres
  * from the sheet become metres here, once.
  */
-import type { WindingSheet } from '@/lib/schemas/winding-sheet';
+import type { WindingSheetData as WindingSheet } from './winding-sheet';
 import { analyseWinding, isAllFinite, type AnalyseWindingInput, type WindingAnalysis } from './analyse-winding';
 import { currentDensityChecked, TYPICAL_CURRENT_DENSITY, type CurrentDensity, type CurrentDensityRange } from './current-density';
 import type { FluxLimits } from './flux';

@@ -2,7 +2,7 @@
  * Three-phase stator winding layouts: the types every winding calculation shares, the builder of the
  * standard 60°-belt layout (lap or concentric, single or double layer, integral or fractional q), and the
  * check of a slot table drawn by the winder. Field paths in errors follow the winding data sheet
- * (lib/schemas/winding-sheet.ts): `core.slots`, `supply.poles`, `winding.spans.0`, `winding.slotTable.3.slot`.
+ * (lib/as-found/winding-sheet-schema.ts, lib/engine/winding-sheet.ts): `core.slots`, `supply.poles`, `winding.spans.0`, `winding.slotTable.3.slot`.
  */
 import { canBalance, gcd, slotsPerPolePerPhase } from './closed-form';
 import { fail, ok, type EngineResult } from './result';

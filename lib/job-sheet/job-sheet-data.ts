@@ -4,15 +4,15 @@
  */
 import { db } from '@/lib/db/client';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
-import { CONNECTION_LABELS } from '@/lib/schemas/motor';
-import { getAsFoundSheet } from '@/lib/sheets/sheet-queries';
-import type { WindingSheet } from '@/lib/schemas/winding-sheet';
-import { listTestRecords } from '@/lib/tests-domain/test-record-queries';
-import { readingSections, type ReadingSection } from '@/lib/tests-domain/test-readings';
-import { judgeTestRecord, type OverallVerdict, type SectionJudgement } from '@/lib/tests-domain/test-verdicts';
-import { temperatureText } from '@/lib/tests-domain/test-display';
+import { CONNECTION_LABELS } from '@/lib/jobs/motor-schema';
+import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
+import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
+import { listTestRecords } from '@/lib/final-tests/record-queries';
+import { readingSections, type ReadingSection } from '@/lib/final-tests/readings';
+import { judgeTestRecord, type OverallVerdict, type SectionJudgement } from '@/lib/final-tests/verdicts';
+import { temperatureText } from '@/lib/final-tests/display';
 import { mmToInches } from '@/lib/engine/units';
-import { fmt } from '@/lib/format';
+import { fmt } from '@/lib/presentation/format';
 import { getApprovedRedesignSummary, type ApprovedRedesignSummary } from './redesign-summary';
 import { CLOSING_STATEMENT, SAFETY_NOTICES, type SafetyNotice } from './safety-notices';
 import { shopDetails, type ShopDetails } from './shop-details';

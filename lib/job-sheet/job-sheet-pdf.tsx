@@ -5,7 +5,7 @@
 import { existsSync } from 'node:fs';
 import { join } from 'node:path';
 import { Document, Font, Page, StyleSheet, Text, View, renderToBuffer } from '@react-pdf/renderer';
-import { checkValueText, overallText, statusText } from '@/lib/tests-domain/test-display';
+import { checkValueText, overallText, statusText } from '@/lib/final-tests/display';
 import type { JobSheetData, Row } from './job-sheet-data';
 
 const FONT_DIR = join(process.cwd(), 'node_modules', 'dejavu-fonts-ttf', 'ttf');

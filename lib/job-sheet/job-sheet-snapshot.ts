@@ -39,6 +39,11 @@ export async function snapshotShippedJobSheet(jobId: string): Promise<{ revision
 }
 
 /** The sheet to serve for job `number`: the stored snapshot for a shipped job, else a fresh one; null if no such job. */
+/** Which issue of the sheet a shipped job keeps, and when it was stored (null before shipping). */
+export async function shippedSnapshotInfo(jobId: string): Promise<{ revision: number; generatedAt: Date } | null> {
+  return db().jobSheetSnapshot.findUnique({ where: { jobId }, select: { revision: true, generatedAt: true } });
+}
+
 export async function jobSheetPdf(number: number): Promise<JobSheetPdf | null> {
   const job = await db().job.findUnique({ where: { number }, select: { id: true, status: true } });
   if (!job) return null;

@@ -66,3 +66,8 @@ export async function photosFromFormData(form: FormData, field = 'photos'): Prom
   const files = form.getAll(field).filter((f): f is File => typeof f === 'object' && f !== null && 'arrayBuffer' in f && f.size > 0);
   return Promise.all(files.map(async (f) => ({ filename: f.name || 'photo', bytes: new Uint8Array(await f.arrayBuffer()) })));
 }
+
+/** A stored photo's bytes and type, for the download route (which checks the session first). */
+export async function getAttachment(id: string) {
+  return db().attachment.findUnique({ where: { id }, select: { data: true, mimeType: true, filename: true } });
+}

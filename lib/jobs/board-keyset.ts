@@ -9,7 +9,7 @@
  */
 import type { Prisma } from '@/lib/db/client';
 import type { JobStatus, Priority } from '@/lib/db/generated/enums';
-import { JOB_STATUSES, type BoardCursor, type BoardQuery } from '@/lib/schemas/job';
+import { JOB_STATUSES, type BoardCursor, type BoardQuery } from '@/lib/jobs/job-schema';
 
 export type Dir = 'asc' | 'desc';
 type Field = 'number' | 'promisedAt' | 'receivedAt' | 'customerName' | 'status' | 'priority';

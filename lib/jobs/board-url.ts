@@ -1,4 +1,4 @@
-import { encodeBoardCursor, type BoardCursor, type BoardQuery } from '@/lib/schemas/job';
+import { encodeBoardCursor, type BoardCursor, type BoardQuery } from '@/lib/jobs/job-schema';
 
 type BoardLink = Omit<Partial<BoardQuery>, 'after' | 'before'> & { after?: BoardCursor | string; before?: BoardCursor | string };
 

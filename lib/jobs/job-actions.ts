@@ -7,7 +7,7 @@
 import { z } from 'zod';
 import { guardedAction } from '@/lib/auth/guard';
 import { success, type ActionResult } from '@/lib/errors/action-result';
-import { intakeSchema, jobEditSchema, statusMoveSchema } from '@/lib/schemas/job';
+import { intakeSchema, jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
 import { addPhotos, checkPhotos, photosFromFormData } from './attachments';
 import { createIntake, moveJobStatus, updateJob } from './job-writes';
 import { findMotorsBySerial } from './job-queries';

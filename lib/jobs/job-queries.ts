@@ -3,8 +3,8 @@
  * (indexed columns), so it stays fast with tens of thousands of jobs.
  */
 import { db, type Prisma } from '@/lib/db/client';
-import { isoDayInZone } from '@/lib/format';
-import { encodeBoardCursor, PAGE_SIZE, type BoardCursor, type BoardQuery } from '@/lib/schemas/job';
+import { isoDayInZone } from '@/lib/presentation/format';
+import { encodeBoardCursor, PAGE_SIZE, type BoardCursor, type BoardQuery } from '@/lib/jobs/job-schema';
 import { asStatuses, cursorOf, jumpCursor, keyDirection, reverse, segmentOrder, segments, segmentWhere, SORT_SPECS, type Dir } from './board-keyset';
 import { CLOSED_STATUSES } from './status-flow';
 
@@ -118,6 +118,11 @@ export async function listBoard(q: BoardQuery, now = new Date()) {
   };
 }
 export type BoardRow = Awaited<ReturnType<typeof listBoard>>['rows'][number];
+
+/** A job's id and number, for downloads that need nothing else of it. */
+export async function findJobRef(number: number): Promise<{ id: string; number: number } | null> {
+  return db().job.findUnique({ where: { number }, select: { id: true, number: true } });
+}
 
 export async function getJobByNumber(number: number) {
   return db().job.findUnique({

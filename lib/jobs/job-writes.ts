@@ -6,10 +6,10 @@
 import { db, Prisma } from '@/lib/db/client';
 import type { JobStatus, Role } from '@/lib/db/generated/enums';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
-import type { Intake } from '@/lib/schemas/job';
+import type { Intake } from '@/lib/jobs/job-schema';
 import type { z } from 'zod';
-import type { jobEditSchema, statusMoveSchema } from '@/lib/schemas/job';
-import { toMotorRecord } from '@/lib/schemas/motor';
+import type { jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
+import { toMotorRecord } from '@/lib/jobs/motor-schema';
 import { isMoveAllowed, STATUS_LABELS } from './status-flow';
 
 type Tx = Prisma.TransactionClient;

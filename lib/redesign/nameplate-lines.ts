@@ -1,5 +1,5 @@
 import type { ProposedNameplate } from '@/lib/engine/redesign/report';
-import { fmt } from '@/lib/format';
+import { fmt } from '@/lib/presentation/format';
 
 const LBF_FT_PER_NM = 0.737562;
 

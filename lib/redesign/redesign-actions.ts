@@ -6,7 +6,7 @@
  */
 import { guardedAction } from '@/lib/auth/guard';
 import { success } from '@/lib/errors/action-result';
-import { approveRedesignSchema, chooseCandidateSchema, redesignRequestFormSchema, requestFromForm } from '@/lib/schemas/redesign';
+import { approveRedesignSchema, chooseCandidateSchema, redesignRequestFormSchema, requestFromForm } from '@/lib/redesign/redesign-schema';
 import { approveRedesign, chooseRedesignCandidate, saveRedesignRequest } from './redesign-writes';
 
 export async function submitRedesignRequest(raw: unknown) {

@@ -9,7 +9,7 @@ import { searchRedesign } from '@/lib/engine/redesign/search';
 import type { RedesignLimits, RedesignOriginal, RedesignRequest, RedesignSearch, StockWire } from '@/lib/engine/redesign/types';
 import type { EngineResult } from '@/lib/engine/result';
 import { getShopLimits } from '@/lib/settings/settings-queries';
-import { getAsFoundSheet, type StoredSheet } from '@/lib/sheets/sheet-queries';
+import { getAsFoundSheet, type StoredSheet } from '@/lib/as-found/as-found-queries';
 import { listStockWires } from '@/lib/stock/stock-queries';
 
 export interface RedesignContext {

@@ -6,7 +6,7 @@ import { db } from '@/lib/db/client';
 import type { ProposedNameplate } from '@/lib/engine/redesign/report';
 import type { WireSet } from '@/lib/engine/redesign/types';
 import type { WindingSpec } from '@/lib/engine/winding-layout';
-import { storedRequestSchema } from '@/lib/schemas/redesign';
+import { storedRequestSchema } from '@/lib/redesign/redesign-schema';
 import type { RedesignRequest } from '@/lib/engine/redesign/types';
 import { isRedesignSnapshot, type RedesignSnapshot } from './snapshot';
 

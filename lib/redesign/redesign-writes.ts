@@ -9,7 +9,7 @@ import { redesignReport } from '@/lib/engine/redesign/report';
 import type { RedesignRequest } from '@/lib/engine/redesign/types';
 import { recordJobEvent } from '@/lib/jobs/job-writes';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
-import { storedRequestSchema } from '@/lib/schemas/redesign';
+import { storedRequestSchema } from '@/lib/redesign/redesign-schema';
 import type { SessionUser } from '@/lib/auth/session-store';
 import { loadRedesignContext, runSearch } from './redesign-context';
 import { REDESIGN_SNAPSHOT_FORMAT, REDESIGN_SNAPSHOT_VERSION, type RedesignSnapshot } from './snapshot';

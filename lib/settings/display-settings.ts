@@ -5,7 +5,7 @@
  */
 import { db } from '@/lib/db/client';
 import { DomainError } from '@/lib/errors/domain-errors';
-import { displaySettings, setDisplaySettings, type DisplaySettings } from '@/lib/format';
+import { displaySettings, setDisplaySettings, type DisplaySettings } from '@/lib/presentation/format';
 import { SHOP_SETTINGS_ID } from './settings-queries';
 
 const REFRESH_MS = 30_000;

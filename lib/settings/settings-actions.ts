@@ -3,8 +3,8 @@
 /** Shop settings: only an administrator may change them ('settings.manage'). */
 import { guardedAction } from '@/lib/auth/guard';
 import { success } from '@/lib/errors/action-result';
-import { displaySettingsSchema } from '@/lib/schemas/display-settings';
-import { limitsFromForm, shopSettingsSchema } from '@/lib/schemas/redesign';
+import { displaySettingsSchema } from './display-settings-schema';
+import { limitsFromForm, shopSettingsSchema } from '@/lib/redesign/redesign-schema';
 import { saveDisplaySettings } from './display-settings';
 import { saveShopLimits } from './settings-writes';
 

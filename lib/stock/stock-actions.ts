@@ -3,7 +3,7 @@
 /** Wire stock actions ('stock.manage': administrators and engineers). */
 import { guardedAction } from '@/lib/auth/guard';
 import { success } from '@/lib/errors/action-result';
-import { removeWireStockSchema, wireStockSchema } from '@/lib/schemas/wire-stock';
+import { removeWireStockSchema, wireStockSchema } from '@/lib/stock/wire-stock-schema';
 import { removeStockWire, upsertStockWire } from './stock-writes';
 
 export async function addStockWire(raw: unknown) {

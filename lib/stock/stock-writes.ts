@@ -2,7 +2,7 @@
 import { db } from '@/lib/db/client';
 import { stockWire } from '@/lib/engine/redesign/from-sheet';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
-import type { WireStockEntry } from '@/lib/schemas/wire-stock';
+import type { WireStockEntry } from '@/lib/stock/wire-stock-schema';
 
 /** Adds a size on hand; the same size and grade again updates its quantity and note. */
 export async function upsertStockWire(entry: WireStockEntry): Promise<{ id: string; label: string; created: boolean }> {

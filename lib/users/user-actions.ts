@@ -2,7 +2,7 @@
 
 import { guardedAction } from '@/lib/auth/guard';
 import { success } from '@/lib/errors/action-result';
-import { userCreateSchema, userUpdateSchema } from '@/lib/schemas/user';
+import { userCreateSchema, userUpdateSchema } from '@/lib/users/user-schema';
 import { createUser, updateUser } from './user-writes';
 
 export async function addUser(raw: unknown) {

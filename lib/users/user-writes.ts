@@ -1,9 +1,10 @@
 /** People in the shop: created, re-roled, deactivated and given new passwords by an administrator. */
 import type { z } from 'zod';
 import { db, Prisma } from '@/lib/db/client';
+import { env, type Env } from '@/lib/env';
 import { hashPassword } from '@/lib/auth/password';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
-import type { userCreateSchema, userUpdateSchema } from '@/lib/schemas/user';
+import type { userCreateSchema, userUpdateSchema } from '@/lib/users/user-schema';
 
 export async function createUser(input: z.output<typeof userCreateSchema>): Promise<{ id: string }> {
   try {
@@ -45,9 +46,9 @@ export async function updateUser(actorId: string, input: z.output<typeof userUpd
  * First start on a real PostgreSQL: no demo people, so an administrator is created from
  * COILWRIGHT_ADMIN_EMAIL / COILWRIGHT_ADMIN_PASSWORD when the user table is empty.
  */
-export async function bootstrapAdmin(env: Record<string, string | undefined> = process.env): Promise<boolean> {
-  const email = env.COILWRIGHT_ADMIN_EMAIL?.trim().toLowerCase();
-  const password = env.COILWRIGHT_ADMIN_PASSWORD;
+export async function bootstrapAdmin(e: Pick<Env, 'COILWRIGHT_ADMIN_EMAIL' | 'COILWRIGHT_ADMIN_PASSWORD'> = env()): Promise<boolean> {
+  const email = e.COILWRIGHT_ADMIN_EMAIL;
+  const password = e.COILWRIGHT_ADMIN_PASSWORD;
   if (!email || !password || (await db().user.count()) > 0) return false;
   await createUser({ name: 'Administrator', email, role: 'ADMIN', password });
   return true;

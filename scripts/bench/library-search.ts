@@ -3,8 +3,8 @@
  * with SQL (generate_series; the sheet JSON is one realistic sheet for every row, the searched columns
  * vary), then times typical searches through the app's own searchLibrary (Prisma, indexed columns).
  */
-import type { BenchSection } from '@/lib/engine/bench-timer';
-import { formatTiming, timeItAsync } from '@/lib/engine/bench-timer';
+import type { BenchSection } from '@/scripts/bench/timer';
+import { formatTiming, timeItAsync } from '@/scripts/bench/timer';
 
 export const LIBRARY_SHEETS = 100_000;
 /** Target for a typical library search on 100,000 sheets. */
@@ -26,9 +26,9 @@ export const librarySection: BenchSection = {
     delete process.env.DATABASE_URL;
     process.env.COILWRIGHT_DATA_DIR = 'memory://';
     process.env.COILWRIGHT_SEED_DEMO = '0';
-    const { prepareDatabase } = await import('@/lib/db/prepare');
+    const { prepareDatabase } = await import('@/lib/setup/prepare');
     const { closeDb, withSqlRunner } = await import('@/lib/db/client');
-    const { searchLibrary } = await import('@/lib/sheets/library-queries');
+    const { searchLibrary } = await import('@/lib/library/library-queries');
     const lines: string[] = [];
     try {
       const t0 = performance.now();

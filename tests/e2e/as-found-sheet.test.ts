@@ -30,7 +30,7 @@ describe('a winder records an as-found sheet', () => {
     await signIn(page, e2e.app.baseUrl, WINDER.email, WINDER.password);
     await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}`);
     await page.getByRole('link', { name: 'As-found data sheet' }).click();
-    await page.waitForURL(/\/sheet$/);
+    await page.waitForURL(/\/as-found$/);
     // A new sheet starts from the nameplate: poles from 960 rpm at 50 Hz (reference §6: 6 poles).
     expect(await field(page, 'Line voltage (V)').inputValue()).toBe('400');
     expect(await field(page, 'Poles').inputValue()).toBe('6');
@@ -75,9 +75,9 @@ describe('a winder records an as-found sheet', () => {
 
   it('prints the saved sheet on a bench-ready page', async () => {
     const page = await e2e.browser.context.newPage();
-    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/sheet`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/as-found`);
     await page.getByRole('link', { name: 'Print view' }).click();
-    await page.waitForURL(/\/sheet\/print$/);
+    await page.waitForURL(/\/as-found\/print$/);
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toContain(`job ${JOB}`);
     const body = (await page.locator('main').textContent()) ?? '';
     expect(body).toContain('Single-layer concentric, half-coiled');
@@ -88,7 +88,7 @@ describe('a winder records an as-found sheet', () => {
 
   it('exports the sheet as JSON and imports it back to the same sheet', async () => {
     const page = await e2e.browser.context.newPage();
-    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/sheet`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/as-found`);
     exported = await download(page, 'Export JSON');
     const file = JSON.parse(exported) as { format: string; version: number; sheet: { winding: { spans: number[] } } };
     expect(file).toMatchObject({ format: 'coilwright.winding-sheet', version: 1 });
@@ -118,7 +118,7 @@ describe('a winder records an as-found sheet', () => {
 
   it('keeps an unsaved change as a draft across a reload, in inches when the winder prefers them', async () => {
     const page = await e2e.browser.context.newPage();
-    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/sheet`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/as-found`);
     await page.getByLabel('inches').check();
     // 130 mm = 5.1181 in (1 in = 25.4 mm exactly).
     await expect.poll(() => field(page, 'Bore (in)').inputValue()).toBe('5.1181');
@@ -138,7 +138,7 @@ describe('a winder records an as-found sheet', () => {
     await e2e.browser.context.clearCookies();
     const page = await e2e.browser.context.newPage();
     await signIn(page, e2e.app.baseUrl, FRONT_DESK.email, FRONT_DESK.password);
-    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/sheet`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/as-found`);
     expect(await field(page, 'Bore (mm)').isDisabled()).toBe(true);
     expect(await page.getByRole('button', { name: 'Save data sheet' }).count()).toBe(0);
     expect(await page.getByText('Your role can read this data sheet').count()).toBe(1);

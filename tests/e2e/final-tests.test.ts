@@ -21,7 +21,7 @@ describe('a winder records the final tests', () => {
     expect(jobNumber).toMatch(/^\d+$/);
     await page.goto(`${e2e.app.baseUrl}/jobs/${jobNumber}`);
     await page.getByRole('link', { name: 'Final tests', exact: true }).click();
-    await page.waitForURL(/\/tests$/);
+    await page.waitForURL(/\/final-tests$/);
     expect(await page.getByRole('heading', { name: '⚠ Test hazards' }).count()).toBe(1);
     expect(await page.getByText('discharge the winding to ground').count()).toBeGreaterThan(0);
 
@@ -80,7 +80,7 @@ describe('the front desk', () => {
     await e2e.browser.context.clearCookies();
     const page = await e2e.browser.context.newPage();
     await signIn(page, e2e.app.baseUrl, FRONT_DESK.email, FRONT_DESK.password);
-    await page.goto(`${e2e.app.baseUrl}/jobs/${jobNumber}/tests`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/${jobNumber}/final-tests`);
     expect(await text(page, 'overall')).toContain('✓ PASS');
     expect(await page.getByRole('button', { name: 'Save test record' }).count()).toBe(0);
 

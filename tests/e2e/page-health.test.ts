@@ -7,8 +7,8 @@ const e2e = useAppInBrowser();
 
 // Demo job 1016 is in winding with a saved as-found sheet; 1026 has shipped.
 const PAGES = [
-  '/jobs', '/jobs?due=overdue&sort=customer', '/jobs/new', '/jobs/1016', '/jobs/1016/sheet', '/jobs/1016/sheet/print', '/jobs/1005/sheet',
-  '/jobs/1016/redesign', '/jobs/1016/tests', '/jobs/1016/job-sheet', '/jobs/1026/job-sheet', '/library', '/library?slots=36&poles=4', '/stock', '/admin/users',
+  '/jobs', '/jobs?due=overdue&sort=customer', '/jobs/new', '/jobs/1016', '/jobs/1016/as-found', '/jobs/1016/as-found/print', '/jobs/1005/as-found',
+  '/jobs/1016/redesign', '/jobs/1016/final-tests', '/jobs/1016/job-sheet', '/jobs/1026/job-sheet', '/library', '/library?slots=36&poles=4', '/stock', '/admin/users',
 ];
 
 describe('every screen', () => {
@@ -31,10 +31,20 @@ describe('every screen', () => {
     await page.close();
   });
 
+  it('sends the old addresses of the as-found sheet and the final tests to their new ones', async () => {
+    const page = await e2e.browser.context.newPage();
+    await signIn(page, e2e.app.baseUrl, ADMIN.email, ADMIN.password);
+    await page.goto(`${e2e.app.baseUrl}/jobs/1016/sheet/print`);
+    expect(new URL(page.url()).pathname).toBe('/jobs/1016/as-found/print');
+    await page.goto(`${e2e.app.baseUrl}/jobs/1016/tests`);
+    expect(new URL(page.url()).pathname).toBe('/jobs/1016/final-tests');
+    await page.close();
+  });
+
   it('sends a signed-out visitor to sign in, and a role without access to the refusal page', async () => {
     await e2e.browser.context.clearCookies();
     const page = await e2e.browser.context.newPage();
-    await page.goto(`${e2e.app.baseUrl}/jobs/1016/sheet`);
+    await page.goto(`${e2e.app.baseUrl}/jobs/1016/as-found`);
     await page.waitForURL(/\/login/);
     await signIn(page, e2e.app.baseUrl, ENGINEER.email, ENGINEER.password);
     await page.goto(`${e2e.app.baseUrl}/admin/users`);

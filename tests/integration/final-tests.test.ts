@@ -1,14 +1,14 @@
 import { beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { db } from '@/lib/db/client';
 import { MESSAGES } from '@/lib/errors/domain-errors';
-import { saveTestRecordAction } from '@/lib/tests-domain/test-record-actions';
-import { listTestRecords } from '@/lib/tests-domain/test-record-queries';
-import { TEST_MESSAGES } from '@/lib/tests-domain/test-record-writes';
-import type { TestRecordFormInput } from '@/lib/schemas/test-record';
+import { saveTestRecordAction } from '@/lib/final-tests/record-actions';
+import { listTestRecords } from '@/lib/final-tests/record-queries';
+import { TEST_MESSAGES } from '@/lib/final-tests/record-writes';
+import type { TestRecordFormInput } from '@/lib/final-tests/test-record-schema';
 import { useTestDatabase } from '../support/test-db';
 import { actAs, signOutTest } from '../support/session';
 import { ENGINEER, FRONT_DESK, WINDER } from '../support/demo-users';
-import { PASSING } from '../unit/tests-domain/fixtures';
+import { PASSING } from '../unit/final-tests/fixtures';
 
 useTestDatabase();
 

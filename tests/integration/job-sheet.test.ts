@@ -6,13 +6,13 @@ import { renderJobSheetPdf } from '@/lib/job-sheet/job-sheet-pdf';
 import { jobSheetPdf } from '@/lib/job-sheet/job-sheet-snapshot';
 import { CLOSING_STATEMENT, SAFETY_NOTICES } from '@/lib/job-sheet/safety-notices';
 import type { ApprovedRedesignSummary } from '@/lib/job-sheet/redesign-summary';
-import { saveTestRecordAction } from '@/lib/tests-domain/test-record-actions';
+import { saveTestRecordAction } from '@/lib/final-tests/record-actions';
 import { GET } from '@/app/jobs/[number]/job-sheet/pdf/route';
 import { useTestDatabase } from '../support/test-db';
 import { actAs, signOutTest } from '../support/session';
 import { FRONT_DESK, WINDER } from '../support/demo-users';
 import { pdfText } from '../support/pdf-text';
-import { PASSING } from '../unit/tests-domain/fixtures';
+import { PASSING } from '../unit/final-tests/fixtures';
 
 // The redesign module is built elsewhere: stand in for its provider to check the sheet prints what it returns.
 const redesign = vi.hoisted(() => ({ forJob: '' as string, summary: null as ApprovedRedesignSummary | null }));

@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { db } from '@/lib/db/client';
 import { moveStatus, saveJobDetails, submitIntake } from '@/lib/jobs/job-actions';
 import { listBoard } from '@/lib/jobs/job-queries';
-import { boardQuerySchema, type IntakeInput } from '@/lib/schemas/job';
+import { boardQuerySchema, type IntakeInput } from '@/lib/jobs/job-schema';
 import { MESSAGES } from '@/lib/errors/domain-errors';
 import { useTestDatabase } from '../support/test-db';
 import { actAs, signOutTest } from '../support/session';

@@ -1,4 +1,4 @@
-import { DEMO_USERS } from '@/lib/db/seed/demo-data';
+import { DEMO_USERS } from '@/lib/setup/demo/demo-data';
 
 const byRole = (role: (typeof DEMO_USERS)[number]['role']) => {
   const u = DEMO_USERS.find((x) => x.role === role);

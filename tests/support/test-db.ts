@@ -5,7 +5,7 @@
  */
 import { afterAll, beforeAll } from 'vitest';
 import { closeDb } from '@/lib/db/client';
-import { prepareDatabase } from '@/lib/db/prepare';
+import { prepareDatabase } from '@/lib/setup/prepare';
 import { createTestDatabase, dropTestDatabase } from './pg-databases';
 
 export const TEST_ENGINE = process.env.INTEGRATION_DB === 'postgres' ? 'postgres' : 'pglite';

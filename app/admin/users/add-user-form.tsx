@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { ROLES, userCreateSchema, type UserCreateInput } from '@/lib/schemas/user';
+import { ROLES, userCreateSchema, type UserCreateInput } from '@/lib/users/user-schema';
 import { ROLE_LABELS } from '@/lib/auth/permissions';
 import { addUser } from '@/lib/users/user-actions';
 import { applyFieldErrors } from '@/lib/errors/form-errors';

@@ -1,5 +1,5 @@
 import { requirePageUser } from '@/lib/auth/guard';
-import { db } from '@/lib/db/client';
+import { listUsers } from '@/lib/users/user-queries';
 import { AddUserForm } from './add-user-form';
 import { UserRow } from './user-row';
 
@@ -7,7 +7,7 @@ export const metadata = { title: 'People' };
 
 export default async function UsersPage() {
   const me = await requirePageUser('settings.manage');
-  const users = await db().user.findMany({ orderBy: [{ active: 'desc' }, { name: 'asc' }], select: { id: true, name: true, email: true, role: true, active: true } });
+  const users = await listUsers();
   return (
     <>
       <h1>People who sign in</h1>

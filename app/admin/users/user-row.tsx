@@ -4,7 +4,7 @@ import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import type { Role } from '@/lib/db/generated/enums';
 import { ROLE_LABELS } from '@/lib/auth/permissions';
-import { ROLES } from '@/lib/schemas/user';
+import { ROLES } from '@/lib/users/user-schema';
 import { changeUser } from '@/lib/users/user-actions';
 
 interface Person { id: string; name: string; email: string; role: Role; active: boolean }

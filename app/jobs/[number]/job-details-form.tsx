@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { jobEditSchema, PRIORITIES, type JobEditInput } from '@/lib/schemas/job';
+import { jobEditSchema, PRIORITIES, type JobEditInput } from '@/lib/jobs/job-schema';
 import { saveJobDetails } from '@/lib/jobs/job-actions';
 import { FIX_FIELDS_SUMMARY, showActionFailure } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';

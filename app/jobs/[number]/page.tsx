@@ -1,17 +1,16 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { getJobByNumber, listStaff, motorHistory } from '@/lib/jobs/job-queries';
 import { MAIN_PATH, STATUS_LABELS, allowedMoves, moveLabel } from '@/lib/jobs/status-flow';
-import { CONNECTION_LABELS } from '@/lib/schemas/motor';
-import { fmt } from '@/lib/format';
+import { CONNECTION_LABELS } from '@/lib/jobs/motor-schema';
+import { fmt } from '@/lib/presentation/format';
 import { polesFromSpeed } from '@/lib/engine/speed';
 import { getApprovedRedesign } from '@/lib/redesign/redesign-queries';
 import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
 import { PhotoUpload } from './photo-upload';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { loadJobRoute } from '@/lib/jobs/job-route';
+import { jobRoutes } from '@/lib/routes';
 
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -19,11 +18,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 }
 
 export default async function JobPage({ params }: { params: Promise<{ number: string }> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await getJobByNumber(parsed.data.number);
-  if (!job) notFound();
+  const { user, job } = await loadJobRoute(params, getJobByNumber);
   const [staff, history, redesign] = await Promise.all([listStaff(), motorHistory(job.motorId, job.id), getApprovedRedesign(job.id)]);
   const m = job.motor;
   const poles = m.frequencyHz && m.speedRpm ? polesFromSpeed(m.frequencyHz, m.speedRpm) : null;
@@ -56,9 +51,9 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
       <nav className="card no-print" aria-label="Workshop records">
         <h2>Workshop records</h2>
         <ul className="row" style={{ listStyle: 'none', padding: 0, gap: '1.5rem' }}>
-          <li><Link href={`/jobs/${job.number}/sheet`}>As-found data sheet</Link></li>
+          <li><Link href={jobRoutes(job.number).asFound}>As-found data sheet</Link></li>
           <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>{redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}</li>
-          <li><Link href={`/jobs/${job.number}/tests`}>Final tests</Link></li>
+          <li><Link href={jobRoutes(job.number).finalTests}>Final tests</Link></li>
           <li><Link href={`/jobs/${job.number}/job-sheet`}>Job sheet</Link></li>
           <li><a className="btn secondary" href={`/jobs/${job.number}/job-sheet/pdf`} download>Download job sheet (PDF)</a></li>
         </ul>

@@ -4,7 +4,7 @@ import { useRef, useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { useForm, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { intakeSchema, PRIORITIES, type Intake, type IntakeInput } from '@/lib/schemas/job';
+import { intakeSchema, PRIORITIES, type Intake, type IntakeInput } from '@/lib/jobs/job-schema';
 import { lookupSerial, submitIntake } from '@/lib/jobs/job-actions';
 import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';

@@ -2,7 +2,7 @@
  * Builds the search inputs from what the shop stores: the as-found data sheet becomes a RedesignOriginal,
  * a stock row becomes a StockWire with its looked-up diameters. Defaults for the limits live here too.
  */
-import type { WindingSheet } from '@/lib/schemas/winding-sheet';
+import type { WindingSheetData as WindingSheet } from '../winding-sheet';
 import { windingInputFromSheet } from '../analyse-sheet';
 import type { EnamelGrade } from '../enamel-build';
 import { fail, ok, type EngineResult } from '../result';

@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { closedFormFactors } from '@/lib/engine/closed-form';
-import { makeWindingSheetExport, windingSheetSchema } from '@/lib/schemas/winding-sheet';
+import { makeWindingSheetExport, windingSheetSchema } from '@/lib/as-found/winding-sheet-schema';
 import { EXAMPLE_A_SHEET } from '../engine/winding-fixtures';
 
 const TSX = join(process.cwd(), 'node_modules/.bin/tsx');

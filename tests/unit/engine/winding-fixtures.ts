@@ -2,7 +2,7 @@
 import type { CoreGeometry } from '@/lib/engine/flux';
 import type { EngineResult } from '@/lib/engine/result';
 import { buildStandardLayout, type SlotTable, type WindingSpec } from '@/lib/engine/winding-layout';
-import type { WindingSheet } from '@/lib/schemas/winding-sheet';
+import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 
 export function value<T>(r: EngineResult<T>): T {
   if (!r.ok) throw new Error(`expected ok, got ${r.error.code} at ${r.error.field ?? '-'}: ${r.error.message}`);

@@ -9,7 +9,7 @@ import type { EngineResult } from '@/lib/engine/result';
 import { harmonicWindingFactors, PHASES } from '@/lib/engine/slot-star';
 import { supplyScaling } from '@/lib/engine/supply-scaling';
 import { buildStandardLayout, type CoilSide, type WindingSpec } from '@/lib/engine/winding-layout';
-import type { WindingSheet } from '@/lib/schemas/winding-sheet';
+import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { BALANCED_COMBINATIONS, EXAMPLE_A_CORE, INTEGRAL_COMBINATIONS, lap, layoutOf, singleLayer, value } from './winding-fixtures';
 
 /** A balanced double-layer lap winding with any span from 1 to S − 1. */

@@ -1,16 +1,10 @@
 import { z } from 'zod';
-import { currentUser } from '@/lib/auth/guard';
-import { can } from '@/lib/auth/permissions';
-import { db } from '@/lib/db/client';
+import { guardedRoute } from '@/lib/auth/route-guard';
+import { getAttachment } from '@/lib/jobs/attachments';
 
 /** Serves a stored photo to a signed-in user whose role may read jobs. */
-export async function GET(_req: Request, { params }: { params: Promise<{ id: string }> }): Promise<Response> {
-  const user = await currentUser();
-  if (!user) return new Response('Sign in first.', { status: 401 });
-  if (!can(user.role, 'job.read')) return new Response('Not allowed.', { status: 403 });
-  const parsed = z.object({ id: z.uuid() }).safeParse(await params);
-  if (!parsed.success) return new Response('Not found.', { status: 404 });
-  const a = await db().attachment.findUnique({ where: { id: parsed.data.id }, select: { data: true, mimeType: true, filename: true } });
+export const GET = guardedRoute('job.read', z.object({ id: z.uuid() }), async (_req, _user, params) => {
+  const a = await getAttachment(params.id);
   if (!a) return new Response('Not found.', { status: 404 });
   return new Response(new Uint8Array(a.data), {
     headers: {
@@ -20,4 +14,4 @@ export async function GET(_req: Request, { params }: { params: Promise<{ id: str
       'X-Content-Type-Options': 'nosniff',
     },
   });
-}
+});

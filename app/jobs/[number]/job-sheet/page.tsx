@@ -1,13 +1,11 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
-import { requirePageUser } from '@/lib/auth/guard';
-import { db } from '@/lib/db/client';
+import { shippedSnapshotInfo } from '@/lib/job-sheet/job-sheet-snapshot';
 import { loadJobSheet, type Row } from '@/lib/job-sheet/job-sheet-data';
-import { OverallVerdict, SectionVerdict } from '../tests/judgement-view';
+import { OverallVerdict, SectionVerdict } from '../final-tests/judgement-view';
 import { PrintButton } from './print-button';
-import '../tests/tests.css';
+import '../final-tests/final-tests.css';
 import './job-sheet.css';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { loadJobRoute } from '@/lib/jobs/job-route';
 
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -29,12 +27,8 @@ function Rows({ rows }: { rows: Row[] }) {
  * For a shipped job, the stored PDF is what was handed over; this page says so and links to it.
  */
 export default async function JobSheetPage({ params }: { params: Promise<{ number: string }> }) {
-  await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const d = await loadJobSheet(parsed.data.number);
-  if (!d) notFound();
-  const snapshot = d.job.shipped ? await db().jobSheetSnapshot.findUnique({ where: { jobId: d.job.id }, select: { revision: true, generatedAt: true } }) : null;
+  const { job: d } = await loadJobRoute(params, loadJobSheet);
+  const snapshot = d.job.shipped ? await shippedSnapshotInfo(d.job.id) : null;
   const pdfHref = `/jobs/${d.job.number}/job-sheet/pdf`;
   const t = d.tests;
 

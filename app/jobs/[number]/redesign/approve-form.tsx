@@ -5,7 +5,7 @@ import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { approveRedesignSchema } from '@/lib/schemas/redesign';
+import { approveRedesignSchema } from '@/lib/redesign/redesign-schema';
 import { approveRedesignRevision } from '@/lib/redesign/redesign-actions';
 import { applyFieldErrors } from '@/lib/errors/form-errors';
 import { Field, describe } from '@/app/_components/field';

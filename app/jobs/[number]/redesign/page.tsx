@@ -1,7 +1,5 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
 import { getJobByNumber } from '@/lib/jobs/job-queries';
 import { redesignReport } from '@/lib/engine/redesign/report';
@@ -9,14 +7,15 @@ import type { RedesignRequest } from '@/lib/engine/redesign/types';
 import { loadRedesignContext, runSearch, type RedesignContext } from '@/lib/redesign/redesign-context';
 import { listRedesigns, type RedesignRevision } from '@/lib/redesign/redesign-queries';
 import { REDESIGN_MESSAGES } from '@/lib/redesign/redesign-writes';
-import { limitsToForm, type RedesignRequestFormInput } from '@/lib/schemas/redesign';
-import { fmt } from '@/lib/format';
+import { limitsToForm, type RedesignRequestFormInput } from '@/lib/redesign/redesign-schema';
+import { fmt } from '@/lib/presentation/format';
 import { RequestForm } from './request-form';
 import { CandidateTable } from './candidate-table';
 import { Cautions, ComparisonTable, NameplateProposal } from './comparison';
 import { ApproveForm } from './approve-form';
 import './redesign.css';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { loadJobRoute } from '@/lib/jobs/job-route';
+import { jobRoutes } from '@/lib/routes';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
@@ -58,11 +57,7 @@ function RevisionList({ revisions, selected, number }: { revisions: RedesignRevi
 }
 
 export default async function RedesignPage({ params, searchParams }: { params: Promise<{ number: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  const user = await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await getJobByNumber(parsed.data.number);
-  if (!job) notFound();
+  const { user, job } = await loadJobRoute(params, getJobByNumber);
   const { rev } = searchSchema.parse(await searchParams);
   const [revisions, ctx] = await Promise.all([listRedesigns(job.id), loadRedesignContext(job.id)]);
   const latest = revisions[0];
@@ -99,7 +94,7 @@ export default async function RedesignPage({ params, searchParams }: { params: P
       </section>
 
       {!ctx.ok ? (
-        <p className="notice bad">{ctx.reason} <Link href={`/jobs/${job.number}/sheet`}>Open the as-found sheet</Link></p>
+        <p className="notice bad">{ctx.reason} <Link href={jobRoutes(job.number).asFound}>Open the as-found sheet</Link></p>
       ) : (
         <section className="card" aria-labelledby="asfound-h">
           <h2 id="asfound-h">As found</h2>

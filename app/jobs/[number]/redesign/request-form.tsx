@@ -4,7 +4,7 @@ import { useState, useTransition } from 'react';
 import { useRouter } from 'next/navigation';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { redesignRequestFormSchema, type RedesignRequestForm, type RedesignRequestFormInput } from '@/lib/schemas/redesign';
+import { redesignRequestFormSchema, type RedesignRequestForm, type RedesignRequestFormInput } from '@/lib/redesign/redesign-schema';
 import { submitRedesignRequest } from '@/lib/redesign/redesign-actions';
 import { applyFieldErrors, FIX_FIELDS_SUMMARY } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';

@@ -1,20 +1,14 @@
-import { currentUser } from '@/lib/auth/guard';
-import { can } from '@/lib/auth/permissions';
+import { guardedRoute } from '@/lib/auth/route-guard';
 import { jobSheetPdf } from '@/lib/job-sheet/job-sheet-snapshot';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
 
 
 /**
  * The job sheet PDF for a signed-in user whose role may read jobs: a download by default, shown in the
  * browser with ?inline=1. Shipped jobs get the copy stored when they shipped.
  */
-export async function GET(req: Request, { params }: { params: Promise<{ number: string }> }): Promise<Response> {
-  const user = await currentUser();
-  if (!user) return new Response('Sign in first.', { status: 401 });
-  if (!can(user.role, 'job.read')) return new Response('Not allowed.', { status: 403 });
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) return new Response('Not found.', { status: 404 });
-  const sheet = await jobSheetPdf(parsed.data.number);
+export const GET = guardedRoute('job.read', jobNumberParamsSchema, async (req, _user, params) => {
+  const sheet = await jobSheetPdf(params.number);
   if (!sheet) return new Response('Not found.', { status: 404 });
   const inline = new URL(req.url).searchParams.get('inline') === '1';
   return new Response(new Uint8Array(sheet.pdf), {
@@ -27,4 +21,4 @@ export async function GET(req: Request, { params }: { params: Promise<{ number: 
       'X-Job-Sheet-Source': sheet.snapshot ? 'shipped-snapshot' : 'generated',
     },
   });
-}
+});

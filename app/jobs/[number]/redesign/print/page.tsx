@@ -1,15 +1,13 @@
 import Link from 'next/link';
-import { notFound } from 'next/navigation';
 import { z } from 'zod';
-import { requirePageUser } from '@/lib/auth/guard';
 import { getJobByNumber } from '@/lib/jobs/job-queries';
 import { listRedesigns } from '@/lib/redesign/redesign-queries';
-import { fmt } from '@/lib/format';
+import { fmt } from '@/lib/presentation/format';
 import { mmToInches } from '@/lib/engine/units';
 import { Cautions, ComparisonTable, NameplateProposal } from '../comparison';
 import { PrintButton } from '../print-button';
 import '../redesign.css';
-import { jobNumberParamsSchema } from '@/lib/schemas/job';
+import { loadJobRoute } from '@/lib/jobs/job-route';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
@@ -19,11 +17,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 
 /** The winder's sheet: the approved winding (current revision, or ?rev=N of an approved one), printable. */
 export default async function RedesignPrintPage({ params, searchParams }: { params: Promise<{ number: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> }) {
-  await requirePageUser('job.read');
-  const parsed = jobNumberParamsSchema.safeParse(await params);
-  if (!parsed.success) notFound();
-  const job = await getJobByNumber(parsed.data.number);
-  if (!job) notFound();
+  const { job } = await loadJobRoute(params, getJobByNumber);
   const { rev } = searchSchema.parse(await searchParams);
   const approved = (await listRedesigns(job.id)).filter((r) => r.status === 'APPROVED');
   const r = rev ? approved.find((x) => x.revision === rev) : approved[0];

@@ -1,0 +1,18 @@
+/**
+ * The app's addresses for one job's records, in one place, so a renamed route is one edit (the old
+ * addresses /sheet and /tests redirect here from next.config.js).
+ */
+export const jobRoutes = (jobNumber: number | string) => {
+  const base = `/jobs/${jobNumber}`;
+  return {
+    job: base,
+    asFound: `${base}/as-found`,
+    asFoundPrint: `${base}/as-found/print`,
+    asFoundExport: `${base}/as-found/export`,
+    finalTests: `${base}/final-tests`,
+    redesign: `${base}/redesign`,
+    redesignPrint: `${base}/redesign/print`,
+    jobSheet: `${base}/job-sheet`,
+    jobSheetPdf: `${base}/job-sheet/pdf`,
+  };
+};
