@@ -157,7 +157,7 @@ describe('board search reaches every status', () => {
 
 describe('the customer typeahead route', () => {
   beforeEach(() => signOutTest());
-  const call = (q: string) => customersRoute(new Request(`http://x/api/customers?q=${encodeURIComponent(q)}`));
+  const call = (q: string) => customersRoute(new Request(`http://x/api/customers?q=${encodeURIComponent(q)}`), { params: Promise.resolve({}) });
 
   it('refuses a visitor without a session before reading anything', async () => {
     expect((await call('pagetest')).status).toBe(401);
