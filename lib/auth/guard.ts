@@ -12,9 +12,10 @@ import { can, type Permission } from './permissions';
 import { SESSION_COOKIE, findSessionUser, type SessionUser } from './session-store';
 
 export async function currentUser(): Promise<SessionUser | null> {
-  // Every page, route and action passes here first: keep the shop's date settings fresh (cheap when fresh).
-  await ensureDisplaySettings();
   const jar = await cookies();
+  // Every page, route and action passes here first: keep the shop's date settings fresh (cheap when fresh).
+  // After cookies(): that call marks the page dynamic, so nothing here runs while `next build` prerenders.
+  await ensureDisplaySettings();
   return findSessionUser(jar.get(SESSION_COOKIE)?.value);
 }
 

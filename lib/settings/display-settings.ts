@@ -56,6 +56,11 @@ export async function saveDisplaySettings(userId: string, version: number, s: { 
     const r = await tx.shopDisplaySettings.updateMany({ where: { id: SHOP_SETTINGS_ID, version }, data: { ...data, version: { increment: 1 } } });
     if (r.count === 0) throw new DomainError('stale', DISPLAY_STALE);
     return version + 1;
+  }).catch((err: unknown) => {
+    if (err instanceof DomainError) throw err;
+    // Two first saves racing: the second hits the primary key, which is the same stale situation.
+    if (err instanceof Error && /Unique constraint|unique/i.test(err.message)) throw new DomainError('stale', DISPLAY_STALE);
+    throw err;
   });
   await refreshDisplaySettings();
   return { version: next };

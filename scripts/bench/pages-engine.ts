@@ -229,6 +229,37 @@ async function deepCursor(position: number): Promise<string> {
   return `${row.number}~${row.promisedAt!.toISOString()}`;
 }
 
+/**
+ * The statements the board sent before position paging (main before issue 13): an exact count of every
+ * match, then an OFFSET page, sorted by customer through a join. Replayed beside the new ones so the SQL
+ * before/after comes from the same run and data.
+ */
+const OPEN = ['RECEIVED', 'INSPECTION', 'QUOTE_SENT', 'CUSTOMER_APPROVED', 'WINDING', 'TESTING', 'READY', 'ON_HOLD'] as const;
+const legacyCase = (name: string, opts: { status?: (typeof OPEN)[number]; customer?: boolean; page?: number }): Case => ({
+  name,
+  path: '',
+  data: async () => {
+    const where = { AND: [{ status: { in: opts.status ? [opts.status] : [...OPEN] } }] };
+    await findSessionUser(token);
+    await db().job.count({ where });
+    await db().job.findMany({
+      where,
+      orderBy: opts.customer ? [{ customer: { company: 'asc' } }, { number: 'asc' }] : [{ promisedAt: { sort: 'asc', nulls: 'last' } }, { number: 'asc' }],
+      skip: ((opts.page ?? 1) - 1) * 25,
+      take: 25,
+      select: { id: true, number: true, status: true, customer: { select: { id: true, company: true } }, motor: { select: { manufacturer: true, serial: true } }, assignee: { select: { name: true } } },
+    });
+    await db().customer.findMany({ orderBy: { company: 'asc' }, select: { id: true, company: true } });
+    await listStaff();
+  },
+});
+const legacyCases = (): Case[] => [
+  legacyCase('before: open jobs, page 1 (count + offset + customer list)', {}),
+  legacyCase('before: sorted by customer (join)', { customer: true }),
+  legacyCase('before: filter by status (Winding)', { status: 'WINDING' }),
+  legacyCase('before: page 400 (offset 9,975)', { page: 400 }),
+];
+
 interface Floor { p50: number; rows: number; statements: number }
 async function floors(cases: Case[]): Promise<Map<string, Floor>> {
   const captured = new Map<string, Statement[]>();
@@ -279,8 +310,10 @@ async function measure(size: number, cases: Case[]): Promise<Server> {
   return s;
 }
 async function attachFloors(size: number, cases: Case[]): Promise<void> {
-  const f = await floors(cases);
+  const legacy = size === SIZES.small || size === SIZES.large ? legacyCases().slice(0, 2) : legacyCases();
+  const f = await floors([...cases, ...legacy]);
   for (const r of rows) if (r.size === size && f.has(r.name)) r.floor = f.get(r.name);
+  for (const c of legacy) rows.push({ name: c.name, size, p50: Number.NaN, p95: Number.NaN, floor: f.get(c.name) });
 }
 
 const results: Record<string, unknown> = { engine, sizes: SIZES, sheets: SHEETS };
