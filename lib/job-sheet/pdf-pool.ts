@@ -44,7 +44,8 @@ function startWorker(): Worker {
   const resourceLimits = { maxOldGenerationSizeMb: WORKER_HEAP_MB };
   if (import.meta.url.endsWith('.ts')) {
     // Running from the TypeScript sources (tests, scripts): load the worker through tsx's loader.
-    const entry = new URL('./pdf-worker.ts', import.meta.url).href;
+    // (A plain string, not `new URL(…)`: the bundler would take a second `new URL` of the worker for an asset.)
+    const entry = import.meta.url.replace(/pdf-pool\.ts$/, 'pdf-worker.ts');
     const boot = `import('tsx/esm/api').then((tsx) => { tsx.register(); return import(${JSON.stringify(entry)}); });`;
     return new Worker(boot, { eval: true, resourceLimits });
   }
