@@ -3,7 +3,8 @@
  * server at 127.0.0.1:5432) and for the embedded database, one child process each
  * (scripts/bench/pages-engine.ts) fills 5,000 → 50,000 → 200,000 jobs and 100,000 sheets, starts the
  * production server, and times each page beside its SQL floor (the same statements replayed straight to
- * the database). Prints every figure with the goal beside it. `--quick` uses smaller tables.
+ * the database). Prints every figure with the goal beside it. `--quick` uses smaller tables; `--engine
+ * postgres|embedded` runs one.
  * Needs a production build (`npm start` builds one when the sources are newer).
  */
 import { spawn } from 'node:child_process';
@@ -11,7 +12,7 @@ import pg from 'pg';
 import { fmt, numberFormat } from '@/lib/presentation/format';
 
 const quick = process.argv.includes('--quick');
-const passThrough = process.argv.slice(2);
+const passThrough = process.argv.slice(2).filter((a, i, all) => a !== '--engine' && all[i - 1] !== '--engine');
 const t0 = performance.now();
 
 interface Timing { p50: number; p95: number }
@@ -92,7 +93,8 @@ function formattingLine(): string {
 
 process.stdout.write(`\nPage-level bench${quick ? ' (--quick: smaller tables)' : ''}\n`);
 process.stdout.write(`${formattingLine()}\n`);
-const engines = (await postgresAvailable()) ? ['postgres', 'embedded'] : ['embedded'];
+const only = process.argv.includes('--engine') ? process.argv[process.argv.indexOf('--engine') + 1] : undefined;
+const engines = ((await postgresAvailable()) ? ['postgres', 'embedded'] : ['embedded']).filter((e) => !only || e === only);
 if (engines.length === 1) process.stdout.write('PostgreSQL not reachable (TEST_DATABASE_URL or 127.0.0.1:5432): embedded database only.\n');
 for (const e of engines) process.stdout.write(`${report(await runEngine(e)).join('\n')}\n`);
 process.stdout.write(`\npage-level bench took ${((performance.now() - t0) / 60_000).toFixed(1)} min\n`);

@@ -188,9 +188,9 @@ async function get(s: Server, path: string): Promise<number> {
   return ms;
 }
 
-const pct = (xs: number[], p: number) => {
+const pct = (xs: number[], p: number): number => {
   const s = [...xs].sort((a, b) => a - b);
-  return s[Math.min(s.length - 1, Math.floor((p / 100) * s.length))]!;
+  return s[Math.min(s.length - 1, Math.floor((p / 100) * s.length))] ?? Number.NaN;
 };
 
 async function timePage(s: Server, path: string, runs = RUNS): Promise<{ p50: number; p95: number }> {
@@ -385,6 +385,7 @@ await pdfLoop;
 results.pdfContention = { jobsAlone, jobsDuringPdf, deniedDuringPdf, pdfsDuring: pdfCount };
 
 // Job sheet PDFs with 10 clients: cold (each a new record issue) and cached (the same again).
+let failures = 0;
 async function tenClients(offset: number): Promise<{ p50: number; perSecond: number }> {
   const times: number[] = [];
   const t0 = performance.now();
@@ -394,12 +395,14 @@ async function tenClients(offset: number): Promise<{ p50: number; perSecond: num
       const res = await fetch(`${server.base}/jobs/${openJobs[offset + c * 3 + k]}/job-sheet/pdf`, { headers: { cookie } });
       await res.arrayBuffer();
       if (res.status === 200) times.push(performance.now() - t);
+      else failures++;
     }
   }));
   return { p50: pct(times, 50), perSecond: times.length / ((performance.now() - t0) / 1000) };
 }
 results.pdfTenCold = await tenClients(200);
 results.pdfTenCached = await tenClients(200);
+if (failures > 0 || pdfCount === 0) throw new Error(`job sheet PDFs failed (${failures} refused or failed, ${pdfCount} while browsing)`);
 
 // RSS under 10 mixed clients (board views, library, job pages, PDFs) for 20 s.
 const mixed = ['/jobs', '/jobs?sort=customer', '/jobs?status=WINDING', '/library?q=ightwe&unit=mm', '/jobs/1001', `/jobs/1002/job-sheet/pdf`, '/jobs?q=SN-0000777'];
