@@ -94,7 +94,8 @@ function formattingLine(): string {
 process.stdout.write(`\nPage-level bench${quick ? ' (--quick: smaller tables)' : ''}\n`);
 process.stdout.write(`${formattingLine()}\n`);
 const only = process.argv.includes('--engine') ? process.argv[process.argv.indexOf('--engine') + 1] : undefined;
-const engines = ((await postgresAvailable()) ? ['postgres', 'embedded'] : ['embedded']).filter((e) => !only || e === only);
-if (engines.length === 1) process.stdout.write('PostgreSQL not reachable (TEST_DATABASE_URL or 127.0.0.1:5432): embedded database only.\n');
+const pgUp = await postgresAvailable();
+const engines = (pgUp ? ['postgres', 'embedded'] : ['embedded']).filter((e) => !only || e === only);
+if (!pgUp) process.stdout.write('PostgreSQL not reachable (TEST_DATABASE_URL or 127.0.0.1:5432): embedded database only.\n');
 for (const e of engines) process.stdout.write(`${report(await runEngine(e)).join('\n')}\n`);
 process.stdout.write(`\npage-level bench took ${((performance.now() - t0) / 60_000).toFixed(1)} min\n`);

@@ -107,7 +107,7 @@ async function fillSheets(n: number): Promise<void> {
   await sql(`INSERT INTO "WindingSheet" (id, "jobId", data, slots, poles, "boreMm", "coreLengthMm", "lineVoltageV", "frequencyHz", "outputKw", manufacturer, model, "updatedAt")
     SELECT 'bench-s-' || g, 'bench-j-' || g, $1::jsonb,
       (ARRAY[24,36,36,48,48,54,60,72,72,96])[1 + g % 10], (ARRAY[2,4,4,4,6,6,8])[1 + (g / 10) % 7],
-      60 + (g * 7919 % 3400) / 10.0, 50 + (g * 104729 % 4500) / 10.0,
+      60 + (g::bigint * 7919 % 3400) / 10.0, 50 + (g::bigint * 104729 % 4500) / 10.0,
       (ARRAY[230,400,415,460,575,690])[1 + g % 6], (ARRAY[50,60])[1 + g % 2], 0.37 + (g % 2000) / 10.0,
       (ARRAY['Aldermoor','Brightwell','Corrick','Dunstable Electric','Everholt','Farrow & Lane'])[1 + g % 6], 'M-' || (g % 997),
       timestamp '2026-11-30' - (g || ' minutes')::interval
