@@ -9,9 +9,12 @@ export const jobRoutes = (jobNumber: number | string) => {
     asFound: `${base}/as-found`,
     asFoundPrint: `${base}/as-found/print`,
     asFoundExport: `${base}/as-found/export`,
+    coreTest: `${base}/core-test`,
     finalTests: `${base}/final-tests`,
     redesign: `${base}/redesign`,
     redesignPrint: `${base}/redesign/print`,
+    benchPack: `${base}/redesign/bench-pack`,
+    benchPackPdf: `${base}/redesign/bench-pack/pdf`,
     jobSheet: `${base}/job-sheet`,
     jobSheetPdf: `${base}/job-sheet/pdf`,
   };

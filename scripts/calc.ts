@@ -4,10 +4,13 @@
  */
 import { readFileSync } from 'node:fs';
 import { analyseSheet, windingInputFromSheet } from '@/lib/engine/analyse-sheet';
+import { sheetFindings } from '@/lib/engine/sheet-findings';
 import { analyseWinding } from '@/lib/engine/analyse-winding';
 import { CALC_USAGE, parseCalcArgs } from '@/lib/cli/args';
 import { formatSheet } from '@/lib/cli/format-sheet';
 import { formatWinding } from '@/lib/cli/format-winding';
+import { formatRescale } from '@/lib/cli/format-rescale';
+import { supplyScaling } from '@/lib/engine/supply-scaling';
 import type { EngineError } from '@/lib/engine/result';
 import { parseWindingSheetExport, windingSheetSchema } from '@/lib/as-found/winding-sheet-schema';
 
@@ -46,6 +49,12 @@ function main(argv: readonly string[]): void {
     process.stdout.write(cmd.json ? `${JSON.stringify(r.value, null, 2)}\n` : `${formatWinding(cmd.input.winding, r.value, cmd.orders)}\n`);
     return;
   }
+  if (cmd.kind === 'rescale') {
+    const r = supplyScaling(cmd.old, cmd.next);
+    if (!r.ok) die(engineMessage(r.error));
+    process.stdout.write(cmd.json ? `${JSON.stringify(r.value, null, 2)}\n` : `${formatRescale(cmd.old, cmd.next, r.value)}\n`);
+    return;
+  }
   const data = readJson(cmd.file);
   // An export file carries the wrapper; a bare sheet object is accepted too.
   const isExport = typeof data === 'object' && data !== null && 'format' in data;
@@ -61,7 +70,8 @@ function main(argv: readonly string[]): void {
   }
   const r = analyseSheet(sheet);
   if (!r.ok) die(`${cmd.file}: ${engineMessage(r.error)}`);
-  process.stdout.write(cmd.json ? `${JSON.stringify(r.value, null, 2)}\n` : `${formatSheet(windingInputFromSheet(sheet).winding, r.value, cmd.orders)}\n`);
+  const findings = sheetFindings(sheet, r.value);
+  process.stdout.write(cmd.json ? `${JSON.stringify({ ...r.value, findings }, null, 2)}\n` : `${formatSheet(windingInputFromSheet(sheet).winding, r.value, findings, cmd.orders)}\n`);
 }
 
 main(process.argv.slice(2));

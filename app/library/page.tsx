@@ -10,6 +10,7 @@ import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { UseForJob } from './use-for-job';
 import '../jobs/[number]/as-found/sheet.css';
 import { jobRoutes } from '@/lib/routes';
+import { spansLabel, layoutLabel } from '@/lib/engine/notation';
 
 export const metadata = { title: 'Winding library' };
 
@@ -43,8 +44,8 @@ const COMPARE_ROWS: [string, (s: WindingSheet, u: LengthUnit) => string][] = [
   ['Outside diameter', (s, u) => `${mmToLength(s.core.outsideDiameterMm, u)} ${u}`],
   ['Slot depth × widths', (s, u) => `${mmToLength(s.core.slotDepthMm, u)} × ${mmToLength(s.core.slotWidthTopMm, u)}/${mmToLength(s.core.slotWidthBottomMm, u)} ${u}`],
   ['Tooth width', (s, u) => `${mmToLength(s.core.toothWidthMm, u)} ${u}`],
-  ['Layout', (s) => `${s.winding.layers === 2 ? 'double' : 'single'}-layer ${s.winding.style}`],
-  ['Spans', (s) => s.winding.spans.map((y) => `1–${y + 1}`).join(', ')],
+  ['Layout', (s) => `${layoutLabel(s.winding)}`],
+  ['Spans', (s) => spansLabel(s.winding.spans)],
   ['Turns per coil', (s) => s.winding.turnsPerCoil.join(' / ')],
   ['Circuits, connection', (s) => `${s.winding.parallelPaths} · ${s.winding.connection}`],
   ['Wires in hand', (s) => s.wires.map((w) => `${w.count} × ${w.standard === 'awg' ? `AWG ${w.size}` : `${w.size} mm`}`).join(' + ')],

@@ -11,13 +11,16 @@ import { DisplaySettingsForm } from './display-settings-form';
 import { listStock } from '@/lib/stock/stock-queries';
 import { AddStockForm, RemoveStockButton } from './stock-forms';
 import { SettingsForm } from './settings-form';
+import { BenchSettingsForm } from './bench-settings-form';
+import { getBenchPackSettings } from '@/lib/bench-pack/bench-settings';
+import { mm2ToCircularMils } from '@/lib/engine/units';
 
 export const metadata = { title: 'Wire stock and shop limits' };
 
 /** The wire sizes on hand (the redesign search picks only from these) and the shop's redesign limits. */
 export default async function StockPage() {
   const user = await requirePageUser('stock.manage');
-  const [stock, settings, display] = await Promise.all([listStock(), getShopLimits(), readDisplaySettings()]);
+  const [stock, settings, bench, display] = await Promise.all([listStock(), getShopLimits(), getBenchPackSettings(), readDisplaySettings()]);
   const dateFormat = DATE_FORMATS.find((f) => f === display.dateFormat) ?? 'iso';
   const l = settings.limits;
   const mayEditSettings = can(user.role, 'settings.manage');
@@ -40,7 +43,7 @@ export default async function StockPage() {
                   <td>{s.enamelGrade}{s.standard === 'awg' ? ` (${['single', 'heavy', 'triple'][s.enamelGrade - 1]} build)` : ''}</td>
                   <td className="num">{s.wire ? `${s.wire.bareMm.toFixed(3)} mm (${mmToInches(s.wire.bareMm).toFixed(4)} in)` : '—'}</td>
                   <td className="num">{s.wire ? `${s.wire.overallMm.toFixed(3)} mm` : '—'}</td>
-                  <td className="num">{s.wire ? `${s.wire.areaMm2.toFixed(4)} mm² (${fmt.num(s.wire.areaMm2 * 1973.525, 0)} CM)` : '—'}</td>
+                  <td className="num">{s.wire ? `${s.wire.areaMm2.toFixed(4)} mm² (${fmt.num(mm2ToCircularMils(s.wire.areaMm2), 0)} CM)` : '—'}</td>
                   <td className="num">{fmt.num(s.quantityKg, 1, 'kg')}</td>
                   <td>{s.note ?? ''}</td>
                   <td><RemoveStockButton id={s.id} label={s.wire?.label ?? s.size} /></td>
@@ -67,6 +70,22 @@ export default async function StockPage() {
             <dt>Slot fill</dt><dd>at most {(l.slotFillMax * 100).toFixed(1)} % of the gross slot area</dd>
             <dt>Wires in hand</dt><dd>up to {l.maxStrandsInHand}, {l.maxWireSizes} size(s), diameter ratio ≤ {l.mixedSizeRatioMax}</dd>
             <dt>Changed by</dt><dd>an administrator</dd>
+          </dl>
+        )}
+      </section>
+      <section className="card" aria-labelledby="bench-h">
+        <h2 id="bench-h">Bench pack</h2>
+        <p className="muted small">
+          The winder’s bench pack lists the wire to draw: the copper weight of the winding plus this allowance for leads, jumpers and waste
+          (starting value 10 %, shop practice), beside the stock on hand. Lead marking: IEC 60034-8 or NEMA MG 1 Part 2; the
+          winder can switch on the pack itself.
+        </p>
+        {mayEditSettings ? (
+          <BenchSettingsForm version={bench.version} allowancePercent={Math.round(bench.wireAllowance * 1000) / 10} leadConvention={bench.leadConvention} />
+        ) : (
+          <dl className="dl">
+            <dt>Allowance</dt><dd>{(bench.wireAllowance * 100).toFixed(1)} % for leads, jumpers and waste</dd>
+            <dt>Lead marking</dt><dd>{bench.leadConvention === 'nema' ? 'NEMA MG 1 Part 2' : 'IEC 60034-8'}</dd>
           </dl>
         )}
       </section>

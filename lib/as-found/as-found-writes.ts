@@ -4,7 +4,6 @@
  * (server actions) have checked the session and role and parsed the input with the schemas.
  */
 import { db, Prisma } from '@/lib/db/client';
-import type { JobStatus } from '@/lib/db/generated/enums';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { recordJobEvent } from '@/lib/jobs/job-writes';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
@@ -12,15 +11,10 @@ import type { DraftPayload } from '@/lib/as-found/draft-schema';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import type { LengthUnit } from './length-entry';
 import { SHEET_MESSAGES } from './as-found-messages';
+import { layoutLabel } from '@/lib/engine/notation';
+import { isRecordLocked } from '@/lib/jobs/record-locks';
 
 type Tx = Prisma.TransactionClient;
-
-/** Statuses past winding: the as-found record is closed (the rewind was made from it). */
-export const SHEET_FROZEN_STATUSES: readonly JobStatus[] = ['TESTING', 'READY', 'SHIPPED', 'RETURNED_UNREPAIRED'];
-
-/** A job on hold is judged by the status it was held from. */
-export const isSheetFrozen = (status: JobStatus, heldFrom: JobStatus | null): boolean =>
-  SHEET_FROZEN_STATUSES.includes(status === 'ON_HOLD' && heldFrom ? heldFrom : status);
 
 async function editableJob(tx: Tx, jobId: string) {
   const job = await tx.job.findUnique({
@@ -28,7 +22,7 @@ async function editableJob(tx: Tx, jobId: string) {
     select: { id: true, number: true, status: true, heldFrom: true, motor: { select: { manufacturer: true, model: true, outputKw: true } } },
   });
   if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
-  if (isSheetFrozen(job.status, job.heldFrom)) throw new DomainError('frozen', SHEET_MESSAGES.frozen(STATUS_LABELS[job.status]));
+  if (isRecordLocked('asFoundSheet', job.status, job.heldFrom)) throw new DomainError('frozen', SHEET_MESSAGES.frozen(STATUS_LABELS[job.status]));
   return job;
 }
 
@@ -88,7 +82,7 @@ export async function saveSheet(userId: string, input: SaveSheetInput): Promise<
       await tx.windingSheetRevision.create({ data: { sheetId, revision, data: columns.data, savedById: userId } });
       await tx.sheetDraft.deleteMany({ where: { jobId: input.jobId, userId } });
       const changed = existing ? changedSections(existing.data, s) : [];
-      const summary = `${s.core.slots} slots, ${s.supply.poles} poles, ${s.winding.layers === 2 ? 'double' : 'single'}-layer ${s.winding.style}`;
+      const summary = `${s.core.slots} slots, ${s.supply.poles} poles, ${layoutLabel(s.winding)}`;
       await recordJobEvent(tx, {
         jobId: input.jobId, userId, kind: 'SHEET',
         message: existing

@@ -1,6 +1,6 @@
 /**
  * What the sheet screen shows beside the form as the winder types: the form is checked with the sheet
- * schema, then analysed by the engine (analyseSheet) and the consistency checks. When the sheet is not yet
+ * schema, then analysed by the engine (analyseSheet) and its findings (lib/engine/sheet-findings.ts). When the sheet is not yet
  * complete, the winding alone (slots, poles, layers, spans, turns) is analysed so the winding factors, MMF
  * and slot diagram appear as soon as those are in. Pure and synchronous; the screen debounces it.
  */
@@ -9,7 +9,7 @@ import { analyseWinding, type WindingAnalysis } from '@/lib/engine/analyse-windi
 import type { EngineError } from '@/lib/engine/result';
 import type { CoilSide } from '@/lib/engine/winding-layout';
 import { coreSchema, supplySchema, windingSchema, windingSheetSchema, type SheetIssue, type WindingSheet } from '@/lib/as-found/winding-sheet-schema';
-import { sheetConsistency, type SheetFinding } from './consistency';
+import { sheetFindings, type SheetFinding } from '../engine/sheet-findings';
 import type { LengthUnit } from './length-entry';
 import { formToSheetInput, type SheetFormValues } from './as-found-form';
 
@@ -57,5 +57,5 @@ export function liveAnalysis(values: SheetFormValues, unit: LengthUnit, slotTabl
   }
   const r = analyseSheet(parsed.data);
   if (!r.ok) return { sheet: parsed.data, full: null, ...windingOnly(input), findings: [], issues: [], engineError: r.error };
-  return { sheet: parsed.data, full: r.value, winding: r.value.winding, findings: sheetConsistency(parsed.data, r.value), issues: [], engineError: null };
+  return { sheet: parsed.data, full: r.value, winding: r.value.winding, findings: sheetFindings(parsed.data, r.value), issues: [], engineError: null };
 }

@@ -8,6 +8,7 @@ import { z } from 'zod';
 import { parseAwg } from '@/lib/engine/awg';
 import { parseMetricSize } from '@/lib/engine/metric-wire';
 import type { WindingSheetData } from '@/lib/engine/winding-sheet';
+import { THERMAL_CLASSES, WIRE_STANDARDS } from '@/lib/engine/winding-sheet';
 
 interface MeasureRule {
   unit?: string;
@@ -29,10 +30,7 @@ function measure(label: string, { unit, int, min = 0, above = true, max }: Measu
 
 const text = (label: string, max: number) => z.string({ error: `${label} must be text.` }).max(max, `${label}: at most ${max} characters.`);
 
-/** Insulation thermal classes (A 105, B 130, F 155, H 180 °C). */
-export const THERMAL_CLASSES = ['A', 'B', 'F', 'H'] as const;
-/** How the wire size is given. */
-export const WIRE_STANDARDS = ['awg', 'metric'] as const;
+export { THERMAL_CLASSES, WIRE_STANDARDS };
 
 /** Stator core as measured, mm. */
 export const coreSchema = z.object({

@@ -4,6 +4,7 @@
  */
 import { parseArgs } from 'node:util';
 import type { AnalyseWindingInput } from '../engine/analyse-winding';
+import type { ScalingCase } from '../engine/supply-scaling';
 
 /** Usage text for --help. */
 export const CALC_USAGE = `Usage:
@@ -11,12 +12,19 @@ export const CALC_USAGE = `Usage:
       [--style lap|concentric] [--spans 11,9,7] [--turns 14 | 10,10,10] [--coiling whole|half]
       [--paths 1] [--connection star|delta] [--frequency 50] [--orders 25]
   npm run calc -- sheet FILE.json [--orders 25] [--json]
+  npm run calc -- rescale --slots 36 --poles 4 --span 7 --turns 14 --voltage 400 --frequency 50
+      [--connection star] [--paths 1] [--layers 2] [--style lap] [--spans …]
+      [--to-voltage 460] [--to-frequency 60] [--to-connection delta] [--to-turns 16] [--to-span 8]
+      [--to-paths 2] [--to-poles 6] [--json]
+      The same core on another supply: flux and flux-density ratios, the verdict (+5 % / −10 %), and the turns
+      per coil that would keep the original flux.
 Spans are slot pitches: a coil in slots 1 and 8 has span 7.`;
 
 /** A parsed command line. */
 export type CalcCommand =
   | { kind: 'winding'; input: AnalyseWindingInput; orders: number; json: boolean }
   | { kind: 'sheet'; file: string; orders: number; json: boolean }
+  | { kind: 'rescale'; old: ScalingCase; next: ScalingCase; json: boolean }
   | { kind: 'help' };
 
 /** A command, or one line saying what is wrong. */
@@ -26,6 +34,8 @@ const OPTIONS = {
   slots: { type: 'string' }, poles: { type: 'string' }, span: { type: 'string' }, spans: { type: 'string' },
   layers: { type: 'string' }, style: { type: 'string' }, turns: { type: 'string' }, coiling: { type: 'string' },
   paths: { type: 'string' }, connection: { type: 'string' }, frequency: { type: 'string' }, orders: { type: 'string' },
+  voltage: { type: 'string' }, 'to-voltage': { type: 'string' }, 'to-frequency': { type: 'string' }, 'to-connection': { type: 'string' },
+  'to-turns': { type: 'string' }, 'to-span': { type: 'string' }, 'to-paths': { type: 'string' }, 'to-poles': { type: 'string' },
   json: { type: 'boolean' }, help: { type: 'boolean', short: 'h' },
 } as const;
 
@@ -86,6 +96,28 @@ function windingCommand(v: Values, orders: number, json: boolean): CalcCommand {
   };
 }
 
+/** The same core moved to another supply: unchanged `--to-…` values keep the original's. */
+function rescaleCommand(v: Values, json: boolean): CalcCommand {
+  const base = windingCommand(v, 25, json);
+  if (base.kind !== 'winding') throw new ArgError('rescale needs a winding.');
+  const w = base.input.winding;
+  const spans = v['to-span'] === undefined ? w.spans : numberList('to-span', v['to-span']);
+  const turns = v['to-turns'] === undefined ? w.turnsPerCoil : numberList('to-turns', v['to-turns']);
+  const old: ScalingCase = { winding: w, supply: { lineVoltageV: one('voltage', v.voltage), frequencyHz: one('frequency', v.frequency, 50) } };
+  const next: ScalingCase = {
+    winding: {
+      ...w,
+      spans,
+      turnsPerCoil: turns.length === 1 && spans.length > 1 ? spans.map(() => turns[0] ?? 1) : turns,
+      poles: one('to-poles', v['to-poles'], w.poles),
+      parallelPaths: one('to-paths', v['to-paths'], w.parallelPaths),
+      connection: choice('to-connection', v['to-connection'], ['star', 'delta'] as const, w.connection),
+    },
+    supply: { lineVoltageV: one('to-voltage', v['to-voltage'], old.supply.lineVoltageV), frequencyHz: one('to-frequency', v['to-frequency'], old.supply.frequencyHz) },
+  };
+  return { kind: 'rescale', old, next, json };
+}
+
 /** Parses argv (without node and the script path). */
 export function parseCalcArgs(argv: readonly string[]): ArgsResult {
   try {
@@ -99,13 +131,17 @@ export function parseCalcArgs(argv: readonly string[]): ArgsResult {
       if (rest.length > 0) throw new ArgError(`Unexpected argument "${rest[0]}".`);
       return { ok: true, value: windingCommand(v, orders, json) };
     }
+    if (command === 'rescale') {
+      if (rest.length > 0) throw new ArgError(`Unexpected argument "${rest[0]}".`);
+      return { ok: true, value: rescaleCommand(v, json) };
+    }
     if (command === 'sheet') {
       const [file, ...extra] = rest;
       if (!file) throw new ArgError('sheet needs a file: npm run calc -- sheet FILE.json');
       if (extra.length > 0) throw new ArgError(`Unexpected argument "${extra[0]}".`);
       return { ok: true, value: { kind: 'sheet', file, orders, json } };
     }
-    throw new ArgError(command ? `Unknown command "${command}" (use winding or sheet).` : 'Give a command: winding or sheet (--help for usage).');
+    throw new ArgError(command ? `Unknown command "${command}" (use winding, sheet or rescale).` : 'Give a command: winding, sheet or rescale (--help for usage).');
   } catch (e) {
     // parseArgs throws TypeErrors with Node error codes for unknown options and missing values.
     const message = e instanceof Error ? e.message.split('\n')[0] ?? e.message : String(e);

@@ -4,6 +4,7 @@ import type { FluxDensity } from '../engine/flux';
 import type { WindingSpec } from '../engine/winding-layout';
 import { fixed, formatTable } from './format-table';
 import { formatWinding } from './format-winding';
+import type { SheetFinding } from '../engine/sheet-findings';
 
 const range = (d: FluxDensity): string =>
   `${fixed(d.limit.typical.low, 2)}–${fixed(d.limit.typical.high, 2)}${d.limit.conservative ? ` (conservative ≤ ${fixed(d.limit.conservative.high, 2)})` : ''}`;
@@ -43,8 +44,15 @@ function copperLines(s: SheetAnalysis): string[] {
   return lines;
 }
 
-/** The whole sheet: winding report, flux densities, wire, resistance, current density, slot fill, warnings. */
-export function formatSheet(spec: WindingSpec, s: SheetAnalysis, orders: number): string {
+const SEVERITY_WORD: Record<SheetFinding['severity'], string> = { problem: 'Problem', check: 'Check', note: 'Note' };
+
+/** The findings exactly as the live analysis shows them: what was found, then what to check. */
+const findingLines = (findings: readonly SheetFinding[]): string[] =>
+  findings.length ? ['', 'Findings', ...findings.flatMap((f) => [`${SEVERITY_WORD[f.severity]}: ${f.message}`, `  What to check: ${f.check}`])] : ['', 'Findings: none.'];
+
+/** The whole sheet: winding report, flux densities, wire, resistance, current density, slot fill, findings. */
+export function formatSheet(spec: WindingSpec, s: SheetAnalysis, findings: readonly SheetFinding[], orders: number): string {
+  // The layout's own notes are among the findings; print them once.
   const winding = formatWinding(spec, { ...s.winding, warnings: [] }, orders);
-  return [winding, ...fluxLines(s), ...copperLines(s), ...(s.warnings.length ? ['', ...s.warnings.map((w) => `Warning: ${w}`)] : [])].join('\n');
+  return [winding, ...fluxLines(s), ...copperLines(s), ...findingLines(findings)].join('\n');
 }

@@ -3,10 +3,11 @@ import type { WindingAnalysis } from '../engine/analyse-winding';
 import type { WindingSpec } from '../engine/winding-layout';
 import { slotRow } from '../engine/winding-layout';
 import { fixed, formatTable, orderLabel } from './format-table';
+import { spanLabel } from '../engine/notation';
 
 function describe(spec: WindingSpec, a: WindingAnalysis): string {
   const layers = spec.layers === 2 ? 'double-layer' : `single-layer ${spec.singleLayerCoiling ?? 'half'}-coiled`;
-  const spans = spec.spans.map((y) => `${y} (1–${y + 1})`).join(', ');
+  const spans = spec.spans.map((y) => `${y} (${spanLabel(y)})`).join(', ');
   const source = a.layout.source === 'explicit' ? ', slot table from the winder' : '';
   return `${spec.slots} slots, ${spec.poles} poles, ${layers} ${spec.style}, span ${spans}, ${spec.turnsPerCoil.join('/')} turns per coil, ${spec.parallelPaths} path(s), ${spec.connection}${source}`;
 }

@@ -81,7 +81,6 @@ export interface SheetAnalysis {
     insulatedOverGross: number;
     handInsertionLimit: { low: number; high: number };
   };
-  warnings: string[];
 }
 
 function wireRows(sheet: WindingSheet): EngineResult<WireRow[]> {
@@ -128,12 +127,9 @@ export function analyseSheet(sheet: WindingSheet, options?: { limits?: FluxLimit
   const wires = wireRows(sheet);
   if (!wires.ok) return wires;
   const areaMm2 = wires.value.reduce((sum, r) => sum + r.count * r.areaMm2, 0);
-  const warnings = [...w.warnings];
 
   const resistance = resistanceOf(sheet, w, areaMm2);
   if (!resistance.ok) return resistance;
-  if (resistance.value?.measured && !resistance.value.measured.unbalance.pass)
-    warnings.push(`Resistance unbalance ${(resistance.value.measured.unbalance.value * 100).toFixed(2)} % is over the limit (${resistance.value.measured.unbalance.rule}).`);
 
   let currentDensity: SheetAnalysis['currentDensity'] = null;
   if (sheet.supply.ratedCurrentA !== undefined) {
@@ -152,8 +148,6 @@ export function analyseSheet(sheet: WindingSheet, options?: { limits?: FluxLimit
     strands: wires.value.map((r) => ({ bareDiameterMm: r.bareMm, overallDiameterMm: r.overallMm, count: r.count })),
     grossSlotAreaMm2: gross.value, netSlotAreaMm2: gross.value,
   });
-  if (fill.insulatedOverNet > HAND_INSERTION_FILL_LIMIT.high)
-    warnings.push(`Insulated wire fills ${(fill.insulatedOverNet * 100).toFixed(0)} % of the gross slot area: above hand-insertion practice even before liner and wedge.`);
 
   const analysis: SheetAnalysis = {
     winding: w,
@@ -167,7 +161,6 @@ export function analyseSheet(sheet: WindingSheet, options?: { limits?: FluxLimit
       conductorsPerSlot, grossSlotAreaMm2: gross.value, bareCopperOverGross: fill.bareCopperOverGross,
       insulatedOverGross: fill.insulatedOverNet, handInsertionLimit: { ...HAND_INSERTION_FILL_LIMIT },
     },
-    warnings,
   };
   return isAllFinite(analysis)
     ? ok(analysis)

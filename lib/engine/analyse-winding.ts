@@ -75,7 +75,7 @@ function closedFormChecks(spec: WindingSpec, layout: SlotTable, factors: Harmoni
   for (const f of factors) {
     if (!Number.isInteger(f.order) || f.order % 2 === 0) continue;
     let c: { kd?: number; kp?: number; kw: number } | null;
-    // Single layer: k_w = k_d whatever the end-turn shape [derived, reference §1].
+    // Single layer: k_w = k_d whatever the end-turn shape [derived, docs/engineering/winding-factor.md].
     if (spec.layers === 1) c = { kd: distributionFactor(z, f.order), kp: 1, kw: distributionFactor(z, f.order) };
     else if (spec.style === 'concentric') c = { kw: concentricPitchFactor(spec.spans, spec.turnsPerCoil, tau, f.order) };
     else c = closedFormFactors(slots, poles, spec.spans[0] ?? 0, f.order);

@@ -20,7 +20,7 @@ export interface SlotsPerPolePerPhase {
   value: number;
 }
 
-/** q = S/(mP) with m = 3, reduced to z/d (rewind-engineering reference §1). Slots and poles are whole. */
+/** q = S/(mP) with m = 3, reduced to z/d (docs/engineering/winding-factor.md). Slots and poles are whole. */
 export function slotsPerPolePerPhase(slots: number, poles: number): SlotsPerPolePerPhase {
   const g = gcd(slots, 3 * poles);
   return { z: slots / g, d: (3 * poles) / g, value: slots / (3 * poles) };
@@ -28,7 +28,7 @@ export function slotsPerPolePerPhase(slots: number, poles: number): SlotsPerPole
 
 /**
  * A three-phase winding of S slots and 2p poles can be balanced only when S/(3·gcd(S, p)) is a whole
- * number, i.e. the denominator d of q is not a multiple of 3 [derived, reference §1].
+ * number, i.e. the denominator d of q is not a multiple of 3 [derived, docs/engineering/winding-factor.md].
  */
 export function canBalance(slots: number, poles: number): boolean {
   const p = poles / 2;
@@ -58,7 +58,7 @@ export function pitchFactor(spanSlots: number, polePitchSlots: number, nu: numbe
 
 /**
  * Effective pitch factor of a concentric group whose coils share one centre line:
- * Σ N_i·sin(ν y_i/τ 90°) / Σ N_i [derived, reference §1]. Signed.
+ * Σ N_i·sin(ν y_i/τ 90°) / Σ N_i [derived, docs/engineering/winding-factor.md]. Signed.
  */
 export function concentricPitchFactor(spans: readonly number[], turns: readonly number[], polePitchSlots: number, nu: number): number {
   let num = 0;

@@ -1,6 +1,6 @@
 /**
  * Flux per pole and the flux densities it sets up in the gap, the teeth and the back iron (yoke), from
- * E = 4.44·f·N_ph·k_w1·Φ (reference §2). Lengths in metres, flux in webers, densities in tesla with
+ * E = 4.44·f·N_ph·k_w1·Φ (docs/engineering/flux-density.md). Lengths in metres, flux in webers, densities in tesla with
  * kilolines per square inch alongside.
  */
 import { fail, ok, type EngineResult } from './result';
@@ -86,15 +86,15 @@ export function seriesTurnsPerPhase(table: SlotTable, parallelPaths: number): nu
   return sideTurns / 2 / 3 / parallelPaths;
 }
 
-/** N_ph = S·Z_s/(6a) with Z_s conductors per slot: (S/3)·N_c/a double layer, (S/6)·N_c/a single (reference §2). */
+/** N_ph = S·Z_s/(6a) with Z_s conductors per slot: (S/3)·N_c/a double layer, (S/6)·N_c/a single (docs/engineering/flux-density.md). */
 export const seriesTurnsFromCoils = (slots: number, layers: 1 | 2, turnsPerCoil: number, parallelPaths: number): number =>
   (slots * layers * turnsPerCoil) / (6 * parallelPaths);
 
-/** Phase voltage: star V_line/√3, delta V_line (reference §2). */
+/** Phase voltage: star V_line/√3, delta V_line (docs/engineering/flux-density.md). */
 export const phaseVoltage = (lineVoltageV: number, connection: 'star' | 'delta'): number =>
   connection === 'star' ? lineVoltageV / Math.sqrt(3) : lineVoltageV;
 
-/** Φ = E / (4.44·f·N_ph·k_w1), E the air-gap EMF (reference §2). Inputs validated and positive. */
+/** Φ = E / (4.44·f·N_ph·k_w1), E the air-gap EMF (docs/engineering/flux-density.md). Inputs validated and positive. */
 export const fluxPerPoleWb = (emfV: number, frequencyHz: number, seriesTurnsPerPhase: number, windingFactor: number): number =>
   emfV / (EMF_CONSTANT * frequencyHz * seriesTurnsPerPhase * windingFactor);
 
@@ -116,7 +116,7 @@ export interface FluxDensities {
 
 /**
  * Gap B_avg = Φ·P/(πDL); B_peak = (π/2)·B_avg (sinusoidal field); tooth B_max = B_peak·τ_s·L/(w_t·L_fe)
- * (= B_peak·τ_s/(w_t·k_fe) without vent ducts); yoke B = Φ/(2·d_y·L_fe) (reference §2). Inputs validated.
+ * (= B_peak·τ_s/(w_t·k_fe) without vent ducts); yoke B = Φ/(2·d_y·L_fe) (docs/engineering/flux-density.md). Inputs validated.
  */
 export function fluxDensities(core: CoreGeometry, poles: number, fluxWb: number): FluxDensities {
   const gapAverageT = (fluxWb * poles) / (Math.PI * core.boreM * core.coreLengthM);
@@ -182,7 +182,7 @@ function checkFluxInput(i: FluxInput): EngineResult<null> {
   return ok(null);
 }
 
-/** Flux per pole and gap, tooth and yoke densities judged against configurable limits (reference §2). */
+/** Flux per pole and gap, tooth and yoke densities judged against configurable limits (docs/engineering/flux-density.md). */
 export function fluxAnalysis(input: FluxInput): EngineResult<FluxAnalysis> {
   const checked = checkFluxInput(input);
   if (!checked.ok) return checked;

@@ -3,6 +3,7 @@
  * efficiency classes, with the few small functions that use them.
  */
 import { fail, finiteOr, ok, type EngineResult } from './result';
+import type { ThermalClass } from './winding-sheet';
 
 /** NEMA locked-rotor code letters (MG 1 10.37.2); I, O and Q are not used. */
 export type CodeLetter =
@@ -67,7 +68,7 @@ export function lockedRotorCurrentRangeA(letter: CodeLetter, hp: number, lineVol
 }
 
 /** Insulation thermal classes handled (IEC 60085 letters). */
-export type InsulationClass = 'A' | 'B' | 'F' | 'H';
+export type InsulationClass = ThermalClass;
 
 /** Thermal class temperature, °C: A 105, B 130, F 155, H 180 (IEC 60085; NEMA MG 1). */
 export const INSULATION_CLASS_TEMP_C: Readonly<Record<InsulationClass, number>> = { A: 105, B: 130, F: 155, H: 180 };

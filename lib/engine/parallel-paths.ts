@@ -1,6 +1,6 @@
 /**
  * Parallel paths (circuits) a layout allows. Paths in parallel must carry identical EMF phasors, or current
- * circulates between them [derived, reference §3]. The layout is searched for its repeating sections: a
+ * circulates between them [derived, docs/engineering/redesign.md]. The layout is searched for its repeating sections: a
  * shift of k slots that maps every coil of a phase onto a coil of the same phase (all polarities kept or
  * all reversed) while turning the slot star by a multiple of 180° electrical. The S/k sections then carry
  * equal phasors up to sign (a reversed section is simply connected the other way round), and any a that
@@ -122,7 +122,7 @@ function pathPhasors(split: { section: number[]; phasor: Phasor[] }, paths: numb
  * Allowed parallel path counts of a layout: the divisors of the number of identical sections common to all
  * three phases, confirmed by comparing path phasors. Without coil numbers (a slot table of sides only) the
  * count of coils per phase must also divide; whole- and half-coiled single-layer windings then look alike,
- * so the note asks the winder to check. [derived, reference §3]
+ * so the note asks the winder to check. [derived, docs/engineering/redesign.md]
  */
 export function allowedParallelPaths(table: SlotTable): ParallelPathAnalysis {
   const byCoil = table.sides.length > 0 && table.sides.every((s) => s.coil !== undefined);
@@ -176,7 +176,7 @@ export function checkParallelPaths(table: SlotTable, paths: number): EngineResul
 }
 
 /**
- * Rule of thumb for regular 60°-belt windings [derived, reference §3]: double-layer integral lap: a divides
+ * Rule of thumb for regular 60°-belt windings [derived, docs/engineering/redesign.md]: double-layer integral lap: a divides
  * P; fractional double layer q = z/d: a divides 2p/d; single layer half-coiled: a divides P/2; whole-coiled:
  * a divides P. Check values: 36/4 → 1, 2, 4; 36/6 → 1, 2, 3, 6; 30/4 → 1, 2; 27/4 → 1.
  */

@@ -1,6 +1,6 @@
 /**
  * Phase balance from the slot-star sums: a balanced three-phase winding has three equal EMF phasors
- * 120° apart at the working order [derived, reference §1].
+ * 120° apart at the working order [derived, docs/engineering/winding-factor.md].
  */
 import { angleDeg, magnitude, PHASES, type Phasor } from './slot-star';
 import type { Phase } from './winding-layout';

@@ -1,6 +1,6 @@
 /**
  * Slot-star phasor sums over the actual coil sides: the general winding-factor method for any layout
- * (integral, fractional, concentric, single or double layer, shop-drawn) [derived, reference §1].
+ * (integral, fractional, concentric, single or double layer, shop-drawn) [derived, docs/engineering/winding-factor.md].
  *
  * Order convention. Sums are taken per mechanical order n (the number of pole pairs of the space wave round
  * the whole bore): a side in slot s (1-based) contributes polarity·turns·e^{j·n·2π(s−1)/S}. Results are
@@ -46,7 +46,7 @@ export function phaseSlotWeights(table: SlotTable): PhaseSlotWeights {
 /**
  * Phasor sums of a slot table, cached per bin. Because e^{j n 2π s/S} depends only on n mod S, mechanical
  * orders n and n + kS give the same sum: the slot harmonics ν = kS/p ± 1 share |k_w| with the working
- * wave (reference §1).
+ * wave (docs/engineering/winding-factor.md).
  */
 export class SlotStar {
   readonly slots: number;
@@ -127,7 +127,7 @@ export const ZERO_FACTOR = 1e-9;
 
 /**
  * k_wν per phase for every electrical order up to maxOrder: all whole orders ν = 1 … maxOrder, plus the
- * fractional orders (ν = n/p not whole) that the layout actually carries. [derived, reference §1]
+ * fractional orders (ν = n/p not whole) that the layout actually carries. [derived, docs/engineering/winding-factor.md]
  */
 export function harmonicWindingFactors(table: SlotTable, maxOrder = 49, star = new SlotStar(table)): HarmonicWindingFactor[] {
   const p = star.polePairs;

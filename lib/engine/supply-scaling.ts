@@ -1,6 +1,6 @@
 /**
  * A winding moved to a new supply, or rewound differently, on the same core: how the flux and the flux
- * densities change (reference §3). The ratio is the primary redesign check: shop limits differ, ratios do not.
+ * densities change (docs/engineering/redesign.md). The ratio is the primary redesign check: shop limits differ, ratios do not.
  */
 import { seriesTurnsPerPhase, phaseVoltage } from './flux';
 import { fail, ok, type EngineResult } from './result';
@@ -46,7 +46,7 @@ export interface FluxRatio {
 }
 
 /**
- * Φ_new/Φ_old = (V_ph,new/V_ph,old)·(f_old/f_new)·(N_ph,old·k_w,old)/(N_ph,new·k_w,new) [derived, reference §3].
+ * Φ_new/Φ_old = (V_ph,new/V_ph,old)·(f_old/f_new)·(N_ph,old·k_w,old)/(N_ph,new·k_w,new) [derived, docs/engineering/redesign.md].
  * Inputs validated and positive.
  */
 export function fluxRatio(old: FluxBasis, next: FluxBasis, tolerance: RatioTolerance = DEFAULT_RATIO_TOLERANCE): FluxRatio {

@@ -9,6 +9,10 @@ export const CIRCULAR_MILS_PER_MM2 = 1 / ((Math.PI / 4) * (MM_PER_INCH / 1000) *
 /** 1 T = 1 Wb/m² = 1e8 lines / (1550.0031 in²) = 64.516 kilolines/in² [derived]. */
 export const KILOLINES_PER_IN2_PER_TESLA = 1e8 / 1e3 / (1 / (MM_PER_INCH / 1000) ** 2);
 export const WATTS_PER_HP = 745.7;
+/** International avoirdupois pound, exact by definition. */
+export const KG_PER_LB = 0.45359237;
+/** 1 lbf·ft = 0.3048 m × 4.4482216152605 N = 1.3558179483 N·m (exact definitions). */
+export const NM_PER_LBF_FT = 0.3048 * 4.4482216152605;
 /** International foot, exact by definition. */
 export const M_PER_FOOT = 0.3048;
 
@@ -26,6 +30,9 @@ export const teslaToKilolinesPerIn2 = (t: number): number => t * KILOLINES_PER_I
 export const kilolinesPerIn2ToTesla = (kl: number): number => kl / KILOLINES_PER_IN2_PER_TESLA;
 export const hpToKw = (hp: number): number => (hp * WATTS_PER_HP) / 1000;
 export const kwToHp = (kw: number): number => (kw * 1000) / WATTS_PER_HP;
+export const kgToLb = (kg: number): number => kg / KG_PER_LB;
+export const lbToKg = (lb: number): number => lb * KG_PER_LB;
+export const nmToLbfFt = (nm: number): number => nm / NM_PER_LBF_FT;
 export const celsiusToFahrenheit = (c: number): number => (c * 9) / 5 + 32;
 export const fahrenheitToCelsius = (f: number): number => ((f - 32) * 5) / 9;
 /** Amperes per mm² to circular mils per ampere: CM/A = 1973.5 / J [derived]. */

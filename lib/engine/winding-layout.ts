@@ -211,7 +211,7 @@ function sidesFromPlan(plan: CoilPlan[], spec: WindingSpec): EngineResult<SlotTa
  * that holds its phasor on the slot star (electrical angle s·p·360°/S): the usual slot-star allocation,
  * which also yields balanced fractional double-layer layouts. Double layer: the return side lies one span
  * on in layer 2. Single layer: groups join a belt to its partner one pole pitch on (half-coiled: one group
- * per pole pair; whole-coiled: half-belts, one group per pole). [derived, reference §1]
+ * per pole pair; whole-coiled: half-belts, one group per pole). [derived, docs/engineering/winding-factor.md]
  */
 export function buildStandardLayout(spec: WindingSpec): EngineResult<SlotTable> {
   const base = checkSlotsAndPoles(spec.slots, spec.poles);

@@ -2,8 +2,12 @@
  * The winding data sheet as the engine reads it: the engine owns this shape, and the as-found schema
  * (lib/as-found/winding-sheet-schema.ts) checks user input into it. Lengths in mm, unit in every name.
  */
-export type ThermalClass = 'A' | 'B' | 'F' | 'H';
-export type WireStandard = 'awg' | 'metric';
+/** Insulation thermal classes (IEC 60085 letters): A 105, B 130, F 155, H 180 °C. The one list of them. */
+export const THERMAL_CLASSES = ['A', 'B', 'F', 'H'] as const;
+export type ThermalClass = (typeof THERMAL_CLASSES)[number];
+/** How a wire size is given: AWG gauge or metric nominal bare diameter. */
+export const WIRE_STANDARDS = ['awg', 'metric'] as const;
+export type WireStandard = (typeof WIRE_STANDARDS)[number];
 
 export interface CoreData {
   boreMm: number;

@@ -22,7 +22,7 @@ export interface StoredTestRecord {
 export async function getJobForFinalTests(number: number) {
   return db().job.findUnique({
     where: { number },
-    select: { id: true, number: true, status: true, customer: { select: { company: true } }, motor: true },
+    select: { id: true, number: true, status: true, heldFrom: true, customer: { select: { company: true } }, motor: true },
   });
 }
 

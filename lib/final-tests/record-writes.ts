@@ -7,10 +7,11 @@
 import { fromZonedLocal } from '@/lib/presentation/format';
 import { db, Prisma } from '@/lib/db/client';
 import { recordJobEvent } from '@/lib/jobs/job-writes';
-import { CLOSED_STATUSES, STATUS_LABELS } from '@/lib/jobs/status-flow';
+import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { instrumentSerials, type TestRecordForm } from '@/lib/final-tests/test-record-schema';
 import { judgeTestRecord, type TestJudgement } from './verdicts';
+import { isRecordLocked } from '@/lib/jobs/record-locks';
 
 export const TEST_MESSAGES = {
   closed: (status: string) => `This job is ${status.toLowerCase()}: its test records are kept as they were and cannot be changed.`,
@@ -48,9 +49,9 @@ export async function saveTestRecord(userId: string, input: TestRecordForm): Pro
   };
   try {
     return await db().$transaction(async (tx) => {
-      const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true } });
+      const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true, heldFrom: true } });
       if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
-      if (CLOSED_STATUSES.includes(job.status)) throw new DomainError('frozen', TEST_MESSAGES.closed(STATUS_LABELS[job.status]));
+      if (isRecordLocked('finalTests', job.status, job.heldFrom)) throw new DomainError('frozen', TEST_MESSAGES.closed(STATUS_LABELS[job.status]));
       const tester = await tx.user.findUnique({ where: { id: input.testedById }, select: { active: true } });
       if (!tester?.active) throw new DomainError('invalid', MESSAGES.invalid, { testedById: [TEST_MESSAGES.unknownTester] });
       const latest = await tx.testRecord.findFirst({ where: { jobId: input.jobId }, orderBy: { sequence: 'desc' }, select: { id: true, sequence: true } });

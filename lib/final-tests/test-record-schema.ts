@@ -8,7 +8,8 @@
 import { z } from 'zod';
 import { optionalNumber, optionalText, requiredNumber } from '../validation/fields';
 
-export const INSULATION_CLASSES = ['A', 'B', 'F', 'H'] as const;
+import { INSULATION_CLASSES } from '@/lib/jobs/motor-schema';
+export { INSULATION_CLASSES };
 /** Random-wound (round wire) or form-wound (pre-formed coils). */
 export const WINDING_KINDS = ['random', 'form'] as const;
 /** Which IEEE 43 minimum applies (see lib/engine/insulation-resistance.ts IrMinimumCategory). */

@@ -14,8 +14,10 @@ import { temperatureText } from '@/lib/final-tests/display';
 import { mmToInches } from '@/lib/engine/units';
 import { fmt } from '@/lib/presentation/format';
 import { getApprovedRedesignSummary, type ApprovedRedesignSummary } from './redesign-summary';
+import { lossStatementForJob, type LossStatementResult } from '@/lib/losses/loss-statement-source';
 import { CLOSING_STATEMENT, SAFETY_NOTICES, type SafetyNotice } from './safety-notices';
 import { shopDetails, type ShopDetails } from './shop-details';
+import { spansLabel, layoutLabel } from '@/lib/engine/notation';
 
 export interface Row {
   label: string;
@@ -44,6 +46,8 @@ export interface JobSheetData {
   asFound: { revision: number; updatedAt: string; rows: Row[] } | null;
   redesign: (Omit<ApprovedRedesignSummary, 'approvedAt'> & { approvedAt: string }) | null;
   tests: JobSheetTests | null;
+  /** What the rewind did to copper loss and efficiency (lib/losses). */
+  losses: LossStatementResult;
   notices: readonly SafetyNotice[];
   closing: string;
   /** Lines for handwritten signatures and dates. */
@@ -61,11 +65,11 @@ const dash = (v: string | null | undefined) => (v && v.trim() ? v : '—');
 
 function asFoundRows(s: WindingSheet): Row[] {
   const w = s.winding;
-  const spans = w.spans.map((y) => `1–${y + 1}`).join(', ');
+  const spans = spansLabel(w.spans);
   const wires = s.wires.map((x) => `${x.count} × ${x.standard === 'awg' ? `AWG ${x.size}` : `${x.size} mm`} (grade ${x.enamelGrade})`).join(' + ');
   const rows: Row[] = [
     { label: 'Core', value: `${s.core.slots} slots · bore ${mmIn(s.core.boreMm)} · length ${mmIn(s.core.coreLengthMm)} · OD ${mmIn(s.core.outsideDiameterMm)}` },
-    { label: 'Winding', value: `${w.layers === 2 ? 'double' : 'single'}-layer ${w.style} · span ${spans} · ${w.turnsPerCoil.join(', ')} turns per coil · ${w.parallelPaths} path(s) · ${w.connection}` },
+    { label: 'Winding', value: `${layoutLabel(w)} · span ${spans} · ${w.turnsPerCoil.join(', ')} turns per coil · ${w.parallelPaths} path(s) · ${w.connection}` },
     { label: 'Wire', value: wires },
     { label: 'Insulation', value: `class ${s.insulation.thermalClass}${s.insulation.varnish ? ` · ${s.insulation.varnish}` : ''}` },
     { label: 'Supply', value: `${fmt.num(s.supply.lineVoltageV, 0, 'V')} · ${fmt.num(s.supply.frequencyHz, 0, 'Hz')} · ${s.supply.poles} poles` },
@@ -90,11 +94,12 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
     include: { customer: { include: { contacts: true } }, motor: true, assignee: { select: { name: true } } },
   });
   if (!job) return null;
-  const [sheet, records, redesign, events] = await Promise.all([
+  const [sheet, records, redesign, events, losses] = await Promise.all([
     getAsFoundSheet(job.id),
     listTestRecords(job.id),
     getApprovedRedesignSummary(job.id),
     db().jobEvent.aggregate({ where: { jobId: job.id }, _count: { _all: true }, _max: { at: true } }),
+    lossStatementForJob(job.id),
   ]);
   const m = job.motor;
   const contact = job.customer.contacts[0];
@@ -154,6 +159,7 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
     asFound: sheet ? { revision: sheet.revision, updatedAt: fmt.date(sheet.updatedAt), rows: asFoundRows(sheet.sheet) } : null,
     redesign: redesign ? { ...redesign, approvedAt: fmt.date(redesign.approvedAt) } : null,
     tests,
+    losses,
     notices: SAFETY_NOTICES,
     closing: CLOSING_STATEMENT,
     signatures: SIGNATURE_LINES,

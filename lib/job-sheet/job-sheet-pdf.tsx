@@ -7,11 +7,12 @@ import { join } from 'node:path';
 import { Document, Font, Page, StyleSheet, Text, View, renderToBuffer } from '@react-pdf/renderer';
 import { checkValueText, overallText, statusText } from '@/lib/final-tests/display';
 import type { JobSheetData, Row } from './job-sheet-data';
+import { LossesPdf } from './losses-pdf';
 
 const FONT_DIR = join(process.cwd(), 'node_modules', 'dejavu-fonts-ttf', 'ttf');
 let fontsReady = false;
 
-function registerFonts(): void {
+export function registerFonts(): void {
   if (fontsReady) return;
   const regular = join(FONT_DIR, 'DejaVuSans.ttf');
   if (!existsSync(regular)) throw new Error(`DejaVu fonts not found in ${FONT_DIR}: is the dejavu-fonts-ttf package installed?`);
@@ -149,6 +150,7 @@ export function JobSheetDocument({ d }: { d: JobSheetData }) {
         <Text style={s.h2} break={false}>Final tests</Text>
         {d.tests && <Text style={s.muted}>Judged for: {d.tests.basis}.</Text>}
         {d.tests ? <Tests t={d.tests} /> : <Text>No final tests have been recorded yet.</Text>}
+        <LossesPdf losses={d.losses} />
 
         <View wrap={false}>
           <Text style={s.h2}>Signatures</Text>

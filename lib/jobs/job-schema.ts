@@ -2,11 +2,11 @@ import { z } from 'zod';
 import { customerSchema } from './customer-schema';
 import { motorSchema } from './motor-schema';
 import { optionalDate, optionalText, requiredText } from '../validation/fields';
+import { JobStatus, Priority } from '@/lib/db/generated/enums';
 
-export const JOB_STATUSES = [
-  'RECEIVED', 'INSPECTION', 'QUOTE_SENT', 'CUSTOMER_APPROVED', 'WINDING', 'TESTING', 'READY', 'SHIPPED', 'ON_HOLD', 'RETURNED_UNREPAIRED',
-] as const;
-export const PRIORITIES = ['LOW', 'NORMAL', 'HIGH', 'URGENT'] as const;
+/** Statuses and priorities come from the database's own enums (prisma/schema/shop.prisma): one list each. */
+export const JOB_STATUSES = Object.values(JobStatus);
+export const PRIORITIES = Object.values(Priority);
 
 const jobDetails = {
   promisedAt: optionalDate,

@@ -11,6 +11,7 @@ import type { z } from 'zod';
 import type { jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
 import { toMotorRecord } from '@/lib/jobs/motor-schema';
 import { isMoveAllowed, STATUS_LABELS } from './status-flow';
+import type { JobEventKind } from './job-events';
 
 type Tx = Prisma.TransactionClient;
 export const FIRST_JOB_NUMBER = 1001;
@@ -176,7 +177,7 @@ export async function moveJobStatus(userId: string, role: Role, input: StatusMov
 /** Records any event on a job's timeline (used by the sheet, redesign and test modules too). */
 export async function recordJobEvent(
   tx: Tx,
-  event: { jobId: string; userId: string | null; kind: string; message: string; data?: Prisma.InputJsonValue },
+  event: { jobId: string; userId: string | null; kind: JobEventKind; message: string; data?: Prisma.InputJsonValue },
 ): Promise<void> {
   await tx.jobEvent.create({ data: { ...event, ...(event.data === undefined ? {} : { data: event.data }) } });
 }

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { hpToKw } from '@/lib/engine/units';
 import { optionalNumber, optionalText, requiredNumber, requiredText } from '../validation/fields';
+import { THERMAL_CLASSES } from '@/lib/engine/winding-sheet';
 
 export const CONNECTIONS = ['star', 'delta', 'star-delta', 'dual-voltage star', 'dual-voltage delta'] as const;
 export const CONNECTION_LABELS: Record<(typeof CONNECTIONS)[number], string> = {
@@ -10,7 +11,8 @@ export const CONNECTION_LABELS: Record<(typeof CONNECTIONS)[number], string> = {
   'dual-voltage star': 'Dual voltage, star (YY/Y)',
   'dual-voltage delta': 'Dual voltage, delta (ΔΔ/Δ)',
 };
-export const INSULATION_CLASSES = ['A', 'B', 'F', 'H'] as const;
+/** The insulation classes a nameplate may state: the engine's one list. */
+export const INSULATION_CLASSES = THERMAL_CLASSES;
 export const OUTPUT_UNITS = ['kW', 'hp'] as const;
 
 /**

@@ -1,7 +1,7 @@
 import type { ProposedNameplate } from '@/lib/engine/redesign/report';
 import { fmt } from '@/lib/presentation/format';
+import { nmToLbfFt } from '@/lib/engine/units';
 
-const LBF_FT_PER_NM = 0.737562;
 
 /** The proposed supplementary nameplate as label/value lines, units included (screens and job sheet). */
 export function nameplateLines(p: ProposedNameplate): { label: string; value: string }[] {
@@ -11,6 +11,6 @@ export function nameplateLines(p: ProposedNameplate): { label: string; value: st
     { label: 'Speed', value: `${p.speedRpm ? `${fmt.num(p.speedRpm, 0, 'rpm')} (estimated)` : '—'} · synchronous ${fmt.num(p.synchronousRpm, 0, 'rpm')}` },
     { label: 'Current', value: fmt.num(p.currentA, 1, 'A') },
     { label: 'Output', value: fmt.power(p.outputKw) },
-    { label: 'Torque', value: p.torqueNm ? `${fmt.num(p.torqueNm, 1, 'N·m')} (${fmt.num(p.torqueNm * LBF_FT_PER_NM, 1, 'lbf·ft')})` : '—' },
+    { label: 'Torque', value: p.torqueNm ? `${fmt.num(p.torqueNm, 1, 'N·m')} (${fmt.num(nmToLbfFt(p.torqueNm), 1, 'lbf·ft')})` : '—' },
   ];
 }

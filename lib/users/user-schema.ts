@@ -1,7 +1,9 @@
 import { z } from 'zod';
 import { requiredText } from '../validation/fields';
+import { Role } from '@/lib/db/generated/enums';
 
-export const ROLES = ['FRONT_DESK', 'WINDER', 'ENGINEER', 'ADMIN'] as const;
+/** The roles come from the database's own enum (prisma/schema/auth.prisma). */
+export const ROLES = Object.values(Role);
 export const MIN_PASSWORD = 10;
 
 const password = z

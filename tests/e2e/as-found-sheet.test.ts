@@ -31,7 +31,7 @@ describe('a winder records an as-found sheet', () => {
     await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}`);
     await page.getByRole('link', { name: 'As-found data sheet' }).click();
     await page.waitForURL(/\/as-found$/);
-    // A new sheet starts from the nameplate: poles from 960 rpm at 50 Hz (reference §6: 6 poles).
+    // A new sheet starts from the nameplate: poles from 960 rpm at 50 Hz (docs/engineering/nameplate-and-speed.md: 6 poles).
     expect(await field(page, 'Line voltage (V)').inputValue()).toBe('400');
     expect(await field(page, 'Poles').inputValue()).toBe('6');
 
@@ -42,7 +42,7 @@ describe('a winder records an as-found sheet', () => {
     await field(page, 'Layers').selectOption('1');
     await field(page, 'Coil style').selectOption('concentric');
     await field(page, 'Single-layer coiling').selectOption('half');
-    // 36 slots, 6 poles, half-coiled: q = 2, spans 1–8 and 1–6 (τ + q − 1 = 7, then 5) [derived, reference §1].
+    // 36 slots, 6 poles, half-coiled: q = 2, spans 1–8 and 1–6 (τ + q − 1 = 7, then 5) [derived, docs/engineering/winding-factor.md].
     await field(page, 'Span of coil 1').fill('7');
     await field(page, 'Turns of coil 1').fill('34');
     await page.getByRole('button', { name: 'Add a coil to the group' }).click();
@@ -50,7 +50,7 @@ describe('a winder records an as-found sheet', () => {
     await field(page, 'Turns of coil 2').fill('34');
     await field(page, 'Coils per group').fill('2');
     await field(page, 'Groups (total)').fill('9');
-    // Deliberate mistake: a single-layer half-coiled 6-pole winding allows 1 or 3 circuits, not 2 (reference §3).
+    // Deliberate mistake: a single-layer half-coiled 6-pole winding allows 1 or 3 circuits, not 2 (docs/engineering/redesign.md).
     await field(page, 'Parallel circuits').fill('2');
     await field(page, 'Connection').selectOption('star');
     await field(page, 'Wire 1 size').fill('0.85');

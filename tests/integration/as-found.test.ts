@@ -1,6 +1,5 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { db } from '@/lib/db/client';
-import { allocateJobNumber } from '@/lib/jobs/job-writes';
 import type { JobStatus } from '@/lib/db/generated/enums';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { MAX_DRAFT_BYTES } from '@/lib/as-found/draft-schema';
@@ -10,19 +9,15 @@ import { searchLibrary } from '@/lib/library/library-queries';
 import { SHEET_MESSAGES } from '@/lib/as-found/as-found-messages';
 import { emptySheetForm, sheetToForm } from '@/lib/as-found/as-found-form';
 import { useTestDatabase } from '../support/test-db';
+import { buildJob } from '../support/builders';
 import { actAs, signOutTest } from '../support/session';
 import { ENGINEER, FRONT_DESK, WINDER } from '../support/demo-users';
-import { EXAMPLE_A_SHEET } from '../unit/engine/winding-fixtures';
+import { EXAMPLE_A_SHEET } from '../support/fixtures/winding-fixtures';
 
 useTestDatabase();
 
-/** A fresh job in `status` on a demo motor, without a sheet. */
-async function jobWithoutSheet(status: JobStatus = 'INSPECTION') {
-  const model = await db().job.findFirstOrThrow({ where: { status: 'INSPECTION' } });
-  return db().$transaction(async (tx) =>
-    tx.job.create({ data: { number: await allocateJobNumber(tx), customerId: model.customerId, motorId: model.motorId, status, reportedFault: 'Test job' } }),
-  );
-}
+/** A fresh job in `status`, without a sheet. */
+const jobWithoutSheet = (status: JobStatus = 'INSPECTION') => buildJob({ status });
 
 const draftOf = (boreMm: string) => {
   const values = emptySheetForm();

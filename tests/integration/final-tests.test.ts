@@ -8,7 +8,7 @@ import type { TestRecordFormInput } from '@/lib/final-tests/test-record-schema';
 import { useTestDatabase } from '../support/test-db';
 import { actAs, signOutTest } from '../support/session';
 import { ENGINEER, FRONT_DESK, WINDER } from '../support/demo-users';
-import { PASSING } from '../unit/final-tests/fixtures';
+import { PASSING } from '../support/fixtures/final-test-fixtures';
 
 useTestDatabase();
 

@@ -12,7 +12,7 @@ import { useTestDatabase } from '../support/test-db';
 import { actAs, signOutTest } from '../support/session';
 import { FRONT_DESK, WINDER } from '../support/demo-users';
 import { pdfText } from '../support/pdf-text';
-import { PASSING } from '../unit/final-tests/fixtures';
+import { PASSING } from '../support/fixtures/final-test-fixtures';
 
 // The redesign module is built elsewhere: stand in for its provider to check the sheet prints what it returns.
 const redesign = vi.hoisted(() => ({ forJob: '' as string, summary: null as ApprovedRedesignSummary | null }));

@@ -53,6 +53,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
         <ul className="row" style={{ listStyle: 'none', padding: 0, gap: '1.5rem' }}>
           <li><Link href={jobRoutes(job.number).asFound}>As-found data sheet</Link></li>
           <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>{redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}</li>
+          <li><Link href={jobRoutes(job.number).coreTest}>Core-loss (loop) test</Link></li>
           <li><Link href={jobRoutes(job.number).finalTests}>Final tests</Link></li>
           <li><Link href={`/jobs/${job.number}/job-sheet`}>Job sheet</Link></li>
           <li><a className="btn secondary" href={`/jobs/${job.number}/job-sheet/pdf`} download>Download job sheet (PDF)</a></li>

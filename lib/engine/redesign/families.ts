@@ -6,6 +6,7 @@
 import { analyseWinding, type WindingAnalysis } from '../analyse-winding';
 import { usualSingleLayerSpans, type WindingSpec } from '../winding-layout';
 import type { LayoutFamily, RedesignOriginal, RedesignTarget, RejectedFamily } from './types';
+import { spansLabel, layoutLabel } from '../notation';
 
 /** Most circuits the search offers when the engineer does not list them. */
 export const MAX_DEFAULT_PATHS = 8;
@@ -60,7 +61,7 @@ function layoutSpecs(original: RedesignOriginal, target: RedesignTarget): Windin
 
 /** "double-layer lap 1–8" / "single-layer concentric 1–12, 1–10". */
 export function describeLayout(spec: Pick<WindingSpec, 'layers' | 'style' | 'spans'>): string {
-  return `${spec.layers === 2 ? 'double' : 'single'}-layer ${spec.style} ${spec.spans.map((y) => `1–${y + 1}`).join(', ')}`;
+  return `${layoutLabel(spec)} ${spansLabel(spec.spans)}`;
 }
 
 /** Analyses each layout to try; layouts the core cannot carry come back as rejections with the engine's reason. */

@@ -9,11 +9,12 @@ import { DEFAULT_FLUX_LIMITS, judgeFlux, type FluxLimit } from '../flux';
 import { lineToLineFromPhaseOhm, phaseResistanceOhm } from '../resistance';
 import { fail, ok, type EngineResult } from '../result';
 import { torqueNm } from '../speed';
-import { ampsPerMm2ToCmilPerAmp, kwToHp, mmToInches, teslaToKilolinesPerIn2 } from '../units';
+import { ampsPerMm2ToCmilPerAmp, kwToHp, mm2ToCircularMils, mmToInches, nmToLbfFt, teslaToKilolinesPerIn2 } from '../units';
 import { harmonicSummary, meanSpan } from './families';
 import { partsLabel } from './wire-sets';
 import { redesignWarnings, type RedesignWarning } from './warnings';
 import type { Candidate, ExpectedRating, RedesignOriginal, RedesignRequest, RedesignSearch } from './types';
+import { spansLabel, layoutLabel } from '../notation';
 
 /** 'out' when the value leaves its range (the screen shows a symbol and words, not colour alone). */
 export type RowStatus = 'ok' | 'out' | 'info';
@@ -60,7 +61,6 @@ export interface RedesignReport {
 }
 
 const num = (v: number, d: number): string => (Number.isFinite(v) ? v.toFixed(d) : '—');
-const spanText = (spans: readonly number[]): string => spans.map((y) => `1–${y + 1}`).join(', ');
 const tesla = (t: number): string => `${num(t, 3)} T (${num(teslaToKilolinesPerIn2(t), 1)} kl/in²)`;
 const pct = (f: number): string => `${num(f * 100, 1)} %`;
 const limitText = (over: number, under: number): string => `limit +${num(over * 100, 0)} % / −${num(under * 100, 0)} % of the original`;
@@ -97,8 +97,8 @@ export function redesignReport(original: RedesignOriginal, request: RedesignRequ
   row({ key: 'turns', group: 'winding', label: 'Turns per coil', original: ow.turnsPerCoil.join(' / '), candidate: cw.turnsPerCoil.join(' / '), ...nums(ow.turnsPerCoil[0] ?? null, cw.turnsPerCoil[0] ?? null) });
   row({ key: 'connection', group: 'winding', label: 'Connection', original: ow.connection, candidate: cw.connection });
   row({ key: 'circuits', group: 'winding', label: 'Parallel circuits', original: String(ow.parallelPaths), candidate: String(cw.parallelPaths), ...nums(ow.parallelPaths, cw.parallelPaths) });
-  row({ key: 'layout', group: 'winding', label: 'Layers and style', original: `${ow.layers === 2 ? 'double' : 'single'}-layer ${ow.style}`, candidate: `${cw.layers === 2 ? 'double' : 'single'}-layer ${cw.style}` });
-  row({ key: 'span', group: 'winding', label: 'Coil span (slots)', original: spanText(ow.spans), candidate: spanText(cw.spans) });
+  row({ key: 'layout', group: 'winding', label: 'Layers and style', original: `${layoutLabel(ow)}`, candidate: `${layoutLabel(cw)}` });
+  row({ key: 'span', group: 'winding', label: 'Coil span (slots)', original: spansLabel(ow.spans), candidate: spansLabel(cw.spans) });
   row({ key: 'wires', group: 'winding', label: 'Wires in hand', original: partsLabel(original.wires.map((w) => ({ wire: w, count: w.count }))), candidate: candidate.wires.label });
   row({ key: 'seriesTurns', group: 'winding', label: 'Series turns per phase', original: num(b.seriesTurnsPerPhase, 1), candidate: num(candidate.seriesTurnsPerPhase, 1), ...nums(b.seriesTurnsPerPhase, candidate.seriesTurnsPerPhase) });
   row({ key: 'kw1', group: 'winding', label: 'Winding factor k_w1', original: num(b.windingFactor, 4), candidate: num(candidate.windingFactor, 4), ...nums(b.windingFactor, candidate.windingFactor) });
@@ -130,7 +130,7 @@ export function redesignReport(original: RedesignOriginal, request: RedesignRequ
   const jOld = b.currentDensityAPerMm2;
   const jNew = candidate.currentDensity.aPerMm2;
   const jOut = candidate.currentDensity.ratio > 1 + limits.currentDensityRise + 1e-12 || (jNew !== null && jNew > limits.currentDensityMaxAPerMm2 + 1e-12);
-  row({ key: 'area', group: 'copper', label: 'Copper area per turn', original: `${num(b.conductorAreaMm2, 3)} mm² (${num(b.conductorAreaMm2 * 1973.525, 0)} CM)`, candidate: `${num(candidate.wires.areaMm2, 3)} mm² (${num(candidate.wires.areaMm2 * 1973.525, 0)} CM)`, ...nums(b.conductorAreaMm2, candidate.wires.areaMm2) });
+  row({ key: 'area', group: 'copper', label: 'Copper area per turn', original: `${num(b.conductorAreaMm2, 3)} mm² (${num(mm2ToCircularMils(b.conductorAreaMm2), 0)} CM)`, candidate: `${num(candidate.wires.areaMm2, 3)} mm² (${num(mm2ToCircularMils(candidate.wires.areaMm2), 0)} CM)`, ...nums(b.conductorAreaMm2, candidate.wires.areaMm2) });
   row({
     key: 'currentDensity', group: 'copper', label: 'Current density',
     original: jOld === null ? '— (no rated current on the sheet)' : `${num(jOld, 2)} A/mm² (${num(ampsPerMm2ToCmilPerAmp(jOld), 0)} CM/A)`,
@@ -163,7 +163,7 @@ export function redesignReport(original: RedesignOriginal, request: RedesignRequ
   row({ key: 'current', group: 'rating', label: 'Expected line current', original: original.ratedCurrentA ? `${num(original.ratedCurrentA, 1)} A` : '—', candidate: plate.currentA ? `${num(plate.currentA, 1)} A` : `${num(e.lineCurrentRatio * 100, 1)} % of the original`, values: { original: original.ratedCurrentA ?? null, candidate: plate.currentA }, ratio: e.lineCurrentRatio });
   row({ key: 'power', group: 'rating', label: 'Expected output', original: original.ratedOutputKw ? `${num(original.ratedOutputKw, 2)} kW (${num(kwToHp(original.ratedOutputKw), 1)} hp)` : '—', candidate: plate.outputKw ? `${num(plate.outputKw, 2)} kW (${num(kwToHp(plate.outputKw), 1)} hp)` : `${num(e.powerRatio * 100, 1)} % of the original`, values: { original: original.ratedOutputKw ?? null, candidate: plate.outputKw }, ratio: e.powerRatio });
   const tOld = original.ratedOutputKw && original.ratedSpeedRpm ? torqueNm(original.ratedOutputKw, original.ratedSpeedRpm) : null;
-  row({ key: 'torque', group: 'rating', label: 'Expected torque', original: tOld ? `${num(tOld, 1)} N·m (${num(tOld * 0.737562, 1)} lbf·ft)` : '—', candidate: plate.torqueNm ? `${num(plate.torqueNm, 1)} N·m (${num(plate.torqueNm * 0.737562, 1)} lbf·ft)` : `${num(e.torqueRatio * 100, 0)} % of the original`, values: { original: tOld, candidate: plate.torqueNm }, ratio: e.torqueRatio });
+  row({ key: 'torque', group: 'rating', label: 'Expected torque', original: tOld ? `${num(tOld, 1)} N·m (${num(nmToLbfFt(tOld), 1)} lbf·ft)` : '—', candidate: plate.torqueNm ? `${num(plate.torqueNm, 1)} N·m (${num(nmToLbfFt(plate.torqueNm), 1)} lbf·ft)` : `${num(e.torqueRatio * 100, 0)} % of the original`, values: { original: tOld, candidate: plate.torqueNm }, ratio: e.torqueRatio });
 
   return ok({ candidate, rows, expected: e, nameplate: plate, warnings: redesignWarnings(original, target, candidate) });
 }

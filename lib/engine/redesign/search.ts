@@ -17,6 +17,7 @@ import { allowedTurnsRange, bestCompromiseTurns, ratiosAt, ratioViolations, turn
 import { checkRedesignInput } from './validate';
 import { forEachWireSet, makeWireSet, partsLabel, wireGroups, type WireGroups, type WireSetView } from './wire-sets';
 import type { Candidate, LayoutFamily, RedesignOriginal, RedesignRequest, RedesignSearch, RejectedFamily, StockWire, WireSet } from './types';
+import { spansLabel, layoutLabel } from '../notation';
 
 /** Turn counts tried per family (closest to the original densities first). */
 const TURNS_PER_FAMILY = 3;
@@ -212,8 +213,8 @@ function buildCandidate(original: RedesignOriginal, c: FamilyChoice, turns: numb
   if (!ow.turnsPerCoil.every((t) => t === turns) || c.layout.spans.length !== ow.turnsPerCoil.length) changes.push(`turns per coil ${oldTurns} → ${turns}`);
   if (c.connection !== ow.connection) changes.push(`connection ${ow.connection} → ${c.connection}`);
   if (c.paths !== ow.parallelPaths) changes.push(`circuits ${ow.parallelPaths} → ${c.paths}`);
-  if (!sameSpans) changes.push(`span ${ow.spans.map((y) => `1–${y + 1}`).join(', ')} → ${c.layout.spans.map((y) => `1–${y + 1}`).join(', ')}`);
-  if (!sameLayers) changes.push(`${ow.layers === 2 ? 'double' : 'single'}-layer ${ow.style} → ${c.layout.layers === 2 ? 'double' : 'single'}-layer ${c.layout.style}`);
+  if (!sameSpans) changes.push(`span ${spansLabel(ow.spans)} → ${spansLabel(c.layout.spans)}`);
+  if (!sameLayers) changes.push(`${layoutLabel(ow)} → ${layoutLabel(c.layout)}`);
   const oldWires = partsLabel(original.wires.map((w) => ({ wire: w, count: w.count })));
   const newWires = wires.label;
   if (oldWires !== newWires) changes.push(`wire ${oldWires} → ${newWires}`);

@@ -1,6 +1,6 @@
 /**
  * Turns per coil that keep the flux densities inside the limits. With one layout, connection and circuit
- * count, Φ_new/Φ_old = R₁/N_c, R₁ being the ratio at one turn per coil (reference §3); gap and tooth
+ * count, Φ_new/Φ_old = R₁/N_c, R₁ being the ratio at one turn per coil (docs/engineering/redesign.md); gap and tooth
  * densities scale with Φ·P_new/P_old, the yoke with Φ. Each density's limits then bound N_c from both
  * sides, so the allowed whole numbers are an interval found in closed form.
  */

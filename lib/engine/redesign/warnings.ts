@@ -1,5 +1,5 @@
 /**
- * The cautions a careful engineer gives with a redesign, in our own words (reference §3 and §7). Every
+ * The cautions a careful engineer gives with a redesign, in our own words (docs/engineering/redesign.md and safety-notices.md). Every
  * redesign carries the review and certification notices; the others depend on what changed.
  */
 import { synchronousSpeedRpm } from '../speed';

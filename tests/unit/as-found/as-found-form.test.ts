@@ -4,7 +4,7 @@ import { convertTypedLength } from '@/lib/as-found/length-entry';
 import { convertFormLengths, emptySheetForm, formToSheetInput, sheetPathToFormPath, sheetToForm } from '@/lib/as-found/as-found-form';
 import { restoreDraftValues } from '@/lib/as-found/draft-values';
 import { prefillFromNameplate } from '@/lib/as-found/prefill';
-import { EXAMPLE_A_SHEET } from '../engine/winding-fixtures';
+import { EXAMPLE_A_SHEET } from '../../support/fixtures/winding-fixtures';
 
 describe('the sheet form model', () => {
   it('round-trips a saved sheet through the form in mm unchanged', () => {
@@ -73,7 +73,7 @@ describe('the sheet form model', () => {
 });
 
 describe('prefill from the nameplate', () => {
-  // Reference §6: poles from speed, 60 Hz 1750 rpm → 4 poles [derived].
+  // docs/engineering/nameplate-and-speed.md: poles from speed, 60 Hz 1750 rpm → 4 poles [derived].
   it('takes voltage, frequency, poles from speed, current, output, connection and class', () => {
     const f = prefillFromNameplate({ ratedVoltageV: 460, frequencyHz: 60, speedRpm: 1750, currentA: 18.5, outputKw: 11.1855, connection: 'delta', insulationClass: 'f' });
     expect(f.supply).toEqual({ lineVoltageV: '460', frequencyHz: '60', poles: '4', ratedCurrentA: '18.5', ratedOutputKw: '11.186' });

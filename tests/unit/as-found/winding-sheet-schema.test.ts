@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   makeWindingSheetExport, parseWindingSheetExport, parseWindingSheetJson, windingSheetSchema, type WindingSheetInput,
 } from '@/lib/as-found/winding-sheet-schema';
-import { EXAMPLE_A_SHEET } from '../engine/winding-fixtures';
+import { EXAMPLE_A_SHEET } from '../../support/fixtures/winding-fixtures';
 
 const wrap = (sheet: unknown) => ({ format: 'coilwright.winding-sheet', version: 1, exportedAt: '2025-03-01T10:00:00Z', sheet });
 const issuesOf = (data: unknown) => {

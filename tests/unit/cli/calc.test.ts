@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { closedFormFactors } from '@/lib/engine/closed-form';
 import { makeWindingSheetExport, windingSheetSchema } from '@/lib/as-found/winding-sheet-schema';
-import { EXAMPLE_A_SHEET } from '../engine/winding-fixtures';
+import { EXAMPLE_A_SHEET } from '../../support/fixtures/winding-fixtures';
 
 const TSX = join(process.cwd(), 'node_modules/.bin/tsx');
 const dir = mkdtempSync(join(tmpdir(), 'calc-cli-'));
@@ -100,5 +100,38 @@ describe('calc sheet', { timeout: 30_000 }, () => {
     expect(r.code).toBe(2);
     expect(r.stderr.trimEnd().split('\n')).toHaveLength(1);
     expect(r.stderr).toMatch(text);
+  });
+});
+
+describe('calc rescale', { timeout: 30_000 }, () => {
+  const exampleA = ['rescale', '--slots', '36', '--poles', '4', '--span', '7', '--turns', '14', '--voltage', '400', '--frequency', '50'];
+
+  // Ratio checks on example A, ±0.001 [derived, docs/engineering/redesign.md].
+  it.each([
+    { name: '400 V Y 50 Hz → 460 V Y 60 Hz, same winding', extra: ['--to-voltage', '460', '--to-frequency', '60'], ratio: 0.9583, verdict: 'ok' },
+    { name: 'Y → Δ at 400 V, same winding', extra: ['--to-connection', 'delta'], ratio: 1.7321, verdict: 'over-fluxed' },
+    { name: 'Y → Δ with N_c 14 → 24', extra: ['--to-connection', 'delta', '--to-turns', '24'], ratio: 1.0104, verdict: 'ok' },
+    { name: '50 → 60 Hz at 400 V with N_c 14 → 12', extra: ['--to-frequency', '60', '--to-turns', '12'], ratio: 0.9722, verdict: 'ok' },
+    { name: 'span 1–8 → 1–9, same turns', extra: ['--to-span', '8'], ratio: 0.9542, verdict: 'ok' },
+  ])('$name: flux ratio $ratio', ({ extra, ratio, verdict }) => {
+    const r = calc(...exampleA, ...extra, '--json');
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.stdout) as { fluxRatio: number; verdict: string };
+    expect(out.fluxRatio).toBeCloseTo(ratio, 3);
+    expect(out.verdict).toBe(verdict);
+  });
+
+  it('prints the ratios, the verdict and the turns that keep the flux', () => {
+    const r = calc(...exampleA, '--to-connection', 'delta');
+    expect(r.code).toBe(0);
+    expect(r.stdout).toMatch(/flux per pole\s+1\.7321\s+\+73\.2 %/);
+    expect(r.stdout).toMatch(/OVER-FLUXED/);
+    expect(r.stdout).toMatch(/keep the original flux: 24\.25/);
+  });
+
+  it('refuses an impossible pole count with one line', () => {
+    const r = calc(...exampleA, '--to-poles', '5');
+    expect(r.code).toBe(2);
+    expect(r.stderr.trimEnd().split('\n')).toHaveLength(1);
   });
 });

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
+import { sheetFindings } from '@/lib/engine/sheet-findings';
 import { analyseSheet, windingInputFromSheet } from '@/lib/engine/analyse-sheet';
-import { EXAMPLE_A_CORE, EXAMPLE_A_SHEET, errorOf, rel, value } from './winding-fixtures';
+import { EXAMPLE_A_CORE, EXAMPLE_A_SHEET, errorOf, rel, value } from '../../support/fixtures/winding-fixtures';
 
 describe('analyseSheet on example A as a data sheet', () => {
   const a = value(analyseSheet(EXAMPLE_A_SHEET));
@@ -9,12 +10,12 @@ describe('analyseSheet on example A as a data sheet', () => {
     expect(windingInputFromSheet(EXAMPLE_A_SHEET).core).toMatchObject({ ...EXAMPLE_A_CORE, ventDucts: 0, ventDuctWidthM: 0 });
   });
 
-  it('gives the example A flux results (reference §2 worked example A, [derived], ±0.5 %)', () => {
+  it('gives the example A flux results (docs/engineering/flux-density.md worked example A, [derived], ±0.5 %)', () => {
     expect(rel(a.winding.flux?.fluxPerPoleWb ?? NaN, 6.866e-3)).toBeLessThanOrEqual(0.005);
     expect(rel(a.winding.flux?.yoke.tesla ?? NaN, 1.2045)).toBeLessThanOrEqual(0.005);
   });
 
-  // Reference §4 check [derived]: example A with MLT 0.56 m, 2 strands × 0.85 mm.
+  // docs/engineering/wire-and-resistance.md check [derived]: example A with MLT 0.56 m, 2 strands × 0.85 mm.
   it('predicts R_ph(20 °C) 1.4293 Ω and star line-to-line 2.8585 Ω', () => {
     expect(a.resistance?.predictedPhaseOhm20).toBeCloseTo(1.4293, 4);
     expect(a.resistance?.predictedLineToLineOhm20).toBeCloseTo(2.8585, 4);
@@ -36,7 +37,7 @@ describe('analyseSheet on example A as a data sheet', () => {
     expect(a.synchronousRpm).toBe(1500);
   });
 
-  // Reference §3: CM/A = 1973.5 / J [derived]; textbook J 3–5 A/mm² (Sawhney) or 3–8 A/mm² for totally
+  // docs/engineering/redesign.md: CM/A = 1973.5 / J [derived]; textbook J 3–5 A/mm² (Sawhney) or 3–8 A/mm² for totally
   // enclosed machines (Pyrhönen) [from memory].
   it('gives current density in A/mm² and CM/A = 1973.5/J, beside the textbook ranges', () => {
     const j = a.currentDensity;
@@ -45,16 +46,16 @@ describe('analyseSheet on example A as a data sheet', () => {
     expect(j?.typical.map((t) => t.source).join(' ')).toMatch(/Sawhney.*Pyrhönen/);
   });
 
-  // Reference §3: hand insertion of round wire typically ≤ 0.65–0.75 insulated fill of net area
+  // docs/engineering/redesign.md: hand insertion of round wire typically ≤ 0.65–0.75 insulated fill of net area
   // [common practice, from memory]; say which definition.
   it('names its slot-fill definitions and shows the hand-insertion limit', () => {
     expect(a.slotFill.handInsertionLimit).toEqual({ low: 0.65, high: 0.75 });
     expect(a.slotFill.insulatedOverGross).toBeGreaterThan(a.slotFill.bareCopperOverGross);
   });
 
-  it('warns about a resistance unbalance over the limit', () => {
-    const r = value(analyseSheet({ ...EXAMPLE_A_SHEET, resistance: { readings: [2.7, 2.86, 2.9], temperatureC: 20, between: 'line-to-line' } }));
-    expect(r.warnings.join(' ')).toMatch(/unbalance/);
+  it('finds a resistance unbalance over the limit', () => {
+    const sheet = { ...EXAMPLE_A_SHEET, resistance: { readings: [2.7, 2.86, 2.9] as [number, number, number], temperatureC: 20, between: 'line-to-line' as const } };
+    expect(sheetFindings(sheet, value(analyseSheet(sheet))).map((f) => f.id)).toContain('resistance-unbalance');
   });
 
   it('points at the wire row it cannot find', () => {

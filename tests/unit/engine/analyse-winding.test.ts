@@ -1,16 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { analyseWinding, type AnalyseWindingInput } from '@/lib/engine/analyse-winding';
 import type { WindingSpec } from '@/lib/engine/winding-layout';
-import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, singleLayer, value } from './winding-fixtures';
+import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, singleLayer, value } from '../../support/fixtures/winding-fixtures';
 
 const input = (over: Partial<AnalyseWindingInput> = {}): AnalyseWindingInput => ({
   winding: EXAMPLE_A_SPEC, supply: EXAMPLE_A_SUPPLY, core: EXAMPLE_A_CORE, ...over,
 });
 
-describe('analyseWinding on worked example A (reference §1 and §2, [derived])', () => {
+describe('analyseWinding on worked example A (docs/engineering/winding-factor.md and flux-density.md, [derived])', () => {
   const a = value(analyseWinding(input()));
 
-  // Reference §1 notation: α = 180°·P/S electrical; q = S/(3P); τ = S/P.
+  // docs/engineering/winding-factor.md notation: α = 180°·P/S electrical; q = S/(3P); τ = S/P.
   it('reports q, pole pitch and slot angle: q = 3, τ = 9, α = 20°', () => {
     expect(a.q).toMatchObject({ z: 3, d: 1 });
     expect(a.polePitchSlots).toBe(9);
@@ -39,7 +39,7 @@ describe('analyseWinding on worked example A (reference §1 and §2, [derived])'
 });
 
 describe('analyseWinding findings and errors', () => {
-  it('flags fractional windings for engineer review (reference §1, [derived])', () => {
+  it('flags fractional windings for engineer review (docs/engineering/winding-factor.md, [derived])', () => {
     const a = value(analyseWinding(input({ winding: lap(27, 4, 6), core: { ...EXAMPLE_A_CORE, slots: 27 } })));
     expect(a.fractional).toBe(true);
     expect(a.warnings.join(' ')).toMatch(/q = 9\/4.*engineer review/);
@@ -76,7 +76,7 @@ describe('analyseWinding findings and errors', () => {
   });
 });
 
-describe('closed-form cross-check by winding style (reference §1)', () => {
+describe('closed-form cross-check by winding style (docs/engineering/winding-factor.md)', () => {
   it.each([
     ['double-layer concentric 9, 7, 5 (coils on one centre line) [derived]', lap(36, 4, 7, { style: 'concentric', spans: [9, 7, 5], turnsPerCoil: [10, 10, 10] }), 25],
     ['double-layer concentric 9, 9, 6 (no common centre): no closed form', lap(36, 4, 7, { style: 'concentric', spans: [9, 9, 6], turnsPerCoil: [10, 10, 10] }), 0],

@@ -30,7 +30,7 @@ describe('current density', () => {
   });
 
   it('leaves density unchanged when paths double and area per turn halves', () => {
-    // Reference §3: parallel paths a1→a2 changes area per turn ×a1/a2 with current density unchanged.
+    // docs/engineering/redesign.md: parallel paths a1→a2 changes area per turn ×a1/a2 with current density unchanged.
     fc.assert(
       fc.property(fc.double({ min: 0.1, max: 1000, noNaN: true }), fc.double({ min: 0.01, max: 100, noNaN: true }), (i, a) => {
         const one = currentDensity({ lineCurrentA: i, connection: 'delta', parallelPaths: 1, conductorAreaPerTurnMm2: a });

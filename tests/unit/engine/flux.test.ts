@@ -5,11 +5,11 @@ import {
   type FluxInput,
 } from '@/lib/engine/flux';
 import { KILOLINES_PER_IN2_PER_TESLA, teslaToKilolinesPerIn2 } from '@/lib/engine/units';
-import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, rel, singleLayer, value } from './winding-fixtures';
+import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, rel, singleLayer, value } from '../../support/fixtures/winding-fixtures';
 
 const exampleA = () => value(analyseWinding({ winding: EXAMPLE_A_SPEC, supply: EXAMPLE_A_SUPPLY, core: EXAMPLE_A_CORE }));
 
-describe('worked example A (reference §2, [derived], tolerance ±0.5 %)', () => {
+describe('worked example A (docs/engineering/flux-density.md, [derived], tolerance ±0.5 %)', () => {
   // 36 slots, 4 poles, double-layer lap 1–8, N_c 14, a 1, star, 400 V 50 Hz, D 150, L 120, k_fe 0.95,
   // tooth 6.5 mm, OD 240 mm, slot depth 20 mm.
   it.each([
@@ -58,7 +58,7 @@ describe('units and constants', () => {
     expect(EMF_CONSTANT).toBeCloseTo(4.44, 2);
   });
 
-  it('V_ph is V_line/√3 in star and V_line in delta (reference §2)', () => {
+  it('V_ph is V_line/√3 in star and V_line in delta (docs/engineering/flux-density.md)', () => {
     expect(phaseVoltage(400, 'star')).toBeCloseTo(230.94, 2);
     expect(phaseVoltage(400, 'delta')).toBe(400);
   });
@@ -67,7 +67,7 @@ describe('units and constants', () => {
     { name: 'double layer', spec: lap(36, 4, 7, { turnsPerCoil: [14] }), layers: 2 as const, nc: 14, a: 1 },
     { name: 'double layer, 2 paths', spec: lap(36, 4, 7, { turnsPerCoil: [14], parallelPaths: 2 }), layers: 2 as const, nc: 14, a: 2 },
     { name: 'single layer', spec: { ...singleLayer(36, 4, [9]), turnsPerCoil: [20] }, layers: 1 as const, nc: 20, a: 1 },
-  ])('N_ph from the layout equals (S/3 or S/6)·N_c/a: $name (reference §2)', ({ spec, layers, nc, a }) => {
+  ])('N_ph from the layout equals (S/3 or S/6)·N_c/a: $name (docs/engineering/flux-density.md)', ({ spec, layers, nc, a }) => {
     const fromLayout = seriesTurnsPerPhase(layoutOf(spec), a);
     expect(fromLayout).toBe(seriesTurnsFromCoils(36, layers, nc, a));
     expect(fromLayout).toBe(layers === 2 ? (36 / 3) * (nc / a) : (36 / 6) * (nc / a));

@@ -9,7 +9,7 @@ const levels = (ratedVoltageV: number, practice: HipotPractice, testCase: HipotC
 };
 
 describe('hipot test voltages', () => {
-  // Check values [derived from those rules], Rewind engineering reference §5.
+  // Check values [derived from those rules], docs/engineering/electrical-tests.md.
   it.each([
     { v: 460, practice: 'nema', testCase: 'new', ac: 1920, dc: 3264, source: 'NEMA MG 1' }, // NEMA MG 1; ANSI/EASA AR100-2020
     { v: 460, practice: 'nema', testCase: 'repeat', ac: 1536, dc: Math.round(1536 * 1.7), source: 'NEMA MG 1' }, // NEMA MG 1; ANSI/EASA AR100-2020

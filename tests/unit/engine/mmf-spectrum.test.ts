@@ -3,9 +3,9 @@ import { mmfSpectrum, mmfWaveform, type MmfPoint } from '@/lib/engine/mmf-spectr
 import { harmonicWindingFactors } from '@/lib/engine/slot-star';
 import type { SlotTable, WindingSpec } from '@/lib/engine/winding-layout';
 import { fft } from './fft';
-import { lap, layoutOf, singleLayer } from './winding-fixtures';
+import { lap, layoutOf, singleLayer } from '../../support/fixtures/winding-fixtures';
 
-// Source for this file: reference §1 "MMF space harmonics", [derived], verified numerically by FFT of the
+// Source for this file: docs/engineering/winding-factor.md "MMF space harmonics", [derived], verified numerically by FFT of the
 // slot-current staircase (the FFT checks below).
 
 const LAYOUTS: [string, WindingSpec][] = [
@@ -17,7 +17,7 @@ const LAYOUTS: [string, WindingSpec][] = [
   ['36/4 single-layer concentric', singleLayer(36, 4, [11, 9, 7])],
 ];
 
-describe('balanced three-phase MMF (reference §1, [derived])', () => {
+describe('balanced three-phase MMF (docs/engineering/winding-factor.md, [derived])', () => {
   it.each(LAYOUTS)('%s: triplens cancel, 3k+1 orders run forward and 3k−1 backward', (_n, spec) => {
     const layout = layoutOf(spec);
     const kw = new Map(harmonicWindingFactors(layout, 25).map((f) => [f.order, f.kw]));

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { allowedParallelPaths, checkParallelPaths, ruleOfThumbParallelPaths } from '@/lib/engine/parallel-paths';
 import type { WindingSpec } from '@/lib/engine/winding-layout';
-import { errorOf, lap, layoutOf, singleLayer, value } from './winding-fixtures';
+import { errorOf, lap, layoutOf, singleLayer, value } from '../../support/fixtures/winding-fixtures';
 
-// Source for the check values: reference §3 "Allowed parallel paths", [derived].
-describe('allowed parallel paths check values (reference §3, [derived])', () => {
+// Source for the check values: docs/engineering/redesign.md "Allowed parallel paths", [derived].
+describe('allowed parallel paths check values (docs/engineering/redesign.md, [derived])', () => {
   it.each([
     { s: 36, p: 4, y: 7, allowed: [1, 2, 4] },
     { s: 36, p: 6, y: 5, allowed: [1, 2, 3, 6] },
@@ -16,7 +16,7 @@ describe('allowed parallel paths check values (reference §3, [derived])', () =>
   });
 });
 
-describe('the layout search agrees with the rules of thumb (reference §3, [derived])', () => {
+describe('the layout search agrees with the rules of thumb (docs/engineering/redesign.md, [derived])', () => {
   it.each([
     ['double-layer integral lap: a divides P', lap(72, 8, 8), [1, 2, 4, 8]],
     ['double-layer integral lap: a divides P', lap(48, 4, 10), [1, 2, 4]],

@@ -2,12 +2,12 @@ import { describe, expect, it } from 'vitest';
 import { DEFAULT_BALANCE_TOLERANCE, phaseBalance } from '@/lib/engine/phase-balance';
 import { SlotStar } from '@/lib/engine/slot-star';
 import type { SlotTable, WindingSpec } from '@/lib/engine/winding-layout';
-import { lap, layoutOf, singleLayer } from './winding-fixtures';
+import { lap, layoutOf, singleLayer } from '../../support/fixtures/winding-fixtures';
 
 const balanceOf = (t: SlotTable) => phaseBalance(new SlotStar(t).phasors(t.poles / 2));
 
-// Source: reference §1, slot-star sums prove balance (B and C at ±120° from A, equal magnitude) [derived].
-describe('phase balance from the slot-star sums (reference §1, [derived])', () => {
+// Source: docs/engineering/winding-factor.md, slot-star sums prove balance (B and C at ±120° from A, equal magnitude) [derived].
+describe('phase balance from the slot-star sums (docs/engineering/winding-factor.md, [derived])', () => {
   it.each([
     ['36/4 lap', lap(36, 4, 7)], ['30/4 lap (q = 5/2)', lap(30, 4, 7)], ['27/4 lap (q = 9/4)', lap(27, 4, 6)],
     ['42/4 lap (q = 7/2)', lap(42, 4, 9)], ['36/4 single layer', singleLayer(36, 4, [11, 9, 7])], ['96/4 lap', lap(96, 4, 20)],

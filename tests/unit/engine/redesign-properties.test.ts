@@ -1,8 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { searchRedesign } from '@/lib/engine/redesign/search';
-import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from './redesign-fixtures';
-import { value } from './winding-fixtures';
+import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from '../../support/fixtures/redesign-fixtures';
+import { value } from '../../support/fixtures/winding-fixtures';
 
 const target = fc.record({
   lineVoltageV: fc.integer({ min: 200, max: 1000 }),

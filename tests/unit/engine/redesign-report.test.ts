@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { redesignReport } from '@/lib/engine/redesign/report';
 import { searchRedesign } from '@/lib/engine/redesign/search';
 import { redesignWarnings } from '@/lib/engine/redesign/warnings';
-import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from './redesign-fixtures';
-import { value } from './winding-fixtures';
+import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from '../../support/fixtures/redesign-fixtures';
+import { value } from '../../support/fixtures/winding-fixtures';
 
 /** Searches with the shop defaults, then reports the best candidate against `judgeLimits` (default: the same). */
 function reportFor(target: Parameters<typeof requestFor>[0], judgeLimits: Parameters<typeof requestFor>[1] = {}) {
@@ -20,7 +20,7 @@ const rowOf = (r: ReturnType<typeof reportFor>, key: string) => {
 };
 
 describe('side-by-side report', () => {
-  it('shows example A’s own figures in the original column (reference §2 worked example, ±0.5 %)', () => {
+  it('shows example A’s own figures in the original column (docs/engineering/flux-density.md worked example, ±0.5 %)', () => {
     const r = reportFor({ lineVoltageV: 460, frequencyHz: 60 });
     expect(rowOf(r, 'kw1').values.original).toBeCloseTo(0.9019, 4);
     expect(rowOf(r, 'seriesTurns').values.original).toBe(168);
@@ -29,7 +29,7 @@ describe('side-by-side report', () => {
     within(rowOf(r, 'gapPeak').values.original, 0.7628);
     within(rowOf(r, 'tooth').values.original, 1.617);
     within(rowOf(r, 'yoke').values.original, 1.2045);
-    // Predicted resistance of example A with MLT 560 mm, 2 × 0.85 mm: 1.4293 Ω at 20 °C (reference §4).
+    // Predicted resistance of example A with MLT 560 mm, 2 × 0.85 mm: 1.4293 Ω at 20 °C (docs/engineering/wire-and-resistance.md).
     expect(rowOf(r, 'resistance').values.original).toBeCloseTo(1.4293, 3);
   });
 

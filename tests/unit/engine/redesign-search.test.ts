@@ -3,16 +3,16 @@ import { layoutFamilies } from '@/lib/engine/redesign/families';
 import { searchRedesign } from '@/lib/engine/redesign/search';
 import { stockWire } from '@/lib/engine/redesign/from-sheet';
 import type { Candidate } from '@/lib/engine/redesign/types';
-import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from './redesign-fixtures';
-import { errorOf, value } from './winding-fixtures';
+import { EXAMPLE_A_ORIGINAL, METRIC_STOCK, requestFor } from '../../support/fixtures/redesign-fixtures';
+import { errorOf, value } from '../../support/fixtures/winding-fixtures';
 
 const search = (...args: Parameters<typeof requestFor>) => value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor(...args), METRIC_STOCK));
 const find = (cs: Candidate[], turns: number, paths: number, connection: 'star' | 'delta' = 'star') =>
   cs.find((c) => c.winding.turnsPerCoil[0] === turns && c.winding.parallelPaths === paths && c.winding.connection === connection);
 
-// Ratio check values from the reference §3, baseline example A, tolerance ±0.001 [derived]. The engine's own
+// Ratio check values from docs/engineering/redesign.md, baseline example A, tolerance ±0.001 [derived]. The engine's own
 // supply-scaling tests pin the formula; these check that the search reaches the same windings.
-describe('the search reaches the reference redesigns of example A (reference §3, [derived], ±0.001)', () => {
+describe('the search reaches the reference redesigns of example A (docs/engineering/redesign.md, [derived], ±0.001)', () => {
   it('400 V Y → 400 V Δ proposes N_c 24 on one circuit first, Φ ratio 1.0104', () => {
     const r = search({ connection: 'delta' });
     const best = r.candidates[0];
@@ -65,7 +65,7 @@ describe('the search reaches the reference redesigns of example A (reference §3
 });
 
 describe('families that fail say why', () => {
-  it('4 → 2 poles on the same core: every family fails on the yoke (reference §2: 2.41 T, reject)', () => {
+  it('4 → 2 poles on the same core: every family fails on the yoke (docs/engineering/flux-density.md: 2.41 T, reject)', () => {
     const r = search({ poles: 2 });
     expect(r.candidates).toHaveLength(0);
     expect(r.rejected.length).toBeGreaterThan(0);

@@ -28,7 +28,7 @@ const exampleA: PhaseResistanceInput = {
 const relativelyClose = (a: number, b: number, tol = 1e-9): boolean => Math.abs(a - b) <= tol * Math.max(Math.abs(a), Math.abs(b));
 
 describe('phase resistance, worked example A', () => {
-  // [derived] — Rewind engineering reference §4, tolerance 0.0001 Ω on four-decimal check values.
+  // [derived] — docs/engineering/wire-and-resistance.md, tolerance 0.0001 Ω on four-decimal check values.
   it.each([
     { what: 'R_ph at 20 °C', temperatureC: 20, connection: null, expected: 1.4293 },
     { what: 'R_ph at 25 °C', temperatureC: 25, connection: null, expected: 1.4573 },

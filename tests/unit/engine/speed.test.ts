@@ -10,7 +10,7 @@ import {
 } from '@/lib/engine/speed';
 
 describe('speed and poles', () => {
-  // Rewind engineering reference §6 check values.
+  // docs/engineering/nameplate-and-speed.md check values.
   it.each([
     { hz: 60, rpm: 1750, poles: 4, slipPercent: '2.78' },
     { hz: 50, rpm: 965, poles: 6, slipPercent: '3.50' },
@@ -68,7 +68,7 @@ describe('torque', () => {
     [30, 1475],
     [0.75, 2850],
   ])('%f kW at %i rpm is 9549·P/n N·m', (kw, rpm) => {
-    // Reference §6: T = 9549·P[kW]/n; independently P/ω = 1000·P/(2π·n/60).
+    // docs/engineering/nameplate-and-speed.md: T = 9549·P[kW]/n; independently P/ω = 1000·P/(2π·n/60).
     expect(torqueNm(kw, rpm)).toBeCloseTo((1000 * kw) / ((2 * Math.PI * rpm) / 60), 9);
     expect(Math.abs(torqueNm(kw, rpm) / ((9549 * kw) / rpm) - 1)).toBeLessThan(5e-5);
   });

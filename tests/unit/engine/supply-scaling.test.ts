@@ -1,14 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { fluxRatio, supplyScaling, type ScalingCase } from '@/lib/engine/supply-scaling';
 import type { WindingSpec } from '@/lib/engine/winding-layout';
-import { EXAMPLE_A_SPEC, errorOf, value } from './winding-fixtures';
+import { EXAMPLE_A_SPEC, errorOf, value } from '../../support/fixtures/winding-fixtures';
 
 const baseline: ScalingCase = { winding: EXAMPLE_A_SPEC, supply: { lineVoltageV: 400, frequencyHz: 50 } };
 const moved = (winding: Partial<WindingSpec>, supply: Partial<ScalingCase['supply']> = {}): ScalingCase => ({
   winding: { ...EXAMPLE_A_SPEC, ...winding }, supply: { ...baseline.supply, ...supply },
 });
 
-describe('flux ratio check values, baseline example A (reference §3, [derived], ±0.001)', () => {
+describe('flux ratio check values, baseline example A (docs/engineering/redesign.md, [derived], ±0.001)', () => {
   it.each([
     { name: '400 V Y 50 Hz → 460 V Y 60 Hz, same winding', next: moved({}, { lineVoltageV: 460, frequencyHz: 60 }), ratio: 0.9583, verdict: 'ok' },
     { name: '400 V Y → 400 V Δ, same winding (reject)', next: moved({ connection: 'delta' }), ratio: 1.7321, verdict: 'over-fluxed' },
@@ -24,7 +24,7 @@ describe('flux ratio check values, baseline example A (reference §3, [derived],
   });
 });
 
-describe('redesign rules keep the flux (reference §3 table, [derived])', () => {
+describe('redesign rules keep the flux (docs/engineering/redesign.md table, [derived])', () => {
   it.each([
     { change: 'voltage 400 → 460 V, turns ×460/400', next: moved({ turnsPerCoil: [14 * 460 / 400] }, { lineVoltageV: 460 }) },
     { change: 'star → delta at the same line voltage, turns ×√3', next: moved({ connection: 'delta', turnsPerCoil: [14 * Math.sqrt(3)] }) },

@@ -3,13 +3,13 @@ import {
   canBalance, closedFormFactors, concentricPitchFactor, distributionFactor, pitchFactor, slotsPerPolePerPhase,
 } from '@/lib/engine/closed-form';
 import { harmonicWindingFactors, SlotStar } from '@/lib/engine/slot-star';
-import { lap, layoutOf, singleLayer } from './winding-fixtures';
+import { lap, layoutOf, singleLayer } from '../../support/fixtures/winding-fixtures';
 
-/** Reference §1 check values: double-layer 60°-belt lap, tolerance ±0.0005. */
+/** docs/engineering/winding-factor.md check values: double-layer 60°-belt lap, tolerance ±0.0005. */
 const TOL = 0.0005;
 const CRC = 'CRC Power Electronics and Motor Drives handbook, ch. "AC Machine Windings", Example 2.1';
 
-describe('double-layer 60°-belt lap check values (reference §1)', () => {
+describe('double-layer 60°-belt lap check values (docs/engineering/winding-factor.md)', () => {
   // source beside each row; "—" in the reference (fractional rows) is null here.
   it.each([
     { s: 36, p: 4, y: 9, kd1: 0.9598, kp1: 1.0, kw1: 0.9598, kw5: 0.2176, kw7: 0.1774, source: '[derived]' },
@@ -36,7 +36,7 @@ describe('double-layer 60°-belt lap check values (reference §1)', () => {
   });
 });
 
-describe('slot harmonics ν = k·S/p ± 1 keep the working |k_w| (reference §1, [derived])', () => {
+describe('slot harmonics ν = k·S/p ± 1 keep the working |k_w| (docs/engineering/winding-factor.md, [derived])', () => {
   it.each([
     { s: 36, p: 4, y: 7 },
     { s: 48, p: 4, y: 10 },
@@ -56,7 +56,7 @@ describe('slot harmonics ν = k·S/p ± 1 keep the working |k_w| (reference §1,
   });
 });
 
-describe('single-layer 60°-belt windings have k_w = k_d whatever the end-turn shape (reference §1, [derived])', () => {
+describe('single-layer 60°-belt windings have k_w = k_d whatever the end-turn shape (docs/engineering/winding-factor.md, [derived])', () => {
   it.each([
     { s: 36, p: 4, spans: [11, 9, 7], coiling: 'half' as const },
     { s: 36, p: 4, spans: [9], coiling: 'half' as const },
@@ -77,7 +77,7 @@ describe('single-layer 60°-belt windings have k_w = k_d whatever the end-turn s
   });
 });
 
-describe('closed forms (reference §1)', () => {
+describe('closed forms (docs/engineering/winding-factor.md)', () => {
   it('k_d for integral q matches sin(ν q α/2)/(q sin(ν α/2)) with α = 180°·P/S (Say; Fitzgerald & Kingsley)', () => {
     for (const [s, p] of [[36, 4], [48, 4], [72, 4], [54, 6]] as const) {
       const q = s / (3 * p);
@@ -116,7 +116,7 @@ describe('closed forms (reference §1)', () => {
   });
 });
 
-describe('fractional windings carry even or sub-harmonic orders (reference §1, [derived])', () => {
+describe('fractional windings carry even or sub-harmonic orders (docs/engineering/winding-factor.md, [derived])', () => {
   it('d = 2 (30/4, q = 5/2): even orders appear, no sub-harmonics', () => {
     const f = harmonicWindingFactors(layoutOf(lap(30, 4, 7)), 8);
     expect(f.every((h) => Number.isInteger(h.order))).toBe(true);

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   buildStandardLayout, checkSlotTable, slotRow, usualSingleLayerSpans, windingLayout, type CoilSide, type SlotTable, type WindingSpec,
 } from '@/lib/engine/winding-layout';
-import { errorOf, lap, layoutOf, singleLayer, value } from './winding-fixtures';
+import { errorOf, lap, layoutOf, singleLayer, value } from '../../support/fixtures/winding-fixtures';
 
 describe('the standard layout builder rejects what cannot be wound', () => {
   it.each([

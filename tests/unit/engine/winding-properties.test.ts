@@ -10,7 +10,7 @@ import { harmonicWindingFactors, PHASES } from '@/lib/engine/slot-star';
 import { supplyScaling } from '@/lib/engine/supply-scaling';
 import { buildStandardLayout, type CoilSide, type WindingSpec } from '@/lib/engine/winding-layout';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
-import { BALANCED_COMBINATIONS, EXAMPLE_A_CORE, INTEGRAL_COMBINATIONS, lap, layoutOf, singleLayer, value } from './winding-fixtures';
+import { BALANCED_COMBINATIONS, EXAMPLE_A_CORE, INTEGRAL_COMBINATIONS, lap, layoutOf, singleLayer, value } from '../../support/fixtures/winding-fixtures';
 
 /** A balanced double-layer lap winding with any span from 1 to S − 1. */
 const anyLap = (combos: readonly { slots: number; poles: number }[]) =>

@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { compareFinalResistance, type ExpectedResistance } from '@/lib/final-tests/expected-resistance';
 
-// Worked example A (reference §4) [derived]: R_ph(20 °C) = 1.4293 Ω, star line-to-line 2.8585 Ω,
+// Worked example A (docs/engineering/wire-and-resistance.md) [derived]: R_ph(20 °C) = 1.4293 Ω, star line-to-line 2.8585 Ω,
 // delta 0.9528 Ω; at 25 °C R_ph = 1.4573 Ω (copper, 234.5 + t, IEEE).
 const EXAMPLE_A: ExpectedResistance = { source: 'example A', phaseOhm20: 1.4293, connection: 'star' };
 

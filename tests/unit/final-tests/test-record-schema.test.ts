@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { instrumentSerials, testDataSchema, testRecordFormSchema } from '@/lib/final-tests/test-record-schema';
 import { basisDefaults, newRecordDefaults, recordToFormData } from '@/lib/final-tests/defaults';
 import { liveJudgement } from '@/lib/final-tests/live-judgement';
-import { PASSING, record } from './fixtures';
+import { PASSING, record } from '../../support/fixtures/final-test-fixtures';
 
 const paths = (r: ReturnType<typeof testDataSchema.safeParse>) => (r.success ? [] : r.error.issues.map((i) => i.path.join('.')));
 

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { judgeTestRecord, overallVerdict, type SectionStatus } from '@/lib/final-tests/verdicts';
-import { PASSING, record } from './fixtures';
+import { PASSING, record } from '../../support/fixtures/final-test-fixtures';
 
 const section = (j: ReturnType<typeof judgeTestRecord>, key: string) => j.sections.find((s) => s.key === key)!;
 
@@ -36,7 +36,7 @@ describe('judging a complete record', () => {
     expect(j.overall).toBe('PASS');
     expect(j.derived.ir40MOhm).toBeCloseTo(250, 9); // IEEE 43: 1000 MΩ at 20 °C halves twice to 40 °C
     expect(j.derived.polarizationIndex).toBeCloseTo(3, 12); // IEEE 43: PI = 3000/1000
-    expect(j.derived.hipotLevels).toMatchObject({ acV: 1920, dcV: 3264 }); // reference §5: 460 V NEMA new → 1920 V AC, 3264 V DC
+    expect(j.derived.hipotLevels).toMatchObject({ acV: 1920, dcV: 3264 }); // docs/engineering/electrical-tests.md: 460 V NEMA new → 1920 V AC, 3264 V DC
     // ANSI/EASA AR100 spread on readings corrected 20 → 25 °C with 234.5 (IEEE): the ratio is unchanged.
     expect(j.derived.unbalanceFraction).toBeCloseTo((2.861 - 2.855) / ((2.858 + 2.861 + 2.855) / 3), 12);
     expect(j.derived.correctedOhm?.[0]).toBeCloseTo(2.858 * (234.5 + 25) / (234.5 + 20), 12); // IEEE copper correction
@@ -104,7 +104,7 @@ describe('warnings beside the verdicts', () => {
     expect(section(j, 'run').warnings).toHaveLength(1);
   });
 
-  it('uses the 80 % repeat level and the IEC minimum when the tester picks them (reference §5)', () => {
+  it('uses the 80 % repeat level and the IEC minimum when the tester picks them (docs/engineering/electrical-tests.md)', () => {
     expect(judgeTestRecord(record((d) => { d.hipot.case = 'repeat'; d.hipot.appliedV = 2611; })).derived.hipotLevels?.acV).toBe(1536);
     const iec = judgeTestRecord(record((d) => { d.basis.ratedVoltageV = 230; d.hipot.practice = 'iec'; d.hipot.kind = 'ac'; d.hipot.appliedV = 1500; }));
     expect(iec.derived.hipotLevels?.acV).toBe(1500);

@@ -7,13 +7,13 @@ import { prefillFromNameplate } from '@/lib/as-found/prefill';
 import { sheetToForm } from '@/lib/as-found/as-found-form';
 import { SHEET_MESSAGES } from '@/lib/as-found/as-found-messages';
 import { getAsFoundSheet, getJobForSheet, getLengthUnit, getSheetDraft, listSheetRevisions } from '@/lib/as-found/as-found-queries';
-import { isSheetFrozen } from '@/lib/as-found/as-found-writes';
 import { fmt } from '@/lib/presentation/format';
 import { PhotoUpload } from '../photo-upload';
 import { SheetEditor, type SheetEditorProps } from './_parts/sheet-editor';
 import './sheet.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
+import { isRecordLocked } from '@/lib/jobs/record-locks';
 
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -22,7 +22,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 
 export default async function SheetPage({ params }: { params: Promise<{ number: string }> }) {
   const { user, job } = await loadJobRoute(params, getJobForSheet);
-  const frozen = isSheetFrozen(job.status, job.heldFrom);
+  const frozen = isRecordLocked('asFoundSheet', job.status, job.heldFrom);
   const mayEdit = can(user.role, 'sheet.edit');
   const editable = mayEdit && !frozen;
   const [saved, draftRow, unit] = await Promise.all([getAsFoundSheet(job.id), editable ? getSheetDraft(job.id, user.id) : null, getLengthUnit(user.id)]);
@@ -54,6 +54,9 @@ export default async function SheetPage({ params }: { params: Promise<{ number: 
         {job.customer.company} · {m.manufacturer} {m.model ?? ''} · S/N {m.serial ?? '—'} · {fmt.power(m.outputKw)} · {fmt.num(m.ratedVoltageV, 0, 'V')} · {fmt.num(m.speedRpm, 0, 'rpm')} ·
         status {STATUS_LABELS[job.status]} · {saved ? `saved revision ${saved.revision}, ${fmt.dateTime(saved.updatedAt)}` : 'not recorded yet'}
       </p>
+      {saved && (
+        <p className="no-print"><Link href={`${jobRoutes(job.number).benchPack}?basis=original`}>Bench pack for a rewind to the original winding</Link> (coil groups, connections, wire to draw, coil sizes)</p>
+      )}
       {!saved && initial.source === 'nameplate' && editable && <p className="notice small">New sheet: supply and rating are filled in from the nameplate. Check them against the winding you find.</p>}
       <SheetEditor
         key={job.id}

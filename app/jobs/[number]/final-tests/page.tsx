@@ -1,7 +1,7 @@
 import Link from 'next/link';
 import { can } from '@/lib/auth/permissions';
 import { listStaff } from '@/lib/jobs/job-queries';
-import { CLOSED_STATUSES, STATUS_LABELS } from '@/lib/jobs/status-flow';
+import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
 import { TEST_HAZARD_CAUTIONS } from '@/lib/job-sheet/safety-notices';
 import { getJobForFinalTests, listTestRecords } from '@/lib/final-tests/record-queries';
@@ -16,6 +16,8 @@ import { RecordReadings } from './record-readings';
 import { TestsForm } from './tests-form';
 import './final-tests.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
+import { JobLosses } from '../_losses/job-losses';
+import { isRecordLocked } from '@/lib/jobs/record-locks';
 
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -32,7 +34,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
   const expected = await expectedResistanceFor(job.id, sheet);
   const motor = { ratedVoltageV: job.motor.ratedVoltageV, insulationClass: job.motor.insulationClass, outputKw: job.motor.outputKw, frequencyHz: job.motor.frequencyHz };
   const { sources } = basisDefaults(motor, sheet?.sheet ?? null);
-  const closed = CLOSED_STATUSES.includes(job.status);
+  const closed = isRecordLocked('finalTests', job.status, job.heldFrom);
   const mayRecord = can(user.role, 'tests.record') && !closed;
   const me = staff.find((s) => s.id === user.id)?.id ?? '';
 
@@ -75,6 +77,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
         )}
         {closed && <p className="notice">This job is {STATUS_LABELS[job.status].toLowerCase()}: its test records are kept as they were.</p>}
       </section>
+      <section className="card"><JobLosses jobId={job.id} headingId="losses-h" level="h2" /></section>
 
       {mayRecord && (
         <section className="card">

@@ -3,6 +3,7 @@ import { shippedSnapshotInfo } from '@/lib/job-sheet/job-sheet-snapshot';
 import { loadJobSheet, type Row } from '@/lib/job-sheet/job-sheet-data';
 import { OverallVerdict, SectionVerdict } from '../final-tests/judgement-view';
 import { PrintButton } from './print-button';
+import { LossStatementView } from '../_losses/loss-statement-view';
 import '../final-tests/final-tests.css';
 import './job-sheet.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
@@ -106,6 +107,7 @@ export default async function JobSheetPage({ params }: { params: Promise<{ numbe
             </>
           ) : <p>No final tests have been recorded yet.</p>}
         </section>
+        <LossStatementView result={d.losses} headingId="js-losses" level="h2" />
 
         <section aria-labelledby="js-sign">
           <h2 id="js-sign">Signatures</h2>

@@ -1,8 +1,8 @@
 import type { Candidate, RedesignSearch } from '@/lib/engine/redesign/types';
 import { ChooseButton } from './choose-button';
+import { spansLabel } from '@/lib/engine/notation';
 
 const pct = (r: number): string => (Math.abs(r - 1) < 0.0005 ? '±0.0 %' : `${r >= 1 ? '+' : '−'}${Math.abs((r - 1) * 100).toFixed(1)} %`);
-const spanText = (spans: readonly number[]): string => spans.map((y) => `1–${y + 1}`).join(', ');
 
 /** How many candidates show before the "more" fold. */
 const SHOWN = 12;
@@ -13,7 +13,7 @@ function Row({ c, choose, chosen, fillLimit }: { c: Candidate; choose: { redesig
     <tr className={chosen ? 'chosen' : undefined} data-key={c.key}>
       <td className="num">{c.rank}{chosen && <><br /><span className="tag">chosen</span></>}</td>
       <td>
-        <strong>{w.turnsPerCoil.join('/')} turns</strong> · {w.connection === 'star' ? 'star (Y)' : 'delta (Δ)'} · {w.parallelPaths} circuit{w.parallelPaths === 1 ? '' : 's'} · {spanText(w.spans)}{w.layers === 1 ? ' single layer' : ''}
+        <strong>{w.turnsPerCoil.join('/')} turns</strong> · {w.connection === 'star' ? 'star (Y)' : 'delta (Δ)'} · {w.parallelPaths} circuit{w.parallelPaths === 1 ? '' : 's'} · {spansLabel(w.spans)}{w.layers === 1 ? ' single layer' : ''}
         <br /><span className="small">{c.wires.label}</span>
       </td>
       <td className="num">{pct(c.ratios.gap)} / {pct(c.ratios.tooth)} / {pct(c.ratios.yoke)}</td>

@@ -12,10 +12,12 @@ import { fmt } from '@/lib/presentation/format';
 import { RequestForm } from './request-form';
 import { CandidateTable } from './candidate-table';
 import { Cautions, ComparisonTable, NameplateProposal } from './comparison';
+import { JobLosses } from '../_losses/job-losses';
 import { ApproveForm } from './approve-form';
 import './redesign.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
+import { spansLabel, layoutLabel } from '@/lib/engine/notation';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
@@ -47,7 +49,7 @@ function RevisionList({ revisions, selected, number }: { revisions: RedesignRevi
           <span className="rev-status">{r.status === 'APPROVED' ? 'approved' : 'draft'}</span>
           {r === current && <strong> · current approved design</strong>}
           {r.status === 'APPROVED'
-            ? <> · by {r.approvedBy ?? '—'} on {fmt.dateTime(r.approvedAt)} · <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>printable winding</Link></>
+            ? <> · by {r.approvedBy ?? '—'} on {fmt.dateTime(r.approvedAt)} · <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>printable winding</Link> · <Link href={`${jobRoutes(number).benchPack}?rev=${r.revision}`}>bench pack</Link></>
             : <> · opened by {r.createdBy ?? '—'}, last changed {fmt.dateTime(r.updatedAt)}</>}
           {' · '}<span className="small muted">{r.request.target.lineVoltageV} V {r.request.target.frequencyHz} Hz, {r.request.target.poles} poles</span>
         </li>
@@ -128,7 +130,7 @@ function AsFound({ ctx }: { ctx: RedesignContext }) {
     <dl className="dl">
       <dt>Supply</dt><dd>{s.supply.lineVoltageV} V {s.supply.frequencyHz} Hz, {s.supply.poles} poles, {w.connection} · {fmt.num(s.supply.ratedCurrentA, 1, 'A')} · {fmt.power(s.supply.ratedOutputKw)}</dd>
       <dt>Core</dt><dd>{s.core.slots} slots · bore {s.core.boreMm} mm · length {s.core.coreLengthMm} mm · OD {s.core.outsideDiameterMm} mm</dd>
-      <dt>Winding</dt><dd>{w.layers === 2 ? 'double' : 'single'}-layer {w.style}, span {w.spans.map((y) => `1–${y + 1}`).join(', ')}, {w.turnsPerCoil.join('/')} turns, {w.parallelPaths} circuit(s)</dd>
+      <dt>Winding</dt><dd>{layoutLabel(w)}, span {spansLabel(w.spans)}, {w.turnsPerCoil.join('/')} turns, {w.parallelPaths} circuit(s)</dd>
       <dt>Wires in hand</dt><dd>{ctx.original.wires.map((x) => `${x.count} × ${x.label}`).join(' + ')}</dd>
       <dt>Sheet</dt><dd>revision {ctx.sheet.revision}, saved {fmt.dateTime(ctx.sheet.updatedAt)} · stock: {ctx.stock.length} sizes</dd>
     </dl>
@@ -143,9 +145,10 @@ function ApprovedRevision({ r, number }: { r: RedesignRevision; number: number }
       <h2 id="approved-h">Revision {r.revision}: approved and frozen</h2>
       <p className="notice ok">
         Approved by <strong>{snap.approval.byName}</strong> on {fmt.dateTime(new Date(snap.approval.at))}. Note: “{snap.approval.note}”. Candidate {snap.search.rank} of {snap.search.candidatesFound}.
-        This revision cannot be changed: a new request opens the next revision. <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>Printable winding for the winder</Link>
+        This revision cannot be changed: a new request opens the next revision. <Link href={`/jobs/${number}/redesign/print?rev=${r.revision}`}>Printable winding for the winder</Link> · <Link href={`${jobRoutes(number).benchPack}?rev=${r.revision}`}>Winder’s bench pack (groups, connections, wire, coil sizes)</Link>
       </p>
       <ComparisonTable report={snap.report} />
+      <JobLosses jobNumber={number} comparing={snap.report} headingId="losses-approved-h" />
       <h3>Proposed supplementary nameplate</h3>
       <NameplateProposal report={snap.report} />
       <h3>Cautions</h3>
@@ -172,6 +175,7 @@ function DraftRevision({ r, ctx, canEdit, mayApprove }: { r: RedesignRevision; c
         <section className="card" aria-labelledby="chosen-h" id="chosen">
           <h2 id="chosen-h">Candidate {chosen.rank} beside the as-found winding</h2>
           <ComparisonTable report={report.value} />
+          <JobLosses jobId={ctx.sheet.jobId} comparing={report.value} headingId="losses-draft-h" />
           <h3>Proposed supplementary nameplate</h3>
           <NameplateProposal report={report.value} />
           <h3>Cautions</h3>

@@ -1,17 +1,18 @@
 'use client';
 
 /** The slot diagram (with its table alternative) and the MMF plots, drawn from the live analysis. */
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
+import { useHydrated } from '@/app/_components/use-hydrated';
 import type { LiveAnalysis } from '@/lib/as-found/live-analysis';
 import { MmfCharts } from './mmf-charts';
 import { SlotDiagram, SlotTableView } from './slot-diagram';
+import { spansLabel } from '@/lib/engine/notation';
 
 
 export function Pictures({ live }: { live: LiveAnalysis }) {
   const [showTable, setShowTable] = useState(false);
   // Charts measure their container, which only exists in the browser: draw them after hydration.
-  const [mounted, setMounted] = useState(false);
-  useEffect(() => setMounted(true), []);
+  const mounted = useHydrated();
   const w = live.winding;
   const style = live.sheet?.winding.style ?? '';
   const spans = live.sheet?.winding.spans;
@@ -23,7 +24,7 @@ export function Pictures({ live }: { live: LiveAnalysis }) {
       </section>
     );
   }
-  const caption = `${w.layout.layers === 2 ? 'double' : 'single'}-layer ${w.layout.source === 'explicit' ? '(winder’s slot table)' : style}${spans ? `, span${spans.length > 1 ? 's' : ''} ${spans.map((y) => `1–${y + 1}`).join(', ')}` : ''}`;
+  const caption = `${w.layout.layers === 2 ? 'double' : 'single'}-layer ${w.layout.source === 'explicit' ? '(winder’s slot table)' : style}${spans ? `, span${spans.length > 1 ? 's' : ''} ${spansLabel(spans)}` : ''}`;
   return (
     <section className="card pictures" aria-labelledby="pics-h">
       <h2 id="pics-h">Slot diagram and MMF</h2>

@@ -2,7 +2,7 @@ import Link from 'next/link';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import { mmToInches } from '@/lib/engine/units';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
-import { sheetConsistency } from '@/lib/as-found/consistency';
+import { sheetFindings } from '@/lib/engine/sheet-findings';
 import { getAsFoundSheet, getJobForSheet } from '@/lib/as-found/as-found-queries';
 import { fmt } from '@/lib/presentation/format';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
@@ -11,6 +11,8 @@ import { SlotDiagram } from '../_parts/slot-diagram';
 import '../sheet.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
+import { spanLabel, spansLabel, layoutLabel } from '@/lib/engine/notation';
+import { kgToLb } from '@/lib/engine/units';
 
 
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
@@ -40,14 +42,14 @@ function sheetRows(s: WindingSheet) {
   ];
   const winding: [string, string][] = [
     ['Layout', `${w.layers === 2 ? 'Double' : 'Single'}-layer ${w.style}${w.singleLayerCoiling ? `, ${w.singleLayerCoiling}-coiled` : ''}`],
-    ['Spans', w.spans.map((y) => `1–${y + 1} (${y})`).join(', ')],
+    ['Spans', w.spans.map((y) => `${spanLabel(y)} (${y})`).join(', ')],
     ['Turns per coil', w.turnsPerCoil.join(' / ')],
     ['Coils/group × groups', `${w.coilsPerGroup ?? '—'} × ${w.groups ?? '—'}`],
     ['Parallel circuits', String(w.parallelPaths)], ['Connection', w.connection === 'star' ? 'Star (Y)' : 'Delta (Δ)'],
     ['Leads', `${w.leads ?? '—'}${w.leadMarkings ? ` · ${w.leadMarkings}` : ''}`],
     ['Wires in hand', s.wires.map((x) => `${x.count} × ${x.standard === 'awg' ? `AWG ${x.size}` : `${x.size} mm`} grade ${x.enamelGrade}`).join(' + ')],
     ['Mean turn length', len(w.meanTurnLengthMm, 0)], ['Coil extension', len(w.coilExtensionMm, 0)],
-    ['Copper weight', w.copperWeightKg === undefined ? '—' : `${fmt.num(w.copperWeightKg, 2)} kg (${fmt.num(w.copperWeightKg * 2.20462, 2)} lb)`],
+    ['Copper weight', w.copperWeightKg === undefined ? '—' : `${fmt.num(w.copperWeightKg, 2)} kg (${fmt.num(kgToLb(w.copperWeightKg), 2)} lb)`],
     ['Insulation', `Class ${s.insulation.thermalClass} · liner ${s.insulation.slotLiner ?? '—'} · wedges ${s.insulation.wedges ?? '—'} · varnish ${s.insulation.varnish ?? '—'}`],
     ['Supply', `${fmt.num(s.supply.lineVoltageV, 0, 'V')} · ${fmt.num(s.supply.frequencyHz, 0, 'Hz')} · ${s.supply.poles} poles · ${fmt.num(s.supply.ratedCurrentA, 1, 'A')} · ${fmt.power(s.supply.ratedOutputKw)}`],
     ['Resistance', s.resistance ? `${s.resistance.readings.map((r) => fmt.num(r, 4)).join(' / ')} Ω ${s.resistance.between} at ${s.resistance.temperatureC} °C` : '—'],
@@ -62,7 +64,7 @@ export default async function SheetPrintPage({ params }: { params: Promise<{ num
   if (!saved) return <>{back}<h1>As-found data sheet · job {job.number}</h1><p className="notice warn">No data sheet has been saved for this job yet; drafts are not printed.</p></>;
   const s = saved.sheet;
   const a = analyseSheet(s);
-  const findings = a.ok ? sheetConsistency(s, a.value) : [];
+  const findings = a.ok ? sheetFindings(s, a.value) : [];
   const rows = sheetRows(s);
   const m = job.motor;
   return (
@@ -81,7 +83,7 @@ export default async function SheetPrintPage({ params }: { params: Promise<{ num
       {s.notes && <p className="small"><strong>Notes:</strong> {s.notes}</p>}
       {a.ok ? (
         <div className="diagram-box">
-          <SlotDiagram table={a.value.winding.layout} caption={`${s.winding.layers === 2 ? 'double' : 'single'}-layer ${s.winding.style}, span${s.winding.spans.length > 1 ? 's' : ''} ${s.winding.spans.map((y) => `1–${y + 1}`).join(', ')}`} id="print-diagram" />
+          <SlotDiagram table={a.value.winding.layout} caption={`${layoutLabel(s.winding)}, span${s.winding.spans.length > 1 ? 's' : ''} ${spansLabel(s.winding.spans)}`} id="print-diagram" />
           <section>
             <h2>Analysis</h2>
             <Rows rows={[

@@ -1,4 +1,5 @@
 import Link from 'next/link';
+import { jobRoutes } from '@/lib/routes';
 import { z } from 'zod';
 import { getJobByNumber } from '@/lib/jobs/job-queries';
 import { listRedesigns } from '@/lib/redesign/redesign-queries';
@@ -8,6 +9,7 @@ import { Cautions, ComparisonTable, NameplateProposal } from '../comparison';
 import { PrintButton } from '../print-button';
 import '../redesign.css';
 import { loadJobRoute } from '@/lib/jobs/job-route';
+import { spanLabel, layoutLabel } from '@/lib/engine/notation';
 
 const searchSchema = z.object({ rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined) });
 
@@ -36,7 +38,7 @@ export default async function RedesignPrintPage({ params, searchParams }: { para
   const isCurrent = approved[0]?.revision === r.revision;
   return (
     <div className="winder-sheet">
-      <p className="no-print row"><Link href={`/jobs/${job.number}/redesign?rev=${r.revision}`}>← Redesign</Link> <PrintButton label="Print this winding" /></p>
+      <p className="no-print row"><Link href={`/jobs/${job.number}/redesign?rev=${r.revision}`}>← Redesign</Link> <PrintButton label="Print this winding" /> <Link className="btn secondary" href={`${jobRoutes(job.number).benchPack}?rev=${r.revision}`}>Bench pack: groups, connections, wire, coil sizes</Link></p>
       <h1>Approved winding · job {job.number} · revision {r.revision}</h1>
       <p className={isCurrent ? 'notice ok' : 'notice bad'}>
         {isCurrent ? 'Current approved revision.' : `Superseded: revision ${approved[0]?.revision} is the current approved revision. Do not wind from this one.`}{' '}
@@ -54,8 +56,8 @@ export default async function RedesignPrintPage({ params, searchParams }: { para
         <h2 id="wind-h">Wind this</h2>
         <dl className="dl">
           <dt>Slots, poles</dt><dd>{w.slots} slots, {w.poles} poles</dd>
-          <dt>Layers, style</dt><dd>{w.layers === 2 ? 'double' : 'single'}-layer {w.style}{w.singleLayerCoiling ? `, ${w.singleLayerCoiling}-coiled` : ''}</dd>
-          <dt>Coil span</dt><dd>{w.spans.map((y) => `1–${y + 1} (${y} slot pitches)`).join(', ')}</dd>
+          <dt>Layers, style</dt><dd>{layoutLabel(w)}{w.singleLayerCoiling ? `, ${w.singleLayerCoiling}-coiled` : ''}</dd>
+          <dt>Coil span</dt><dd>{w.spans.map((y) => `${spanLabel(y)} (${y} slot pitches)`).join(', ')}</dd>
           <dt>Turns per coil</dt><dd><strong>{w.turnsPerCoil.join(' / ')}</strong></dd>
           <dt>Parallel circuits</dt><dd><strong>{w.parallelPaths}</strong></dd>
           <dt>Connection</dt><dd><strong>{w.connection === 'star' ? 'star (Y)' : 'delta (Δ)'}</strong></dd>

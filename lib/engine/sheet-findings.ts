@@ -1,11 +1,12 @@
 /**
- * Consistency checks a winder wants before the old coils go in the scrap bin: each finding says what looks
- * wrong and what to check. Pure: takes a checked sheet and its engine analysis (lib/engine/analyse-sheet.ts)
+ * The findings on a winding data sheet: the one set of checks the live analysis, the print view and the
+ * command line all show (each finding says what looks wrong and what to check), so no rule is judged twice
+ * in different words. What a winder wants before the old coils go in the scrap bin. Pure: takes a checked sheet and its engine analysis (lib/engine/analyse-sheet.ts)
  * and repeats none of the engine's calculations, only compares what the winder counted against them.
  */
-import { COPPER_DENSITY_KG_PER_M3 } from '@/lib/engine/copper';
-import type { SheetAnalysis } from '@/lib/engine/analyse-sheet';
-import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
+import { COPPER_DENSITY_KG_PER_M3 } from './copper';
+import type { SheetAnalysis } from './analyse-sheet';
+import type { WindingSheetData as WindingSheet } from './winding-sheet';
 
 export type FindingSeverity = 'problem' | 'check' | 'note';
 
@@ -28,12 +29,9 @@ export const COPPER_WEIGHT_AGREEMENT_PERCENT = 25;
 /** Lead counts of three-phase stators: 3 (one voltage), 6 (star-delta or two-voltage delta), 9 and 12 (two-voltage) [common practice]. */
 export const USUAL_LEAD_COUNTS = [3, 6, 9, 12] as const;
 
-export interface ConsistencyOptions {
+export interface FindingOptions {
   resistanceAgreementPercent?: number;
 }
-
-/** Coils a standard winding has: one per slot double layer, one per two slots single layer. */
-export const expectedCoils = (slots: number, layers: 1 | 2): number => (layers === 2 ? slots : slots / 2);
 
 /** Coil groups: one per pole per phase (3P), or one per pole pair per phase (3P/2) when single-layer half-coiled. */
 export const expectedGroups = (poles: number, layers: 1 | 2, coiling?: 'whole' | 'half'): number =>
@@ -46,7 +44,6 @@ function countChecks(sheet: WindingSheet, a: SheetAnalysis): SheetFinding[] {
   const { slots } = sheet.core;
   const { poles } = sheet.supply;
   const w = sheet.winding;
-  const coils = expectedCoils(slots, w.layers);
   const groups = expectedGroups(poles, w.layers, w.singleLayerCoiling);
   const layoutCoils = a.winding.layout.sides.length / 2;
   if (w.coilsPerGroup !== undefined && w.groups !== undefined && w.coilsPerGroup * w.groups !== layoutCoils)
@@ -172,7 +169,7 @@ function ratingChecks(sheet: WindingSheet, a: SheetAnalysis): SheetFinding[] {
 }
 
 /** Every finding, problems first. */
-export function sheetConsistency(sheet: WindingSheet, analysis: SheetAnalysis, options: ConsistencyOptions = {}): SheetFinding[] {
+export function sheetFindings(sheet: WindingSheet, analysis: SheetAnalysis, options: FindingOptions = {}): SheetFinding[] {
   const order: Record<FindingSeverity, number> = { problem: 0, check: 1, note: 2 };
   return [
     ...countChecks(sheet, analysis),

@@ -1,13 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { analyseSheet } from '@/lib/engine/analyse-sheet';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
-import { expectedCoils, expectedGroups, RESISTANCE_AGREEMENT_PERCENT, sheetConsistency } from '@/lib/as-found/consistency';
-import { EXAMPLE_A_SHEET, value } from '../engine/winding-fixtures';
+import { expectedGroups, RESISTANCE_AGREEMENT_PERCENT, sheetFindings } from '@/lib/engine/sheet-findings';
+import { EXAMPLE_A_SHEET, value } from '../../support/fixtures/winding-fixtures';
 
-const findings = (s: WindingSheet) => sheetConsistency(s, value(analyseSheet(s)));
+const findings = (s: WindingSheet) => sheetFindings(s, value(analyseSheet(s)));
 const ids = (s: WindingSheet) => findings(s).map((f) => f.id);
 
-/** 36 slots, 4 poles, single-layer concentric half-coiled, spans 11/9/7 (usual τ+q−1, −2 …) [derived, reference §1]. */
+/** 36 slots, 4 poles, single-layer concentric half-coiled, spans 11/9/7 (usual τ+q−1, −2 …) [derived, docs/engineering/winding-factor.md]. */
 const CONCENTRIC: WindingSheet = {
   ...EXAMPLE_A_SHEET,
   winding: { layers: 1, style: 'concentric', singleLayerCoiling: 'half', spans: [11, 9, 7], turnsPerCoil: [28, 28, 28], parallelPaths: 1, connection: 'star', coilsPerGroup: 3, groups: 6 },
@@ -15,16 +15,11 @@ const CONCENTRIC: WindingSheet = {
 };
 
 describe('consistency checks of an as-found sheet', () => {
-  it('finds nothing wrong with worked example A (reference §2, §4)', () => {
+  it('finds nothing wrong with worked example A (docs/engineering/flux-density.md and wire-and-resistance.md)', () => {
     expect(findings(EXAMPLE_A_SHEET)).toEqual([]);
   });
 
-  // Coils: double layer one per slot, single layer one per two slots; groups 3P, or 3P/2 half-coiled [common practice].
-  it.each([
-    [36, 2, 36],
-    [36, 1, 18],
-    [48, 2, 48],
-  ] as const)('%s slots, %s layer(s) → %s coils', (slots, layers, coils) => expect(expectedCoils(slots, layers)).toBe(coils));
+  // Groups: 3P, or 3P/2 single-layer half-coiled [common practice]. (Coil counts come from the engine's layout.)
   it.each([
     [4, 2, undefined, 12],
     [4, 1, 'half', 6],
@@ -46,14 +41,14 @@ describe('consistency checks of an as-found sheet', () => {
     expect(ids({ ...CONCENTRIC, winding: { ...CONCENTRIC.winding, coilsPerGroup: 2, groups: 9 } })).toContain('coils-per-group');
   });
 
-  // Reference §3: single-layer half-coiled allows a dividing P/2 → 1, 2 for 4 poles [derived].
+  // docs/engineering/redesign.md: single-layer half-coiled allows a dividing P/2 → 1, 2 for 4 poles [derived].
   it('flags parallel circuits the layout cannot have and names the possible ones', () => {
     const f = findings({ ...CONCENTRIC, winding: { ...CONCENTRIC.winding, parallelPaths: 4 } }).find((x) => x.id === 'parallel-paths');
     expect(f?.severity).toBe('problem');
     expect(f?.message).toMatch(/Possible: 1, 2\./);
   });
 
-  // Resistance ∝ turns at fixed wire and MLT (reference §4): 20 % high readings imply 14 × 1.2 ≈ 17 turns.
+  // Resistance ∝ turns at fixed wire and MLT (docs/engineering/wire-and-resistance.md): 20 % high readings imply 14 × 1.2 ≈ 17 turns.
   it('flags turns that disagree with the measured resistance, with the turns the readings imply', () => {
     const r = EXAMPLE_A_SHEET.resistance!;
     const s = { ...EXAMPLE_A_SHEET, resistance: { ...r, readings: r.readings.map((x) => x * 1.2) as [number, number, number] } };
@@ -66,7 +61,7 @@ describe('consistency checks of an as-found sheet', () => {
     const r = EXAMPLE_A_SHEET.resistance!;
     const s = { ...EXAMPLE_A_SHEET, resistance: { ...r, readings: r.readings.map((x) => x * 1.08) as [number, number, number] } };
     expect(ids(s)).not.toContain('resistance-turns');
-    expect(sheetConsistency(s, value(analyseSheet(s)), { resistanceAgreementPercent: 5 }).map((f) => f.id)).toContain('resistance-turns');
+    expect(sheetFindings(s, value(analyseSheet(s)), { resistanceAgreementPercent: 5 }).map((f) => f.id)).toContain('resistance-turns');
   });
 
   it('notes an unusual lead count and a copper weight far from the turns and wire', () => {
@@ -77,7 +72,7 @@ describe('consistency checks of an as-found sheet', () => {
   });
 
   it('reports flux too high for the supply with the limit it used', () => {
-    // Half the turns doubles the flux per pole: yoke 2 × 1.2045 T (reference §2) is above 1.7 T.
+    // Half the turns doubles the flux per pole: yoke 2 × 1.2045 T (docs/engineering/flux-density.md) is above 1.7 T.
     const s = { ...EXAMPLE_A_SHEET, winding: { ...EXAMPLE_A_SHEET.winding, turnsPerCoil: [7] }, resistance: undefined };
     const f = findings(s);
     expect(f.map((x) => x.id)).toEqual(expect.arrayContaining(['flux-yoke', 'flux-tooth']));
