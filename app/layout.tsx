@@ -38,7 +38,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
           {user && (
             <div className="who">
               <span>
-                {user.name} <span className="muted">({ROLE_LABELS[user.role]})</span>
+                {user.name} <span className="role-label">({ROLE_LABELS[user.role]})</span>
               </span>
               <form action={signOut}>
                 <button type="submit">Sign out</button>

@@ -53,7 +53,7 @@ const REDESIGN_ORIGINAL: RedesignOriginal = {
   supply: { lineVoltageV: 400, frequencyHz: 50 },
   core: { boreM: 0.2, coreLengthM: 0.16, outsideDiameterM: 0.31, slots: 48, slotDepthM: 0.024, toothWidthM: 0.0068, stackingFactor: 0.95 },
   grossSlotAreaMm2: 150,
-  wires: [{ label: '1.120 mm', enamelGrade: 2, bareMm: 1.12, overallMm: 1.18, areaMm2: (Math.PI / 4) * 1.12 ** 2, count: 2 }],
+  wires: [{ label: '1.120 mm', standard: 'metric', size: '1.12', enamelGrade: 2, bareMm: 1.12, overallMm: 1.18, areaMm2: (Math.PI / 4) * 1.12 ** 2, count: 2 }],
   meanTurnLengthMm: 700,
   ratedCurrentA: 9,
 };
@@ -70,7 +70,7 @@ const REDESIGN_STOCK: StockWire[] = [
 
 /** 400 V Y 50 Hz → 460 V 60 Hz, either connection, spans 1–10 … 1–13, every allowed circuit count. */
 const REDESIGN_REQUEST: RedesignRequest = {
-  target: { lineVoltageV: 460, frequencyHz: 60, poles: 4, connection: 'either', spans: [9, 10, 11, 12], layers: 'keep', parallelPaths: [] },
+  target: { lineVoltageV: 460, frequencyHz: 60, poles: 4, connection: 'either', spans: [9, 10, 11, 12], layers: 'keep', parallelPaths: [], allowOverPitch: false },
   limits: DEFAULT_REDESIGN_LIMITS,
 };
 

@@ -40,7 +40,9 @@ export function NameplateFields({
     <fieldset>
       <legend>Motor and nameplate</legend>
       <div className="grid">
-        {text('manufacturer', 'Manufacturer')}
+        <p className="small wide" id={id('required-note')}>Fields marked * are required. A plate that cannot be read: tick “Plate unreadable”; rated voltage, frequency and speed may then be left blank and are recorded as unknown (write “unknown” as the manufacturer if that is unreadable too).</p>
+        <label className="wide"><input type="checkbox" {...register(p('plateUnreadable'))} /> Plate unreadable</label>
+        {text('manufacturer', 'Manufacturer *')}
         {text('model', 'Model / type')}
         {text('serial', 'Serial number')}
         {text('frame', 'Frame')}
@@ -53,7 +55,7 @@ export function NameplateFields({
             </select>
           </div>
         </Field>
-        {num('ratedVoltageV', 'Rated voltage', 'V', 'Line voltage the winding is connected for')}
+        {num('ratedVoltageV', 'Rated voltage *', 'V', 'Line voltage the winding is connected for')}
         {text('voltages', 'All nameplate voltages', 'e.g. 230/460 or 400/690')}
         <Field id={id('connection')} label="Connection" error={e('connection')}>
           <select {...register(p('connection'), { setValueAs: (v: string) => (v === '' ? undefined : v) })} {...describe(id('connection'), e('connection'))}>
@@ -62,9 +64,9 @@ export function NameplateFields({
           </select>
         </Field>
         {num('currentA', 'Full-load current', 'A')}
-        {num('frequencyHz', 'Frequency', 'Hz')}
+        {num('frequencyHz', 'Frequency *', 'Hz')}
         <div>
-          {num('speedRpm', 'Rated speed', 'rpm')}
+          {num('speedRpm', 'Rated speed *', 'rpm')}
           <SpeedReadout frequencyHz={frequencyHz} speedRpm={speedRpm} />
         </div>
         <Field id={id('phases')} label="Phases" error={e('phases')}>

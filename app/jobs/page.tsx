@@ -88,7 +88,7 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
         {board.scope === 'any' && !q.status.includes('ANY') ? ' (a search with a number looks across every status)' : ''}
       </p>
       <div style={{ overflowX: 'auto' }}>
-        <table>
+        <table className="board">
           <caption className="sr-only">Jobs, {sortInWords(q)}</caption>
           <thead>
             <tr>

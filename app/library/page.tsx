@@ -8,6 +8,7 @@ import { getLengthUnit } from '@/lib/as-found/as-found-queries';
 import { fmt } from '@/lib/presentation/format';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { UseForJob } from './use-for-job';
+import { TableScroll } from '@/app/_components/table-scroll';
 import '../jobs/[number]/as-found/sheet.css';
 import { jobRoutes } from '@/lib/routes';
 import { spansLabel, layoutLabel } from '@/lib/engine/notation';
@@ -94,18 +95,21 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
       {compared.length > 0 && (
         <section className="card" aria-labelledby="cmp-h">
           <h2 id="cmp-h">Side by side</h2>
-          <table>
+          <TableScroll label="Sheets side by side">
+          <table className="side-by-side">
+            <caption className="sr-only">Sheets side by side; rows where they differ are marked “differs”</caption>
             <thead><tr><th scope="col">Job</th>{compared.map((c) => <th key={c.id} scope="col"><Link href={jobRoutes(c.jobNumber).asFoundPrint}>Job {c.jobNumber}</Link> <span className="muted">{c.manufacturer} {c.model}</span></th>)}</tr></thead>
             <tbody>
               {COMPARE_ROWS.map(([label, f]) => {
                 const cells = compared.map((c) => f(c.sheet, unit));
                 const differ = new Set(cells).size > 1;
-                return <tr key={label} className={differ ? 'is-warn' : undefined}><th scope="row">{label}{differ && <span className="sr-only"> (differs)</span>}</th>{cells.map((v, i) => <td key={compared[i]!.id}>{v}</td>)}</tr>;
+                return <tr key={label} className={differ ? 'differs' : undefined}><th scope="row">{label}{differ && <> <span className="tag differs-tag"><span aria-hidden="true">≠ </span>differs</span></>}</th>{cells.map((v, i) => <td key={compared[i]!.id}>{v}</td>)}</tr>;
               })}
-              {mayUse && <tr><th scope="row" /> {compared.map((c) => <td key={c.id}><UseForJob jobNumber={q.forJob!} sheetId={c.id} from={c.jobNumber} /></td>)}</tr>}
+              {mayUse && <tr><th scope="row">Use</th>{compared.map((c) => <td key={c.id}><UseForJob jobNumber={q.forJob!} sheetId={c.id} from={c.jobNumber} /></td>)}</tr>}
             </tbody>
           </table>
-          <p className="small muted">Rows where the sheets differ are shaded and marked.</p>
+          </TableScroll>
+          <p className="small muted">Rows where the sheets differ are marked “≠ differs”, with a heavier left rule and shading.</p>
         </section>
       )}
 
@@ -115,6 +119,7 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
           {result.rows.length > 0 && (
             <form method="get" aria-label="Compare sheets">
               {keep.map(([k, v]) => <input key={k} type="hidden" name={k} value={String(v)} />)}
+              <TableScroll label="Matching sheets">
               <table>
                 <thead>
                   <tr>
@@ -125,7 +130,7 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
                 <tbody>
                   {result.rows.map((r) => (
                     <tr key={r.id}>
-                      <td><input type="checkbox" name="compare" value={r.id} defaultChecked={q.compare.includes(r.id)} aria-label={`Compare job ${r.jobNumber}`} style={{ width: 'auto' }} /></td>
+                      <td><label className="check"><input type="checkbox" name="compare" value={r.id} defaultChecked={q.compare.includes(r.id)} aria-label={`Compare job ${r.jobNumber}`} /></label></td>
                       <td><Link href={jobRoutes(r.jobNumber).asFoundPrint}>{r.jobNumber}</Link></td>
                       <td>{r.manufacturer ?? '—'} {r.model ?? ''}</td>
                       <td className="num">{r.slots}</td><td className="num">{r.poles}</td>
@@ -137,6 +142,7 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
                   ))}
                 </tbody>
               </table>
+              </TableScroll>
               <p className="row" style={{ marginTop: '0.5rem' }}><button type="submit" className="btn secondary">Compare selected (2–3)</button></p>
             </form>
           )}

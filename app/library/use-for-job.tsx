@@ -16,7 +16,6 @@ export function UseForJob({ jobNumber, sheetId, from }: { jobNumber: number; she
         type="button"
         className="btn secondary small-btn"
         disabled={pending}
-        aria-label={`Use job ${from}'s sheet for job ${jobNumber}`}
         onClick={() =>
           start(async () => {
             const r = await copyLibrarySheetToJob({ jobNumber, sheetId });
@@ -26,6 +25,8 @@ export function UseForJob({ jobNumber, sheetId, from }: { jobNumber: number; she
         }
       >
         {pending ? 'Copying…' : `Use for job ${jobNumber}`}
+        {/* The name starts with the visible words (WCAG 2.5.3) and says which sheet. */}
+        <span className="sr-only"> (job {from}’s sheet)</span>
       </button>
       {error && <span role="alert" className="field-error">{error}</span>}
     </>

@@ -29,12 +29,12 @@ export default async function StockPage() {
       <h1>Wire stock and shop limits</h1>
       <section className="card" aria-labelledby="stock-h">
         <h2 id="stock-h">Sizes on hand ({stock.length})</h2>
-        <p className="muted small">The redesign search uses only these sizes. Insulated diameters are typical for the enamel grade (an approximation): measure a sample when the fill is tight.</p>
+        <p className="muted small">The redesign search uses only these sizes. Approving a redesign reserves its wire (as wound, before the allowance for leads and waste); approving a later revision of the same job releases it. Insulated diameters are typical for the enamel grade (an approximation): measure a sample when the fill is tight.</p>
         <AddStockForm />
         <div style={{ overflowX: 'auto' }}>
           <table aria-label="Wire sizes on hand">
             <thead>
-              <tr><th scope="col">Size</th><th scope="col">Grade</th><th scope="col" className="num">Bare</th><th scope="col" className="num">Insulated (typ.)</th><th scope="col" className="num">Area</th><th scope="col" className="num">On hand</th><th scope="col">Note</th><th scope="col"><span className="sr-only">Remove</span></th></tr>
+              <tr><th scope="col">Size</th><th scope="col">Grade</th><th scope="col" className="num">Bare</th><th scope="col" className="num">Insulated (typ.)</th><th scope="col" className="num">Area</th><th scope="col" className="num">On hand</th><th scope="col">Reserved for approved redesigns</th><th scope="col">Note</th><th scope="col"><span className="sr-only">Remove</span></th></tr>
             </thead>
             <tbody>
               {stock.map((s) => (
@@ -44,7 +44,10 @@ export default async function StockPage() {
                   <td className="num">{s.wire ? `${s.wire.bareMm.toFixed(3)} mm (${mmToInches(s.wire.bareMm).toFixed(4)} in)` : '—'}</td>
                   <td className="num">{s.wire ? `${s.wire.overallMm.toFixed(3)} mm` : '—'}</td>
                   <td className="num">{s.wire ? `${s.wire.areaMm2.toFixed(4)} mm² (${fmt.num(mm2ToCircularMils(s.wire.areaMm2), 0)} CM)` : '—'}</td>
-                  <td className="num">{fmt.num(s.quantityKg, 1, 'kg')}</td>
+                  <td className="num">{fmt.num(s.quantityKg, 1, 'kg')}{s.quantityKg !== null && s.reservedKg > 0 ? <><br /><span className="small">{fmt.num(Math.max(0, s.quantityKg - s.reservedKg), 1, 'kg')} free</span></> : null}</td>
+                  <td className="small" data-testid={`reserved-${s.size}`}>
+                    {s.reservations.length === 0 ? '—' : s.reservations.map((x) => <span key={`${x.jobNumber}-${x.revision}`}>{x.kg.toFixed(2)} kg · job {x.jobNumber} revision {x.revision}<br /></span>)}
+                  </td>
                   <td>{s.note ?? ''}</td>
                   <td><RemoveStockButton id={s.id} label={s.wire?.label ?? s.size} /></td>
                 </tr>
@@ -57,9 +60,9 @@ export default async function StockPage() {
         <h2 id="limits-h">Redesign limits</h2>
         <p className="muted small">
           Defaults for every redesign request (the engineer may change them per job). Starting values: flux densities +5 % / −10 % of the original
-          (yoke −50 %), a cautious shop habit; current density +5 % and at most 6 A/mm² [from memory: textbook stator ranges 3–5 A/mm², 3–8 for
-          totally enclosed machines]; insulated wire at most 60 % of the gross slot area [common practice, from memory]; up to 10 wires in hand,
-          3 sizes within a diameter ratio of 1.3 [common practice]. {settings.updatedAt ? `Last saved ${fmt.dateTime(settings.updatedAt)}.` : 'Not saved yet: the starting values apply.'}
+          (yoke −50 %), a cautious shop habit; current density +5 % and at most 6 A/mm² (textbook stator ranges 3–5 A/mm², 3–8 for
+          totally enclosed machines); insulated wire at most 60 % of the gross slot area (shop practice); up to 10 wires in hand,
+          3 sizes within a diameter ratio of 1.3 (shop practice). {settings.updatedAt ? `Last saved ${fmt.dateTime(settings.updatedAt)}.` : 'Not saved yet: the starting values apply.'}
         </p>
         {mayEditSettings ? (
           <SettingsForm version={settings.version} defaults={limitsToForm(l)} starting={limitsToForm(DEFAULT_REDESIGN_LIMITS)} />

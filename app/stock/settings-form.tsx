@@ -18,6 +18,7 @@ const FIELDS: [keyof LimitsForm, string, string][] = [
   ['currentDensityRisePercent', 'Current density may rise by', '%'], ['currentDensityMaxAPerMm2', 'Current density at most', 'A/mm²'],
   ['slotFillMaxPercent', 'Slot fill at most', '% of gross area'], ['maxStrandsInHand', 'Wires in hand at most', 'strands'],
   ['maxWireSizes', 'Sizes per conductor at most', '1–3'], ['mixedSizeRatioMax', 'Mixed sizes: diameter ratio at most', '×'],
+  ['minWireBareMm', 'Thinnest wire without a ranking penalty', 'mm bare'], ['harmonicKwMax', 'k_w5 and k_w7 at most', ''],
 ];
 
 /** The shop's redesign limits (administrators only); saving names the version it was loaded from. */

@@ -7,7 +7,11 @@
  */
 import type { CoilSide } from '@/lib/engine/winding-layout';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
-import { lengthToMm, mmToLength, parseTypedNumber, type LengthUnit } from './length-entry';
+import { parseSpan } from '@/lib/engine/notation';
+import { mmToLength, parseTypedNumber, switchTypedLength, typedLengthToMm, type LengthUnit, type TypedLength, lengthToMm } from './length-entry';
+
+/** Per length field ("core.boreMm", "winding.meanTurnLengthMm"): what was typed before a unit switch. */
+export type LengthMemory = ReadonlyMap<string, TypedLength>;
 
 /** The core fields that are lengths (typed in mm or in). */
 export const CORE_LENGTH_FIELDS = [
@@ -82,19 +86,23 @@ const text = (v: string | undefined): string | undefined => {
   const t = (v ?? '').trim();
   return t === '' ? undefined : t;
 };
-const len = (v: string | undefined, unit: LengthUnit): number | string | undefined => {
-  const n = parseTypedNumber(v);
-  return typeof n === 'number' ? lengthToMm(n, unit) : n;
-};
+
 const num = (v: string | undefined): number | string | undefined => parseTypedNumber(v);
+/** A span as written: "7" slot pitches, or "1–8" / "1-8" as the label shows it (lib/engine/notation.ts). */
+const span = (v: string | undefined): number | string | undefined => {
+  const t = (v ?? '').trim();
+  if (t === '') return undefined;
+  return parseSpan(t) ?? t;
+};
 /** Drops keys whose value is undefined, so optional fields are simply absent. */
 const compact = <T extends Record<string, unknown>>(o: T): Partial<T> =>
   Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
 
 /** The form as the schema's input (metric, numbers); the schema itself judges it. */
-export function formToSheetInput(f: SheetFormValues, unit: LengthUnit, slotTable?: CoilSide[]): Record<string, unknown> {
+export function formToSheetInput(f: SheetFormValues, unit: LengthUnit, slotTable?: CoilSide[], memory?: LengthMemory): Record<string, unknown> {
+  const len = (path: string, v: string | undefined) => typedLengthToMm(v, unit, memory?.get(path));
   const core: Record<string, unknown> = {};
-  for (const k of CORE_LENGTH_FIELDS) core[k] = len(f.core[k], unit);
+  for (const k of CORE_LENGTH_FIELDS) core[k] = len(`core.${k}`, f.core[k]);
   for (const k of CORE_COUNT_FIELDS) core[k] = num(f.core[k]);
   const w = f.winding;
   const r = f.resistance;
@@ -105,7 +113,7 @@ export function formToSheetInput(f: SheetFormValues, unit: LengthUnit, slotTable
       layers: Number(w.layers),
       style: w.style,
       singleLayerCoiling: w.layers === '1' ? (w.singleLayerCoiling || undefined) : undefined,
-      spans: w.coils.map((c) => num(c.span)),
+      spans: w.coils.map((c) => span(c.span)),
       turnsPerCoil: w.coils.map((c) => num(c.turns)),
       coilsPerGroup: num(w.coilsPerGroup),
       groups: num(w.groups),
@@ -115,8 +123,8 @@ export function formToSheetInput(f: SheetFormValues, unit: LengthUnit, slotTable
       leadMarkings: text(w.leadMarkings),
       jumperNotes: text(w.jumperNotes),
       slotTable: slotTable && slotTable.length > 0 ? slotTable : undefined,
-      meanTurnLengthMm: len(w.meanTurnLengthMm, unit),
-      coilExtensionMm: len(w.coilExtensionMm, unit),
+      meanTurnLengthMm: len('winding.meanTurnLengthMm', w.meanTurnLengthMm),
+      coilExtensionMm: len('winding.coilExtensionMm', w.coilExtensionMm),
       copperWeightKg: num(w.copperWeightKg),
     }),
     wires: f.wires.map((x) => ({ standard: x.standard, size: x.size.trim(), count: num(x.count), enamelGrade: Number(x.enamelGrade) })),
@@ -161,12 +169,22 @@ export function sheetToForm(s: WindingSheet, unit: LengthUnit): SheetFormValues 
 }
 
 /** Re-expresses every typed length of a form in another unit (the unit toggle). */
-export function convertFormLengths(f: SheetFormValues, from: LengthUnit, to: LengthUnit, convert: (t: string, a: LengthUnit, b: LengthUnit) => string): SheetFormValues {
+/**
+ * Switches every length field between mm and inches for display, remembering what was typed so that
+ * switching back, or saving, uses the typed value (see switchTypedLength).
+ */
+export function switchFormLengths(f: SheetFormValues, from: LengthUnit, to: LengthUnit, memory: LengthMemory): { values: SheetFormValues; memory: Map<string, TypedLength> } {
+  const next = new Map<string, TypedLength>();
+  const one = (path: string, text: string): string => {
+    const r = switchTypedLength(text, from, to, memory.get(path));
+    if (r.memory) next.set(path, r.memory);
+    return r.text;
+  };
   const core = { ...f.core };
-  for (const k of CORE_LENGTH_FIELDS) core[k] = convert(core[k], from, to);
+  for (const k of CORE_LENGTH_FIELDS) core[k] = one(`core.${k}`, core[k]);
   const winding = { ...f.winding };
-  for (const k of WINDING_LENGTH_FIELDS) winding[k] = convert(winding[k], from, to);
-  return { ...f, core, winding };
+  for (const k of WINDING_LENGTH_FIELDS) winding[k] = one(`winding.${k}`, winding[k]);
+  return { values: { ...f, core, winding }, memory: next };
 }
 
 /** A schema path (`winding.spans.2`, `sheet.core.boreMm`) as the form field that shows it. */
@@ -177,4 +195,18 @@ export function sheetPathToFormPath(path: string): string {
   if (/^winding\.slotTable/.test(p)) return 'winding.coils.root';
   if (p === 'resistance.readings') return 'resistance.readings.0';
   return p;
+}
+
+/**
+ * For a saved sheet shown in inches: each length field's stored millimetres as the typed value behind the
+ * inch text, so saving without touching a field stores exactly what was stored (560 stays 560, not 559.999).
+ */
+export function savedLengthMemory(sheet: WindingSheet, unit: LengthUnit): [string, TypedLength][] {
+  if (unit === 'mm') return [];
+  const mm = sheetToForm(sheet, 'mm');
+  const shown = sheetToForm(sheet, unit);
+  const out: [string, TypedLength][] = [];
+  for (const k of CORE_LENGTH_FIELDS) if (mm.core[k] !== '') out.push([`core.${k}`, { text: mm.core[k], unit: 'mm', shown: shown.core[k] }]);
+  for (const k of WINDING_LENGTH_FIELDS) if (mm.winding[k] !== '') out.push([`winding.${k}`, { text: mm.winding[k], unit: 'mm', shown: shown.winding[k] }]);
+  return out;
 }

@@ -11,7 +11,7 @@ import type { CoilSide } from '@/lib/engine/winding-layout';
 import { coreSchema, supplySchema, windingSchema, windingSheetSchema, type SheetIssue, type WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { sheetFindings, type SheetFinding } from '../engine/sheet-findings';
 import type { LengthUnit } from './length-entry';
-import { formToSheetInput, type SheetFormValues } from './as-found-form';
+import { formToSheetInput, type LengthMemory, type SheetFormValues } from './as-found-form';
 
 export interface LiveAnalysis {
   /** The checked sheet, when the whole form passes the schema. */
@@ -48,8 +48,8 @@ function windingOnly(input: Record<string, unknown>): { winding: WindingAnalysis
 }
 
 /** Analyses the form as it stands. */
-export function liveAnalysis(values: SheetFormValues, unit: LengthUnit, slotTable?: CoilSide[]): LiveAnalysis {
-  const input = formToSheetInput(values, unit, slotTable);
+export function liveAnalysis(values: SheetFormValues, unit: LengthUnit, slotTable?: CoilSide[], memory?: LengthMemory): LiveAnalysis {
+  const input = formToSheetInput(values, unit, slotTable, memory);
   const parsed = windingSheetSchema.safeParse(input);
   if (!parsed.success) {
     const issues = parsed.error.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));

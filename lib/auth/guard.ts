@@ -8,7 +8,7 @@ import { redirect } from 'next/navigation';
 import type { z } from 'zod';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { invalid, toActionFailure, type ActionResult } from '@/lib/errors/action-result';
-import { can, type Permission } from './permissions';
+import { can, PERMISSION_WORDS, type Permission } from './permissions';
 import { SESSION_COOKIE, findSessionUser, type SessionUser } from './session-store';
 
 export async function currentUser(): Promise<SessionUser | null> {
@@ -23,7 +23,8 @@ export async function currentUser(): Promise<SessionUser | null> {
 export async function requirePageUser(permission: Permission = 'job.read'): Promise<SessionUser> {
   const user = await currentUser();
   if (!user) redirect('/login');
-  if (!can(user.role, permission)) redirect(`/denied?need=${encodeURIComponent(permission)}`);
+  // The address says what was refused in words ("/denied?to=change+shop+settings"), not a permission key.
+  if (!can(user.role, permission)) redirect(`/denied?to=${encodeURIComponent(PERMISSION_WORDS[permission])}`);
   return user;
 }
 

@@ -31,7 +31,7 @@ const LEFT = 84;
 const RIGHT = DIAGRAM_WIDTH - 84;
 const ROW = 58;
 const BOX_H = 40;
-const MAX_PER_ROW = 8;
+const MAX_PER_ROW = 5;
 
 const PHASE_NAME: Record<Phase, string> = { A: 'Phase A', B: 'Phase B', C: 'Phase C' };
 
@@ -67,8 +67,9 @@ export function connectionDiagram(plan: ConnectionPlan, leads: LeadPlan): Diagra
             shapes.push({ kind: 'line', x1: prevEnd, y1: cy, x2: x, y2: cy, width: 1.6 });
             shapes.push({ kind: 'rect', x, y: y + 6, w: boxW, h: BOX_H, width: st.group.sense > 0 ? 1.4 : 2.6 });
             const forward = st.group.sense > 0;
-            text(x + 3, y + 4 + 12, forward ? 'S' : 'F', 10, 'start', true);
-            text(x + boxW - 3, y + 4 + 12, forward ? 'F' : 'S', 10, 'end', true);
+            // The ends sit outside the box, above the wire they join.
+            text(x - 2, cy - 4, forward ? 'S' : 'F', 10, 'end', true);
+            text(x + boxW + 2, cy - 4, forward ? 'F' : 'S', 10, 'start', true);
             text(x + boxW / 2, y + 4 + 13, `${groupLabel(st.group)} · pole ${st.group.pole}`, 10.5, 'middle', true);
             const ax = 10;
             shapes.push(forward ? { kind: 'arrow', x1: x + ax, y: y + 27, x2: x + boxW - ax } : { kind: 'arrow', x1: x + boxW - ax, y: y + 27, x2: x + ax });

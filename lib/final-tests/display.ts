@@ -55,11 +55,18 @@ export function statusText(s: CheckStatus | SectionStatus): string {
       return '… Not recorded';
     case 'incomplete':
       return '… Incomplete';
+    case 'reduced':
+      return '◐ Reduced-level test, not a pass';
+    case 'recorded':
+      return '· Recorded, not judged';
   }
 }
 
-export function overallText(v: OverallVerdict): string {
-  return v === 'PASS' ? '✓ PASS' : v === 'FAIL' ? '⚠ FAIL' : '… INCOMPLETE';
+/** The overall verdict in words; a record held back only by a reduced-level test says so. */
+export function overallText(v: OverallVerdict, qualifiers: readonly string[] = []): string {
+  if (v === 'PASS') return '✓ PASS';
+  if (v === 'FAIL') return '⚠ FAIL';
+  return qualifiers.length ? `◐ NOT A FULL PASS (${qualifiers.join('; ')})` : '… INCOMPLETE';
 }
 
 /** A check's value against its limit in the check's own unit, e.g. "250 MΩ (minimum 5 MΩ)". */
@@ -75,6 +82,10 @@ export function checkValueText(check: Check): string {
       return `${percentText(v.value)} (limit ${percentText(v.limit, 0)})`;
     case 'vibration':
       return `${velocityText(v.value)} (limit ${velocityText(v.limit)})`;
+    case 'current':
+      return `${fmt.num(v.value, 2, 'A')} (rated ${fmt.num(v.limit, 1, 'A')})`;
+    case 'speed':
+      return `${fmt.num(v.value, 0, 'rpm')} (synchronous ${fmt.num(v.limit, 0, 'rpm')})`;
     default:
       return `${v.value} (limit ${v.limit})`;
   }

@@ -25,6 +25,17 @@ const result = (r: 'pass' | 'fail' | undefined) => (r === 'pass' ? '✓ Pass' : 
 export const CASE_TEXT = { new: 'new winding', repeat: 'repeat test', reconditioned: 'reconditioned winding' } as const;
 export const PRACTICE_TEXT = { nema: 'NEMA MG 1 / ANSI/EASA AR100', iec: 'IEC 60034-1' } as const;
 
+/**
+ * The sentence saying which rating the verdicts were judged for, e.g. "judged for the as-repaired rating
+ * 460 V 60 Hz, redesign revision 1" or "judged for the nameplate rating 400 V 50 Hz".
+ */
+export function ratingSentence(b: TestDataValues['basis']): string {
+  const rating = [v(b.ratedVoltageV, 0, 'V'), b.frequencyHz === undefined ? null : v(b.frequencyHz, 0, 'Hz')].filter(Boolean).join(' ');
+  if (b.ratingSource === 'redesign' && b.redesignRevision !== undefined) return `judged for the as-repaired rating ${rating}, redesign revision ${b.redesignRevision}`;
+  if (b.ratingSource === 'entered') return `judged for the rating entered on this test record, ${rating}, which differs from the nameplate as received`;
+  return `judged for the nameplate rating ${rating}`;
+}
+
 export function readingSections(d: TestDataValues, j: TestJudgement): ReadingSection[] {
   const pairs = d.resistance.between === 'phase' ? PHASE_NAMES.map((p) => `Phase ${p}`) : LEAD_PAIRS.map((p) => `Leads ${p}`);
   const levels = j.derived.hipotLevels;
@@ -33,7 +44,12 @@ export function readingSections(d: TestDataValues, j: TestJudgement): ReadingSec
       key: 'basis',
       title: 'Basis of the verdicts',
       rows: [
+        { label: 'Rating', value: ratingSentence(d.basis) },
         { label: 'Rated voltage', value: v(d.basis.ratedVoltageV, 0, 'V') },
+        ...(d.basis.frequencyHz === undefined ? [] : [{ label: 'Frequency', value: v(d.basis.frequencyHz, 0, 'Hz') }]),
+        ...(d.basis.connection ? [{ label: 'Connection', value: d.basis.connection }] : []),
+        ...(d.basis.ratedCurrentA === undefined ? [] : [{ label: 'Rated current', value: v(d.basis.ratedCurrentA, 1, 'A') }]),
+        ...(d.basis.ratedSpeedRpm === undefined ? [] : [{ label: 'Rated speed', value: `${v(d.basis.ratedSpeedRpm, 0, 'rpm')}${d.basis.poles ? ` (${d.basis.poles} poles)` : ''}` }]),
         { label: 'Insulation class', value: d.basis.insulationClass },
         { label: 'Winding', value: d.basis.windingKind === 'random' ? 'random-wound' : 'form-wound' },
         { label: 'IEEE 43 minimum', value: d.basis.irCategory },
@@ -59,8 +75,9 @@ export function readingSections(d: TestDataValues, j: TestJudgement): ReadingSec
         { label: 'Case', value: `${CASE_TEXT[d.hipot.case]}, ${PRACTICE_TEXT[d.hipot.practice]}` },
         { label: 'Proposed', value: levels ? `${levels.acV} V AC or ${levels.dcV} V DC` : '—' },
         { label: 'Applied', value: d.hipot.appliedV === undefined ? '—' : `${d.hipot.appliedV} V ${d.hipot.kind.toUpperCase()} for ${v(d.hipot.durationS, 0, 's')}` },
-        { label: 'Leakage current', value: leakageText(d.hipot.leakageMa) },
-        { label: 'Result', value: result(d.hipot.result) },
+        { label: 'Leakage current', value: d.hipot.leakageMa === undefined ? '—' : `${leakageText(d.hipot.leakageMa)} (recorded, not judged)` },
+        { label: 'Winding held', value: d.hipot.result === 'pass' ? 'yes, no breakdown' : d.hipot.result === 'fail' ? '⚠ no: breakdown' : '—' },
+        ...(d.hipot.reducedReason ? [{ label: 'Reduced-level test', value: d.hipot.reducedReason }] : []),
         { label: 'Hipot tester', value: d.hipot.instrumentSerial ?? '—' },
       ],
     },

@@ -11,13 +11,42 @@ import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { instrumentSerials, type TestRecordForm } from '@/lib/final-tests/test-record-schema';
 import { judgeTestRecord, type TestJudgement } from './verdicts';
+import { jobAsRepairedRating } from './test-rating-source';
+import type { AsRepairedRating } from './test-rating';
 import { isRecordLocked } from '@/lib/jobs/record-locks';
 
 export const TEST_MESSAGES = {
   closed: (status: string) => `This job is ${status.toLowerCase()}: its test records are kept as they were and cannot be changed.`,
   notCurrent: 'Only the newest test record can be edited; earlier ones are kept as history. Start a retest instead.',
   unknownTester: 'Pick who tested from the list.',
+  ratingMismatch: (field: string, value: string, revision: number) =>
+    `The approved redesign, revision ${revision}, rates this motor ${value}: the tests are judged for the rating it leaves with, not ${field}.`,
 } as const;
+
+/**
+ * Ties the record's basis to the job's as-repaired rating: the source and redesign revision are set here
+ * (never taken from the browser), and a basis that contradicts an approved redesign is refused, so the
+ * sheet's "judged for the as-repaired rating …" sentence is always true.
+ */
+function bindRating(input: TestRecordForm, rating: AsRepairedRating): TestRecordForm {
+  const b = input.data.basis;
+  if (rating.source === 'redesign' && rating.redesignRevision !== undefined) {
+    const problems: Record<string, string[]> = {};
+    if (rating.ratedVoltageV !== undefined && b.ratedVoltageV !== rating.ratedVoltageV) {
+      problems['data.basis.ratedVoltageV'] = [TEST_MESSAGES.ratingMismatch(`${b.ratedVoltageV} V`, `${rating.ratedVoltageV} V`, rating.redesignRevision)];
+    }
+    if (rating.frequencyHz !== undefined && b.frequencyHz !== undefined && b.frequencyHz !== rating.frequencyHz) {
+      problems['data.basis.frequencyHz'] = [TEST_MESSAGES.ratingMismatch(`${b.frequencyHz} Hz`, `${rating.frequencyHz} Hz`, rating.redesignRevision)];
+    }
+    if (Object.keys(problems).length) throw new DomainError('invalid', MESSAGES.invalid, problems);
+    return { ...input, data: { ...input.data, basis: { ...b, frequencyHz: b.frequencyHz ?? rating.frequencyHz, ratingSource: 'redesign', redesignRevision: rating.redesignRevision } } };
+  }
+  // Without a redesign the plate governs; a basis that differs from it is printed as entered, not as the plate.
+  const { redesignRevision: _dropped, ...rest } = b;
+  const differs = (rating.ratedVoltageV !== undefined && b.ratedVoltageV !== rating.ratedVoltageV)
+    || (rating.frequencyHz !== undefined && b.frequencyHz !== undefined && b.frequencyHz !== rating.frequencyHz);
+  return { ...input, data: { ...input.data, basis: { ...rest, ratingSource: differs ? 'entered' : 'nameplate' } } };
+}
 
 export interface SavedTestRecord {
   recordId: string;
@@ -34,7 +63,10 @@ export function testEventMessage(sequence: number, created: boolean, j: TestJudg
 
 const isUniqueViolation = (err: unknown): boolean => err instanceof Prisma.PrismaClientKnownRequestError && err.code === 'P2002';
 
-export async function saveTestRecord(userId: string, input: TestRecordForm): Promise<SavedTestRecord> {
+export async function saveTestRecord(userId: string, raw: TestRecordForm): Promise<SavedTestRecord> {
+  const rating = await jobAsRepairedRating(raw.jobId);
+  if (!rating) throw new DomainError('not-found', MESSAGES.notFound('job'));
+  const input = bindRating(raw, rating);
   const judgement = judgeTestRecord(input.data);
   // Typed as the shop's wall-clock time (shop settings), stored as the instant it names.
   const testedAt = fromZonedLocal(input.testedAt);

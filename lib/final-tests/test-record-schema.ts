@@ -31,10 +31,24 @@ const serial = optionalText(60);
 /** Temperatures a winding is tested at, °C. */
 const temperature = (label: string) => optionalNumber({ label, min: -40, max: 250, unit: '°C' });
 
-/** What the verdicts are judged against: from the nameplate and the as-found sheet, editable. */
+/** Where the rating judged against came from: the nameplate as received, or an approved redesign. */
+export const RATING_SOURCES = ['nameplate', 'redesign', 'entered'] as const;
+
+/**
+ * What the verdicts are judged against: the rating the motor leaves with (the approved redesign's when there
+ * is one, else the nameplate), the insulation class and winding kind. The rating fields come from the
+ * records; the server sets `ratingSource` and `redesignRevision` itself on save.
+ */
 export const testBasisSchema = z.object({
   ratedVoltageV: requiredNumber({ label: 'Rated voltage', positive: true, max: 15_000, unit: 'V' }),
   ratedOutputKw: optionalNumber({ label: 'Rated output', positive: true, max: 100_000, unit: 'kW' }),
+  frequencyHz: optionalNumber({ label: 'Rated frequency', positive: true, max: 400, unit: 'Hz' }),
+  poles: optionalNumber({ label: 'Poles', int: true, min: 2, max: 128 }),
+  ratedCurrentA: optionalNumber({ label: 'Rated current', positive: true, max: 20_000, unit: 'A' }),
+  ratedSpeedRpm: optionalNumber({ label: 'Rated speed', positive: true, max: 24_000, unit: 'rpm' }),
+  connection: optionalText(40),
+  ratingSource: optionalEnum(RATING_SOURCES, 'The rating comes from the nameplate or an approved redesign.'),
+  redesignRevision: optionalNumber({ label: 'Redesign revision', int: true, positive: true, max: 100_000 }),
   insulationClass: z.preprocess(blank, z.enum(INSULATION_CLASSES, { error: 'Pick the insulation class (A, B, F or H).' })),
   windingKind: z.enum(WINDING_KINDS, { error: 'Pick random-wound or form-wound.' }),
   irCategory: z.enum(IR_CATEGORIES, { error: 'Pick which IEEE 43 minimum applies.' }),
@@ -58,6 +72,8 @@ export const hipotSectionSchema = z.object({
   durationS: optionalNumber({ label: 'Duration', positive: true, max: 3600, unit: 's' }),
   leakageMa: optionalNumber({ label: 'Leakage current', min: 0, max: 1000, unit: 'mA' }),
   result: optionalEnum(RESULTS, 'Result is pass or fail.'),
+  /** Why the level or time was deliberately below the rule (customer's instruction, repeat test...). */
+  reducedReason: optionalText(300),
   instrumentSerial: serial,
 });
 
@@ -119,8 +135,20 @@ function completeness(d: TestData, ctx: z.RefinementCtx): void {
     });
     if (resistance.temperatureC === undefined) need(['resistance', 'temperatureC'], 'Give the winding temperature the readings were taken at.');
   }
+  if (hipot.appliedV !== undefined && hipot.durationS === undefined) need(['hipot', 'durationS'], 'Give how long the voltage was held.');
+  // An induction motor cannot run above synchronous speed on its own supply: a higher reading is a
+  // misread (or a driven/inverter run, which the notes must say).
+  const sync = synchronousRpm(d.basis.frequencyHz, d.basis.poles);
+  if (run.speedRpm !== undefined && sync !== undefined && run.speedRpm > sync && !run.notes) {
+    need(['run', 'speedRpm'], `Speed ${run.speedRpm} rpm is above the synchronous ${sync} rpm of a ${d.basis.poles}-pole motor at ${d.basis.frequencyHz} Hz: an induction motor cannot run faster on its own supply. Check the reading, or say why in the run notes.`);
+  }
   const measured = [run.voltageV, run.speedRpm, run.vibrationMmS, ...run.currentsA].some((v) => v !== undefined);
   if (measured && run.result === undefined) need(['run', 'result'], 'Say whether the motor passed the run test.');
+}
+
+/** Synchronous speed 120·f/p, rpm (rounded to 0.1 rpm), or undefined without frequency and poles. */
+export function synchronousRpm(frequencyHz: number | undefined, poles: number | undefined): number | undefined {
+  return frequencyHz !== undefined && poles !== undefined ? Math.round((1200 * frequencyHz) / poles) / 10 : undefined;
 }
 
 const testDataShape = z.object({

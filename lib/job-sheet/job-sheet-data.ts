@@ -17,6 +17,10 @@ import { getApprovedRedesignSummary, type ApprovedRedesignSummary } from './rede
 import { lossStatementForJob, type LossStatementResult } from '@/lib/losses/loss-statement-source';
 import { CLOSING_STATEMENT, SAFETY_NOTICES, type SafetyNotice } from './safety-notices';
 import { shopDetails, type ShopDetails } from './shop-details';
+import { contentHash, sheetIssueFor } from './sheet-issue';
+import { loadGateDecisions } from '@/lib/jobs/gate-facts';
+import { ratingSentence } from '@/lib/final-tests/readings';
+import type { JobStatus } from '@/lib/db/generated/enums';
 import { spansLabel, layoutLabel } from '@/lib/engine/notation';
 
 export interface Row {
@@ -28,10 +32,14 @@ export interface JobSheetTests {
   sequence: number;
   /** What the verdicts were judged against, in one line. */
   basis: string;
+  /** "judged for the as-repaired rating 460 V 60 Hz, redesign revision 1" (or the nameplate rating). */
+  judgedFor: string;
   testedAt: string;
   testedBy: string;
   instruments: string;
   verdict: OverallVerdict;
+  /** Why a record without a failure is still not a full pass (a reduced-level test). */
+  qualifiers: string[];
   sections: SectionJudgement[];
   readings: ReadingSection[];
   notes: string | null;
@@ -43,6 +51,12 @@ export interface JobSheetData {
   job: { id: string; number: number; status: string; shipped: boolean; rows: Row[] };
   customer: Row[];
   nameplate: Row[];
+  /** What was done to the winding, in one sentence the records support. */
+  statementOfWork: string;
+  /** The nameplate the motor leaves with, when a redesign changed it. */
+  asRepaired: Row[] | null;
+  /** Engineers' written decisions that released a shop-path gate. */
+  decisions: Row[];
   asFound: { revision: number; updatedAt: string; rows: Row[] } | null;
   redesign: (Omit<ApprovedRedesignSummary, 'approvedAt'> & { approvedAt: string }) | null;
   tests: JobSheetTests | null;
@@ -52,9 +66,9 @@ export interface JobSheetData {
   closing: string;
   /** Lines for handwritten signatures and dates. */
   signatures: readonly string[];
-  /** Number of recorded changes to the job (its timeline events): any change gives a new revision. */
+  /** The issue of this sheet: 1 for the first, up by one each time what it prints changes (sheet-issue.ts). */
   revision: number;
-  /** When the job, its as-found sheet or its tests last changed. */
+  /** When this issue was first produced. */
   revisionDate: string;
 }
 
@@ -84,8 +98,28 @@ function asFoundRows(s: WindingSheet): Row[] {
   return rows;
 }
 
-const latest = (dates: (Date | null | undefined)[]): Date =>
-  new Date(Math.max(...dates.filter((d): d is Date => d instanceof Date).map((d) => d.getTime())));
+const WOUND: JobStatus[] = ['TESTING', 'READY', 'SHIPPED'];
+
+/**
+ * What was done, only as far as the records show it: the approved redesign, else the as-found data, else
+ * nothing; "rewound" only once the job has left the winding bench.
+ */
+export function statementOfWork(
+  status: JobStatus,
+  heldFrom: JobStatus | null,
+  redesign: { revision: number; approvedBy: string; approvedAt: string } | null,
+  hasAsFound: boolean,
+  keptOriginal: string | null,
+): string {
+  if (status === 'RETURNED_UNREPAIRED') return 'Returned unrepaired: the winding was not rewound.';
+  const stage = status === 'ON_HOLD' ? heldFrom : status;
+  const done = stage !== null && WOUND.includes(stage);
+  const verb = done ? 'Rewound' : stage === 'WINDING' ? 'Being rewound' : 'To be rewound';
+  const kept = keptOriginal ? ` The original winding was kept although another supply was asked for: ${keptOriginal}` : '';
+  if (redesign) return `${verb} to redesign revision ${redesign.revision} approved by ${redesign.approvedBy} on ${redesign.approvedAt}.`;
+  if (hasAsFound) return `${verb} to the as-found winding data.${kept}`;
+  return 'No winding data recorded.';
+}
 
 /** The job sheet of a job, or null when there is no such job. */
 export async function loadJobSheet(number: number): Promise<JobSheetData | null> {
@@ -94,11 +128,11 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
     include: { customer: { include: { contacts: true } }, motor: true, assignee: { select: { name: true } } },
   });
   if (!job) return null;
-  const [sheet, records, redesign, events, losses] = await Promise.all([
+  const [sheet, records, redesign, decisions, losses] = await Promise.all([
     getAsFoundSheet(job.id),
     listTestRecords(job.id),
     getApprovedRedesignSummary(job.id),
-    db().jobEvent.aggregate({ where: { jobId: job.id }, _count: { _all: true }, _max: { at: true } }),
+    loadGateDecisions(db(), job.id),
     lossStatementForJob(job.id),
   ]);
   const m = job.motor;
@@ -109,18 +143,22 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
     const j = judgeTestRecord(current.data);
     tests = {
       sequence: current.sequence,
-      basis: (readingSections(current.data, j).find((r) => r.key === 'basis')?.rows ?? []).map((r) => `${r.label} ${r.value}`).join('; '),
+      basis: (readingSections(current.data, j).find((r) => r.key === 'basis')?.rows ?? []).filter((r) => r.label !== 'Rating').map((r) => `${r.label} ${r.value}`).join('; '),
+      judgedFor: ratingSentence(current.data.basis),
       testedAt: fmt.dateTime(current.testedAt),
       testedBy: current.testedBy?.name ?? '—',
       instruments: current.instrumentSerials.join(', ') || '—',
       verdict: current.verdict,
+      qualifiers: j.qualifiers,
       sections: j.sections,
       readings: readingSections(current.data, j),
       notes: current.data.notes ?? null,
       earlier: records.slice(1).map((r) => ({ sequence: r.sequence, testedAt: fmt.dateTime(r.testedAt), verdict: r.verdict })),
     };
   }
-  return {
+  const approvedAt = redesign ? fmt.date(redesign.approvedAt) : '';
+  const kept = decisions.find((d) => d.kind === 'keep-original-winding');
+  const content: Omit<JobSheetData, 'revision' | 'revisionDate'> = {
     shop: shopDetails(),
     job: {
       id: job.id,
@@ -156,14 +194,20 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
       { label: 'Enclosure', value: dash(m.enclosure) },
       { label: 'Bearings', value: `DE ${dash(m.bearingDriveEnd)} · ODE ${dash(m.bearingOppositeEnd)}` },
     ],
+    statementOfWork: statementOfWork(job.status, job.heldFrom, redesign ? { revision: redesign.revision, approvedBy: redesign.approvedBy, approvedAt } : null, sheet !== null, kept?.reason ?? null),
+    asRepaired: redesign ? redesign.proposedNameplate : null,
+    decisions: decisions.map((d) => ({
+      label: d.kind === 'ready-override' ? 'Released to Ready without a passing test' : 'Original winding kept',
+      value: `${d.reason} (${d.by}, ${fmt.date(d.at)}${d.kind === 'ready-override' ? `, ${d.recordSequence === null ? 'no test record' : `test record #${d.recordSequence}`}` : ''})`,
+    })),
     asFound: sheet ? { revision: sheet.revision, updatedAt: fmt.date(sheet.updatedAt), rows: asFoundRows(sheet.sheet) } : null,
-    redesign: redesign ? { ...redesign, approvedAt: fmt.date(redesign.approvedAt) } : null,
+    redesign: redesign ? { ...redesign, approvedAt } : null,
     tests,
     losses,
     notices: SAFETY_NOTICES,
     closing: CLOSING_STATEMENT,
     signatures: SIGNATURE_LINES,
-    revision: events._count._all,
-    revisionDate: fmt.date(latest([events._max.at, job.updatedAt, sheet?.updatedAt, ...records.map((r) => r.updatedAt)])),
   };
+  const issue = await sheetIssueFor(job.id, contentHash(content));
+  return { ...content, revision: issue.issue, revisionDate: fmt.date(issue.issuedAt) };
 }

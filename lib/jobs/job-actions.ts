@@ -7,9 +7,9 @@
 import { z } from 'zod';
 import { guardedAction } from '@/lib/auth/guard';
 import { success, type ActionResult } from '@/lib/errors/action-result';
-import { intakeSchema, jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
+import { gateDecisionSchema, intakeSchema, jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
 import { addPhotos, checkPhotos, photosFromFormData } from './attachments';
-import { createIntake, moveJobStatus, updateJob } from './job-writes';
+import { createIntake, moveJobStatus, recordGateDecision, updateJob } from './job-writes';
 import { findMotorsBySerial } from './job-queries';
 
 function jsonField(form: FormData, name: string): unknown {
@@ -46,6 +46,13 @@ export async function moveStatus(raw: unknown) {
   return guardedAction('job.move', 'move jobs along the shop path', statusMoveSchema, async (user, input) =>
     success(await moveJobStatus(user.id, user.role, input), 'Status changed.'),
   )(raw);
+}
+
+export async function recordGateDecisionAction(raw: unknown) {
+  return guardedAction('job.override', 'release a shop-path gate (engineers only)', gateDecisionSchema, async (user, input) => {
+    await recordGateDecision(user.id, input);
+    return success(undefined, 'Decision recorded on the timeline and the job sheet.');
+  })(raw);
 }
 
 export async function uploadJobPhotos(form: FormData): Promise<ActionResult<{ added: number }>> {

@@ -45,6 +45,13 @@ export const statusMoveSchema = z.object({
   note: optionalText(500),
 });
 
+/** An engineer's written release of a shop-path gate (see lib/jobs/shop-gates.ts). */
+export const gateDecisionSchema = z.object({
+  jobId: z.uuid(),
+  decision: z.enum(['ready-override', 'keep-original-winding'], { error: 'Pick which decision this is.' }),
+  reason: requiredText('Reason', 1000).refine((s) => s.length >= 10, 'Write the reason in a sentence (at least 10 characters): it is printed on the job sheet.'),
+});
+
 /** A shop job number as it appears in a URL (`/jobs/[number]/…`). */
 export const jobNumberSchema = z.coerce.number().int().positive().max(2_000_000_000);
 /** The `[number]` route segment of every job screen and download. */

@@ -11,6 +11,8 @@ import type { z } from 'zod';
 import type { jobEditSchema, statusMoveSchema } from '@/lib/jobs/job-schema';
 import { toMotorRecord } from '@/lib/jobs/motor-schema';
 import { isMoveAllowed, STATUS_LABELS } from './status-flow';
+import { DECISION_EVENT_KIND, loadGateFacts } from './gate-facts';
+import { decisionMessage, gateRefusal, type GateDecisionKind } from './shop-gates';
 import type { JobEventKind } from './job-events';
 
 type Tx = Prisma.TransactionClient;
@@ -92,6 +94,29 @@ async function refuseStale(tx: Tx, jobId: string): Promise<never> {
 }
 
 type JobEdit = z.output<typeof jobEditSchema>;
+
+/** The timeline names each edited detail in words with its old and new value ("Customer PO: — → 4471"). */
+export const EDIT_LABELS: Record<(typeof EDITABLE)[number], string> = {
+  promisedAt: 'Promised date',
+  priority: 'Priority',
+  customerPo: 'Customer PO',
+  reportedFault: 'Reported fault',
+  notes: 'Notes',
+  assigneeId: 'Assigned to',
+};
+
+function editValue(key: (typeof EDITABLE)[number], v: unknown, people: ReadonlyMap<string, string>): string {
+  if (v === null || v === undefined || v === '') return '—';
+  if (v instanceof Date) return v.toISOString().slice(0, 10);
+  if (key === 'assigneeId') return people.get(String(v)) ?? 'a former user';
+  if (key === 'priority') return String(v).toLowerCase();
+  const s = String(v).replace(/\s+/g, ' ');
+  return s.length > 80 ? `${s.slice(0, 77)}…` : s;
+}
+
+export function editLine(key: (typeof EDITABLE)[number], from: unknown, to: unknown, people: ReadonlyMap<string, string>): string {
+  return `${EDIT_LABELS[key]}: ${editValue(key, from, people)} → ${editValue(key, to, people)}`;
+}
 const EDITABLE = ['promisedAt', 'priority', 'customerPo', 'reportedFault', 'notes', 'assigneeId'] as const;
 
 /** Saves the job's details only if nobody changed the job since `version` was read. */
@@ -113,12 +138,13 @@ export async function updateJob(userId: string, input: JobEdit): Promise<{ versi
     });
     if (result.count === 0) await refuseStale(tx, input.jobId);
     const changed = EDITABLE.filter((k) => String(before[k] ?? '') !== String(data[k] ?? ''));
+    const people = new Map((await tx.user.findMany({ where: { id: { in: [before.assigneeId, data.assigneeId].filter((x): x is string => !!x) } }, select: { id: true, name: true } })).map((u) => [u.id, u.name]));
     await tx.jobEvent.create({
       data: {
         jobId: input.jobId,
         userId,
         kind: 'EDIT',
-        message: changed.length ? `Edited ${changed.join(', ')}.` : 'Saved without changes.',
+        message: changed.length ? changed.map((k) => editLine(k, before[k], data[k], people)).join('; ') : 'Saved without changes.',
         data: Object.fromEntries(changed.map((k) => [k, { from: before[k] ?? null, to: data[k] ?? null }])) as Prisma.InputJsonObject,
       },
     });
@@ -139,6 +165,9 @@ export async function moveJobStatus(userId: string, role: Role, input: StatusMov
         `A job in "${STATUS_LABELS[job.status]}" cannot move to "${STATUS_LABELS[input.to]}"${role === 'FRONT_DESK' || role === 'ADMIN' ? '' : ' by your role'}.`,
       );
     }
+    // The records must support the move too (passing tests, an approved redesign, a winding record).
+    const refusal = gateRefusal(job.status, input.to, await loadGateFacts(tx, input.jobId));
+    if (refusal) throw new DomainError('conflict', refusal);
     const result = await tx.job.updateMany({
       where: { id: input.jobId, version: input.version, status: job.status },
       data: {
@@ -180,4 +209,30 @@ export async function recordJobEvent(
   event: { jobId: string; userId: string | null; kind: JobEventKind; message: string; data?: Prisma.InputJsonValue },
 ): Promise<void> {
   await tx.jobEvent.create({ data: { ...event, ...(event.data === undefined ? {} : { data: event.data }) } });
+}
+
+/**
+ * Records an engineer's written decision that releases a shop-path gate (an override of the Ready gate,
+ * or keeping the original winding although another supply was asked for). It goes on the timeline in
+ * words and is printed on the job sheet; the gate reads it back from there.
+ */
+export async function recordGateDecision(userId: string, input: { jobId: string; decision: GateDecisionKind; reason: string }): Promise<void> {
+  await db().$transaction(async (tx) => {
+    const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true } });
+    if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
+    const expected = input.decision === 'ready-override' ? 'TESTING' : 'CUSTOMER_APPROVED';
+    if (job.status !== expected) {
+      throw new DomainError('conflict', `This decision is recorded while the job is in "${STATUS_LABELS[expected]}"; it is now in "${STATUS_LABELS[job.status]}".`);
+    }
+    const facts = await loadGateFacts(tx, input.jobId);
+    await tx.jobEvent.create({
+      data: {
+        jobId: input.jobId,
+        userId,
+        kind: DECISION_EVENT_KIND,
+        message: decisionMessage(input.decision, input.reason, facts.latestTest),
+        data: { decision: input.decision, reason: input.reason, recordSequence: input.decision === 'ready-override' ? facts.latestTest?.sequence ?? null : null },
+      },
+    });
+  });
 }

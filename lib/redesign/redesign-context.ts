@@ -1,16 +1,16 @@
 /**
  * Everything a redesign search needs for one job, read from the database: the as-found sheet (through
- * getAsFoundSheet), the motor's rated speed, the shop's limits and the wire stock. The page and the approve
- * action both search through here, so what is approved is what was shown.
+ * getAsFoundSheet), the motor's rated speed, the shop's limits and the wire stock (kilograms free for this
+ * job). Saving a request and approving search through here, off the request thread; pages read the stored result.
  */
 import { db } from '@/lib/db/client';
 import { originalFromSheet } from '@/lib/engine/redesign/from-sheet';
-import { searchRedesign } from '@/lib/engine/redesign/search';
 import type { RedesignLimits, RedesignOriginal, RedesignRequest, RedesignSearch, StockWire } from '@/lib/engine/redesign/types';
 import type { EngineResult } from '@/lib/engine/result';
 import { getShopLimits } from '@/lib/settings/settings-queries';
 import { getAsFoundSheet, type StoredSheet } from '@/lib/as-found/as-found-queries';
 import { listStockWires } from '@/lib/stock/stock-queries';
+import { searchOffThread } from './search-pool';
 
 export interface RedesignContext {
   sheet: StoredSheet;
@@ -25,7 +25,7 @@ export async function loadRedesignContext(jobId: string): Promise<{ ok: true; va
     getAsFoundSheet(jobId),
     db().job.findUnique({ where: { id: jobId }, select: { motor: { select: { speedRpm: true, frequencyHz: true } } } }),
     getShopLimits(),
-    listStockWires(),
+    listStockWires(jobId),
   ]);
   if (!sheet) return { ok: false, reason: 'This job has no saved as-found data sheet yet. The redesign starts from the sheet: record the winding first.' };
   const m = job?.motor;
@@ -36,5 +36,6 @@ export async function loadRedesignContext(jobId: string): Promise<{ ok: true; va
   return { ok: true, value: { sheet, original: original.value, shopLimits: limits.limits, stock } };
 }
 
-export const runSearch = (ctx: RedesignContext, request: RedesignRequest): EngineResult<RedesignSearch> =>
-  searchRedesign(ctx.original, request, ctx.stock);
+/** Runs the search for a request off the request thread (search-pool.ts). */
+export const runSearch = (ctx: RedesignContext, request: RedesignRequest): Promise<EngineResult<RedesignSearch>> =>
+  searchOffThread(ctx.original, request, ctx.stock);

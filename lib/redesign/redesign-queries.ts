@@ -9,6 +9,7 @@ import type { WindingSpec } from '@/lib/engine/winding-layout';
 import { storedRequestSchema } from '@/lib/redesign/redesign-schema';
 import type { RedesignRequest } from '@/lib/engine/redesign/types';
 import { isRedesignSnapshot, type RedesignSnapshot } from './snapshot';
+import { isStoredSearch, type StoredSearch } from './stored-search';
 
 /** The current approved redesign of a job (the highest approved revision). */
 export interface ApprovedRedesign {
@@ -78,4 +79,10 @@ export async function listRedesigns(jobId: string): Promise<RedesignRevision[]> 
       snapshot: isRedesignSnapshot(r.snapshot) ? r.snapshot : null,
     };
   });
+}
+
+/** The search result stored with a revision (null when none is stored or it cannot be read). */
+export async function getStoredSearch(redesignId: string): Promise<StoredSearch | null> {
+  const row = await db().redesign.findUnique({ where: { id: redesignId }, select: { search: true } });
+  return row && isStoredSearch(row.search) ? row.search : null;
 }

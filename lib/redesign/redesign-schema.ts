@@ -5,6 +5,7 @@
  */
 import { z } from 'zod';
 import type { RedesignLimits, RedesignRequest } from '@/lib/engine/redesign/types';
+import { DEFAULT_REDESIGN_LIMITS } from '@/lib/engine/redesign/from-sheet';
 import { requiredNumber, uuid } from '../validation/fields';
 
 /** "7, 8" or "7 8" → [7, 8]; "" → []. Messages name the field. */
@@ -31,6 +32,8 @@ export const limitsFormSchema = z.object({
   maxStrandsInHand: requiredNumber({ label: 'Wires in hand', int: true, min: 1, max: 40 }),
   maxWireSizes: requiredNumber({ label: 'Sizes per conductor', int: true, min: 1, max: 3 }),
   mixedSizeRatioMax: requiredNumber({ label: 'Mixed-size ratio', min: 1, max: 3 }),
+  minWireBareMm: requiredNumber({ label: 'Thinnest wire', min: 0, max: 5, unit: 'mm' }),
+  harmonicKwMax: requiredNumber({ label: 'k_w5 / k_w7 limit', positive: true, max: 1 }),
 });
 export type LimitsForm = z.output<typeof limitsFormSchema>;
 export type LimitsFormInput = z.input<typeof limitsFormSchema>;
@@ -47,6 +50,8 @@ export function limitsFromForm(f: LimitsForm): RedesignLimits {
     maxStrandsInHand: f.maxStrandsInHand,
     maxWireSizes: f.maxWireSizes as 1 | 2 | 3,
     mixedSizeRatioMax: f.mixedSizeRatioMax,
+    minWireBareMm: f.minWireBareMm,
+    harmonicKwMax: f.harmonicKwMax,
   };
 }
 
@@ -57,7 +62,7 @@ export function limitsToForm(l: RedesignLimits): LimitsForm {
     gapRisePercent: p(l.gap.over), gapFallPercent: p(l.gap.under), toothRisePercent: p(l.tooth.over), toothFallPercent: p(l.tooth.under),
     yokeRisePercent: p(l.yoke.over), yokeFallPercent: p(l.yoke.under), currentDensityRisePercent: p(l.currentDensityRise),
     currentDensityMaxAPerMm2: l.currentDensityMaxAPerMm2, slotFillMaxPercent: p(l.slotFillMax), maxStrandsInHand: l.maxStrandsInHand,
-    maxWireSizes: l.maxWireSizes, mixedSizeRatioMax: l.mixedSizeRatioMax,
+    maxWireSizes: l.maxWireSizes, mixedSizeRatioMax: l.mixedSizeRatioMax, minWireBareMm: l.minWireBareMm, harmonicKwMax: l.harmonicKwMax,
   };
 }
 
@@ -77,6 +82,8 @@ export const redesignRequestFormSchema = z.object({
     spans: wholeList('Spans', 599),
     layers: z.enum(LAYER_CHOICES, { error: 'Choose keep or double-layer lap.' }),
     parallelPaths: wholeList('Circuits', 64),
+    /** A checkbox: over-pitched spans are evaluated only when ticked. */
+    allowOverPitch: z.preprocess((v) => v === true || v === 'on' || v === 'true', z.boolean()).optional(),
   }),
   limits: limitsFormSchema,
 });
@@ -84,7 +91,7 @@ export type RedesignRequestFormInput = z.input<typeof redesignRequestFormSchema>
 export type RedesignRequestForm = z.output<typeof redesignRequestFormSchema>;
 
 /** Form output → the request the engine and the database hold. */
-export const requestFromForm = (f: RedesignRequestForm): RedesignRequest => ({ target: { ...f.target }, limits: limitsFromForm(f.limits) });
+export const requestFromForm = (f: RedesignRequestForm): RedesignRequest => ({ target: { ...f.target, allowOverPitch: f.target.allowOverPitch ?? false }, limits: limitsFromForm(f.limits) });
 
 const fraction = z.number().min(0).max(1);
 /** A request as stored (fractions): checked when read back so a damaged row fails loudly, not silently. */
@@ -92,11 +99,16 @@ export const storedRequestSchema = z.object({
   target: z.object({
     lineVoltageV: z.number().positive(), frequencyHz: z.number().positive(), poles: z.number().int().min(2),
     connection: z.enum(CONNECTION_CHOICES), spans: z.array(z.number().int()), layers: z.enum(LAYER_CHOICES), parallelPaths: z.array(z.number().int()),
+    // Requests stored before over-pitch became an explicit choice did not ask for it.
+    allowOverPitch: z.boolean().default(false),
   }),
   limits: z.object({
     gap: z.object({ over: fraction, under: fraction }), tooth: z.object({ over: fraction, under: fraction }), yoke: z.object({ over: fraction, under: fraction }),
     currentDensityRise: fraction, currentDensityMaxAPerMm2: z.number().positive(), slotFillMax: fraction, maxStrandsInHand: z.number().int().min(1),
     maxWireSizes: z.union([z.literal(1), z.literal(2), z.literal(3)]), mixedSizeRatioMax: z.number().min(1),
+    // Added with the ranking rule; older rows get the shop defaults of that change.
+    minWireBareMm: z.number().min(0).default(DEFAULT_REDESIGN_LIMITS.minWireBareMm),
+    harmonicKwMax: z.number().positive().max(1).default(DEFAULT_REDESIGN_LIMITS.harmonicKwMax),
   }),
 });
 
@@ -115,5 +127,5 @@ export const approveRedesignSchema = z.object({
 });
 
 /** Shop settings form: the redesign limits with the version it was loaded from. */
-export const shopSettingsSchema = z.object({ version: z.coerce.number().int().positive(), limits: limitsFormSchema });
+export const shopSettingsSchema = z.object({ version: z.coerce.number().int().nonnegative(), limits: limitsFormSchema });
 export type ShopSettingsInput = z.input<typeof shopSettingsSchema>;

@@ -1,17 +1,18 @@
 /**
- * Writes of redesign revisions: save a request (a new revision, or the open draft), choose a candidate,
- * approve. Each runs in a transaction with optimistic locking on the draft's version and records a job
+ * Writes of redesign revisions: save a request (a new revision, or the open draft) with its search result,
+ * choose a candidate from that stored result, approve (reserving the wire). Each runs in a transaction with optimistic locking on the draft's version and records a job
  * event. Approved rows are never written: the code refuses first with a clear message, and a database
  * trigger refuses anyway (migration redesign_frozen_trigger).
  */
 import { db, Prisma } from '@/lib/db/client';
 import { redesignReport } from '@/lib/engine/redesign/report';
-import type { RedesignRequest } from '@/lib/engine/redesign/types';
+import type { Candidate, RedesignRequest } from '@/lib/engine/redesign/types';
 import { recordJobEvent } from '@/lib/jobs/job-writes';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
 import { storedRequestSchema } from '@/lib/redesign/redesign-schema';
 import type { SessionUser } from '@/lib/auth/session-store';
 import { loadRedesignContext, runSearch } from './redesign-context';
+import { isStoredSearch, toStoredSearch } from './stored-search';
 import { REDESIGN_SNAPSHOT_FORMAT, REDESIGN_SNAPSHOT_VERSION, type RedesignSnapshot } from './snapshot';
 
 /** Messages pinned by the tests. */
@@ -22,6 +23,7 @@ export const REDESIGN_MESSAGES = {
   noChoice: 'Choose a candidate before approving.',
   sheetChanged: 'The as-found sheet was changed after this request was made. Run the search again so the approval matches the sheet.',
   candidateGone: 'The chosen candidate is no longer among the results (the stock or the shop limits changed). Choose again from the current list.',
+  noStoredSearch: 'This revision has no stored search result. Submit the request again to search.',
 } as const;
 
 type Tx = Prisma.TransactionClient;
@@ -50,14 +52,18 @@ function staleOnRace(err: unknown): never {
 export async function saveRedesignRequest(user: SessionUser, jobId: string, draftVersion: number | undefined, request: RedesignRequest): Promise<{ id: string; revision: number; version: number }> {
   const ctx = await loadRedesignContext(jobId);
   if (!ctx.ok) throw new DomainError('invalid', ctx.reason);
-  const searched = runSearch(ctx.value, request);
+  const searched = await runSearch(ctx.value, request);
   if (!searched.ok) {
     const field = searched.error.field ?? '_form';
-    throw new DomainError('invalid', `${searched.error.message} ${searched.error.hint}`, { [field]: [searched.error.message] });
+    throw new DomainError('invalid', `${searched.error.message} ${searched.error.hint}`, { [field]: [`${searched.error.message} ${searched.error.hint}`] });
   }
+  const stored = toStoredSearch(searched.value, ctx.value.sheet.revision);
   return db().$transaction(async (tx) => {
     const latest = await tx.redesign.findFirst({ where: { jobId }, orderBy: { revision: 'desc' } });
-    const data = { request: request as unknown as Prisma.InputJsonObject, sheetRevision: ctx.value.sheet.revision, chosenKey: null };
+    const data = {
+      request: request as unknown as Prisma.InputJsonObject, sheetRevision: ctx.value.sheet.revision, chosenKey: null,
+      search: stored as unknown as Prisma.InputJsonObject, searchedAt: new Date(),
+    };
     if (latest && latest.status === 'DRAFT') {
       if (draftVersion !== undefined && draftVersion !== latest.version) throw new DomainError('stale', REDESIGN_MESSAGES.stale);
       const r = await tx.redesign.updateMany({ where: { id: latest.id, version: latest.version, status: 'DRAFT' }, data: { ...data, version: { increment: 1 } } });
@@ -72,16 +78,12 @@ export async function saveRedesignRequest(user: SessionUser, jobId: string, draf
   }).catch(staleOnRace);
 }
 
-/** Records the chosen candidate of a draft; the key must be one the current search returns. */
+/** Records the chosen candidate of a draft; the key must be one of the revision's stored search result. */
 export async function chooseRedesignCandidate(user: SessionUser, input: { redesignId: string; version: number; key: string }): Promise<{ version: number; rank: number }> {
-  const head = await db().redesign.findUnique({ where: { id: input.redesignId }, select: { jobId: true } });
-  if (!head) throw new DomainError('not-found', MESSAGES.notFound('redesign'));
-  const ctx = await loadRedesignContext(head.jobId);
-  if (!ctx.ok) throw new DomainError('invalid', ctx.reason);
   return db().$transaction(async (tx) => {
     const row = await draftForUpdate(tx, input.redesignId, input.version);
-    const searched = runSearch(ctx.value, storedRequestSchema.parse(row.request));
-    const candidate = searched.ok ? searched.value.candidates.find((c) => c.key === input.key) : undefined;
+    if (!isStoredSearch(row.search)) throw new DomainError('invalid', REDESIGN_MESSAGES.noStoredSearch);
+    const candidate = row.search.search.candidates.find((c) => c.key === input.key);
     if (!candidate) throw new DomainError('invalid', REDESIGN_MESSAGES.candidateGone);
     const r = await tx.redesign.updateMany({ where: { id: row.id, version: row.version, status: 'DRAFT' }, data: { chosenKey: candidate.key, version: { increment: 1 } } });
     if (r.count === 0) throw new DomainError('stale', REDESIGN_MESSAGES.stale);
@@ -91,21 +93,24 @@ export async function chooseRedesignCandidate(user: SessionUser, input: { redesi
 }
 
 /**
- * Approves a draft: searches again with the stored request on the current sheet and stock, checks the
- * chosen candidate is still there, and freezes request, candidate and full report as the snapshot.
+ * Approves a draft: searches again (off the request thread) with the stored request on the current sheet and
+ * stock, checks the chosen candidate is still there, freezes request, candidate and full report as the
+ * snapshot, reserves its wire from stock and releases the wire of the revision it supersedes.
  */
 export async function approveRedesign(user: SessionUser, input: { redesignId: string; version: number; note: string }): Promise<{ revision: number }> {
-  const head = await db().redesign.findUnique({ where: { id: input.redesignId }, select: { jobId: true, job: { select: { number: true } } } });
+  const head = await db().redesign.findUnique({ where: { id: input.redesignId }, select: { jobId: true, request: true, job: { select: { number: true } } } });
   if (!head) throw new DomainError('not-found', MESSAGES.notFound('redesign'));
   const ctx = await loadRedesignContext(head.jobId);
   if (!ctx.ok) throw new DomainError('invalid', ctx.reason);
+  const request = storedRequestSchema.parse(head.request);
+  const searched = await runSearch(ctx.value, request);
+  if (!searched.ok) throw new DomainError('invalid', `${searched.error.message} ${searched.error.hint}`);
+  const stockRows = await db().wireStock.findMany({ select: { id: true, standard: true, size: true, enamelGrade: true } });
   return db().$transaction(async (tx) => {
     const row = await draftForUpdate(tx, input.redesignId, input.version);
     if (!row.chosenKey) throw new DomainError('invalid', REDESIGN_MESSAGES.noChoice);
     if (row.sheetRevision !== ctx.value.sheet.revision) throw new DomainError('stale', REDESIGN_MESSAGES.sheetChanged);
-    const request = storedRequestSchema.parse(row.request);
-    const searched = runSearch(ctx.value, request);
-    if (!searched.ok) throw new DomainError('invalid', `${searched.error.message} ${searched.error.hint}`);
+    // The request cannot have changed since it was read: a change bumps the version draftForUpdate checked.
     const candidate = searched.value.candidates.find((c) => c.key === row.chosenKey);
     if (!candidate) throw new DomainError('invalid', REDESIGN_MESSAGES.candidateGone);
     const report = redesignReport(ctx.value.original, request, searched.value, candidate);
@@ -120,10 +125,36 @@ export async function approveRedesign(user: SessionUser, input: { redesignId: st
     };
     const r = await tx.redesign.updateMany({
       where: { id: row.id, version: row.version, status: 'DRAFT' },
-      data: { status: 'APPROVED', approvedById: user.id, approvedAt: at, approvalNote: input.note, snapshot: snapshot as unknown as Prisma.InputJsonObject, version: { increment: 1 } },
+      data: {
+        status: 'APPROVED', approvedById: user.id, approvedAt: at, approvalNote: input.note, snapshot: snapshot as unknown as Prisma.InputJsonObject,
+        search: toStoredSearch(searched.value, ctx.value.sheet.revision) as unknown as Prisma.InputJsonObject, searchedAt: at, version: { increment: 1 },
+      },
     });
     if (r.count === 0) throw new DomainError('stale', REDESIGN_MESSAGES.stale);
-    await recordJobEvent(tx, { jobId: row.jobId, userId: user.id, kind: 'REDESIGN_APPROVED', message: `Redesign revision ${row.revision} approved by ${user.name}: ${candidate.winding.turnsPerCoil.join('/')} turns, ${candidate.winding.connection}, ${candidate.wires.label}.`, data: { revision: row.revision, key: candidate.key } });
+    const reserved = await reserveWire(tx, row.id, row.jobId, candidate, stockRows, at);
+    await recordJobEvent(tx, {
+      jobId: row.jobId, userId: user.id, kind: 'REDESIGN_APPROVED',
+      message: `Redesign revision ${row.revision} approved by ${user.name}: ${candidate.winding.turnsPerCoil.join('/')} turns, ${candidate.winding.connection}, ${candidate.wires.label}.${reserved.length > 0 ? ` Wire reserved: ${reserved.join(', ')}.` : ''}`,
+      data: { revision: row.revision, key: candidate.key },
+    });
     return { revision: row.revision };
   });
+}
+
+/**
+ * Reserves the candidate's wire (kg per size, as wound) from the stock rows that hold its sizes, and releases
+ * the reservations of the job's earlier revisions, which this approval supersedes. Sizes the stock does not
+ * list are not reserved (the comparison marked them short).
+ */
+async function reserveWire(tx: Tx, redesignId: string, jobId: string, candidate: Candidate, stockRows: { id: string; standard: string; size: string; enamelGrade: number }[], at: Date): Promise<string[]> {
+  await tx.wireReservation.updateMany({ where: { releasedAt: null, redesign: { jobId }, NOT: { redesignId } }, data: { releasedAt: at } });
+  const out: string[] = [];
+  for (const [i, part] of candidate.wires.parts.entries()) {
+    const stock = stockRows.find((s) => s.standard === part.wire.standard && s.size === part.wire.size && s.enamelGrade === part.wire.enamelGrade);
+    const kg = candidate.wireNeeds[i]?.kg ?? 0;
+    if (!stock || !(kg > 0)) continue;
+    await tx.wireReservation.create({ data: { redesignId, stockId: stock.id, kg, createdAt: at } });
+    out.push(`${kg.toFixed(2)} kg of ${part.wire.label}`);
+  }
+  return out;
 }

@@ -24,6 +24,8 @@ export async function getShopLimits(): Promise<{ limits: RedesignLimits; version
       maxStrandsInHand: s.maxStrandsInHand,
       maxWireSizes: sizes,
       mixedSizeRatioMax: s.mixedSizeRatioMax,
+      minWireBareMm: s.minWireBareMm,
+      harmonicKwMax: s.harmonicKwMax,
     },
     version: s.version,
     updatedAt: s.updatedAt,

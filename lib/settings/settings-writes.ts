@@ -13,7 +13,7 @@ const columns = (l: RedesignLimits, userId: string) => ({
   fluxGapRise: l.gap.over, fluxGapFall: l.gap.under, fluxToothRise: l.tooth.over, fluxToothFall: l.tooth.under,
   fluxYokeRise: l.yoke.over, fluxYokeFall: l.yoke.under, currentDensityRise: l.currentDensityRise,
   currentDensityMaxAPerMm2: l.currentDensityMaxAPerMm2, slotFillMax: l.slotFillMax, maxStrandsInHand: l.maxStrandsInHand,
-  maxWireSizes: l.maxWireSizes, mixedSizeRatioMax: l.mixedSizeRatioMax, updatedById: userId,
+  maxWireSizes: l.maxWireSizes, mixedSizeRatioMax: l.mixedSizeRatioMax, minWireBareMm: l.minWireBareMm, harmonicKwMax: l.harmonicKwMax, updatedById: userId,
 });
 
 export async function saveShopLimits(userId: string, version: number, limits: RedesignLimits): Promise<{ version: number }> {

@@ -3,6 +3,7 @@
  * turn "" / NaN / null into "not given" so optional fields stay optional and messages stay in trade words.
  */
 import { z } from 'zod';
+import { numberTextMessage, parseDecimal } from './number-text';
 
 const blankToUndefined = (v: unknown): unknown =>
   v === '' || v === null || (typeof v === 'number' && Number.isNaN(v)) ? undefined : v;
@@ -10,8 +11,8 @@ const blankToUndefined = (v: unknown): unknown =>
 const toNumber = (v: unknown): unknown => {
   const b = blankToUndefined(v);
   if (typeof b === 'string') {
-    const n = Number(b.trim().replace(',', '.'));
-    return Number.isNaN(n) ? b : n;
+    const n = parseDecimal(b);
+    return n === '' ? undefined : n;
   }
   return b;
 };
@@ -28,7 +29,7 @@ interface NumberRule {
 
 function numberSchema({ min, max, positive, int, label, unit }: NumberRule) {
   const u = unit ? ` ${unit}` : '';
-  let s = z.number({ error: `${label} must be a number.` });
+  let s = z.number({ error: (issue) => (typeof issue.input === 'string' ? numberTextMessage(label, issue.input) : `${label} must be a number.`) });
   if (int) s = s.int(`${label} must be a whole number.`);
   if (positive) s = s.positive(`${label} must be greater than zero.`);
   if (min !== undefined) s = s.min(min, `${label} must be at least ${min}${u}.`);

@@ -44,7 +44,8 @@ describe('a winder records the final tests', () => {
     const dc = proposed.match(/(\d+) V DC/)?.[1];
     expect(dc).toBeDefined();
     await page.getByLabel('Applied voltage').fill(dc!);
-    await page.getByLabel('Result', { exact: true }).selectOption('pass');
+    // Issue 9: the hipot result is the operator's observation, asked in words.
+    await page.getByLabel('Did the winding hold?').selectOption('pass');
     for (const p of ['A', 'B', 'C']) await page.getByLabel(`Phase ${p} result`).selectOption('pass');
 
     await page.getByLabel('Resistance, leads A–B').fill('1.52');

@@ -100,7 +100,7 @@ describe('the bench pack of an approved redesign, through the route', () => {
     const row = await db().redesign.findUniqueOrThrow({ where: { id: r.data.id } });
     const ctx = await loadRedesignContext(jobId);
     if (!ctx.ok) throw new Error(ctx.reason);
-    const found = runSearch(ctx.value, storedRequestSchema.parse(row.request));
+    const found = await runSearch(ctx.value, storedRequestSchema.parse(row.request));
     const key = found.ok ? found.value.candidates[0]?.key : undefined;
     if (!key) throw new Error('no candidate');
     const chosen = await chooseCandidate({ redesignId: r.data.id, version: r.data.version, key });

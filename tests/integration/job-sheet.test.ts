@@ -55,7 +55,8 @@ describe('the job sheet PDF', () => {
       at = next;
     }
     expect(text).toContain(job.company);
-    expect(text).toMatch(new RegExp(`Job ${job.number} · Rev \\d+ · \\d{4}-\\d{2}-\\d{2}`));
+    // Issue 9: the sheet is numbered by its issue (Issue 1 first), not by the count of timeline events.
+    expect(text).toMatch(new RegExp(`Job ${job.number} · Issue 1 · \\d{4}-\\d{2}-\\d{2}`));
   });
 
   it('prints every safety notice and ends with the statement deferring to codes and licensed practice', () => {
@@ -94,7 +95,8 @@ describe('the job sheet PDF', () => {
   it('says the winding follows the original when no redesign was approved', async () => {
     const other = await db().job.findFirstOrThrow({ where: { status: 'READY' }, orderBy: { number: 'asc' } });
     const t = pdfText(await renderJobSheetPdf((await loadJobSheet(other.number))!));
-    expect(t).toContain('Rewound to the original winding data');
+    // Issue 9: the statement of work says exactly what the records support.
+    expect(t).toContain('Rewound to the as-found winding data.');
     expect(t).toContain('No final tests have been recorded yet.');
   });
 });

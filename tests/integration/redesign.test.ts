@@ -6,7 +6,7 @@ import { expectedResistanceFor } from '@/lib/final-tests/expected-resistance-sou
 import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
 import { approveRedesignRevision, chooseCandidate, submitRedesignRequest } from '@/lib/redesign/redesign-actions';
 import { loadRedesignContext, runSearch } from '@/lib/redesign/redesign-context';
-import { getApprovedRedesign, listRedesigns } from '@/lib/redesign/redesign-queries';
+import { getApprovedRedesign, getStoredSearch, listRedesigns } from '@/lib/redesign/redesign-queries';
 import { REDESIGN_MESSAGES } from '@/lib/redesign/redesign-writes';
 import { limitsToForm, storedRequestSchema, type RedesignRequestFormInput } from '@/lib/redesign/redesign-schema';
 import { saveShopSettings } from '@/lib/settings/settings-actions';
@@ -40,7 +40,7 @@ async function firstCandidateKey(redesignId: string): Promise<string> {
   const row = await db().redesign.findUniqueOrThrow({ where: { id: redesignId } });
   const ctx = await loadRedesignContext(row.jobId);
   if (!ctx.ok) throw new Error(ctx.reason);
-  const r = runSearch(ctx.value, storedRequestSchema.parse(row.request));
+  const r = await runSearch(ctx.value, storedRequestSchema.parse(row.request));
   if (!r.ok || !r.value.candidates[0]) throw new Error('no candidate');
   return r.value.candidates[0].key;
 }
@@ -178,6 +178,60 @@ describe('redesign request, choice and approval', () => {
     expect(current?.nameplate.lineVoltageV).toBe(690);
     expect((await listRedesigns(jobId)).map((x) => [x.revision, x.status])).toEqual([[2, 'APPROVED'], [1, 'APPROVED']]);
   });
+
+  it('each approval reserved the wire it winds; approving revision 2 released revision 1’s reservation (shown on the stock page)', async () => {
+    const rows = await db().wireReservation.findMany({ where: { redesign: { jobId } }, include: { redesign: { select: { revision: true } } }, orderBy: { createdAt: 'asc' } });
+    const r1 = rows.filter((x) => x.redesign.revision === 1);
+    const r2 = rows.filter((x) => x.redesign.revision === 2);
+    expect(r1.length).toBeGreaterThan(0);
+    expect(r1.every((x) => x.releasedAt !== null)).toBe(true);
+    expect(r2.length).toBeGreaterThan(0);
+    expect(r2.every((x) => x.releasedAt === null && x.kg > 0)).toBe(true);
+    // The kilograms reserved are the approved candidate's wire needs.
+    const approved = await getApprovedRedesign(jobId);
+    expect(r2.map((x) => x.kg).reduce((a, b) => a + b, 0)).toBeCloseTo((approved?.snapshot.report.candidate.wireNeeds ?? []).reduce((a, n) => a + n.kg, 0), 9);
+    const stock = await listStock();
+    const held = stock.filter((s) => s.reservations.some((x) => x.jobNumber === JOB_NUMBER && x.revision === 2));
+    expect(held.length).toBe(r2.length);
+    expect(stock.some((s) => s.reservations.some((x) => x.revision === 1 && x.jobNumber === JOB_NUMBER))).toBe(false);
+  });
+});
+
+describe('the search result is stored with the revision', () => {
+  beforeEach(() => signOutTest());
+
+  it('a saved request stores its search; choosing reads it and does not search again (the stock emptied meanwhile)', async () => {
+    await actAs(ENGINEER.email);
+    const r = await submitRedesignRequest(requestForm({ lineVoltageV: '460', frequencyHz: '60' }));
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    const stored = await getStoredSearch(r.data.id);
+    expect(stored?.search.candidates.length).toBeGreaterThan(0);
+    expect(stored?.search.candidates[0]?.keepsAsFoundWire).toBe(true);
+    const key = stored?.search.candidates[1]?.key ?? '';
+    // Were the choice searching again, the empty stock would drop every stock-made candidate.
+    const saved = await db().wireStock.findMany();
+    await db().wireReservation.deleteMany({ where: { redesignId: r.data.id } });
+    await db().$transaction([db().wireReservation.deleteMany({ where: { releasedAt: { not: null } } }), db().wireStock.deleteMany({ where: { reservations: { none: {} } } })]);
+    const chosen = await chooseCandidate({ redesignId: r.data.id, version: r.data.version, key });
+    expect(chosen).toMatchObject({ ok: true, data: { rank: 2 } });
+    await db().wireStock.createMany({ data: saved.map(({ id, standard, size, enamelGrade, bareMm, quantityKg, note }) => ({ id, standard, size, enamelGrade, bareMm, quantityKg, note })), skipDuplicates: true });
+  });
+
+  it('a request too wide for the work budget is refused with a "narrow the request" message and writes nothing', async () => {
+    await actAs(ENGINEER.email);
+    const before = await db().redesign.count({ where: { jobId } });
+    const wide = requestForm({ connection: 'either', spans: '5, 6, 7, 8, 9, 10, 11, 12', parallelPaths: '1, 2, 3, 4, 6, 8, 12, 24' });
+    const limits = { ...wide.limits, gapRisePercent: 100, gapFallPercent: 99, toothRisePercent: 100, toothFallPercent: 99, yokeRisePercent: 100, yokeFallPercent: 99, currentDensityRisePercent: 100, currentDensityMaxAPerMm2: 30, slotFillMaxPercent: 100, maxStrandsInHand: 40, maxWireSizes: 3, mixedSizeRatioMax: 3 };
+    const r = await submitRedesignRequest({ ...wide, target: { ...wide.target, allowOverPitch: true }, limits });
+    if (r.ok) {
+      // Inside the budget on this core: then it must have stored a result.
+      expect(await getStoredSearch(r.data.id)).not.toBeNull();
+    } else {
+      expect(r.message).toMatch(/Narrow the request: wires in hand \(now 40/);
+      expect(await db().redesign.count({ where: { jobId } })).toBe(before);
+    }
+  }, 60_000);
 });
 
 describe('wire stock and shop settings', () => {

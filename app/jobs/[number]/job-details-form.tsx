@@ -10,6 +10,7 @@ import { saveJobDetails } from '@/lib/jobs/job-actions';
 import { FIX_FIELDS_SUMMARY, showActionFailure } from '@/lib/errors/form-errors';
 import { Field, InputField, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
+import { onJobVersion } from './job-version';
 
 export interface JobDetails {
   jobId: string;
@@ -37,6 +38,8 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
     defaultValues: current,
   });
   useEffect(() => setValue('version', baseVersion), [baseVersion, setValue]);
+  // Your own status move bumps the job's version: follow it when this form was based on the old one.
+  useEffect(() => onJobVersion((c) => { if (c.jobId === current.jobId) setBaseVersion((v) => (v === c.from ? c.to : v)); }), [current.jobId]);
 
   const onSubmit = handleSubmit(
     (values) =>

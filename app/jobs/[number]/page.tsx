@@ -1,11 +1,14 @@
 import Link from 'next/link';
 import { can } from '@/lib/auth/permissions';
 import { getJobByNumber, listStaff, motorHistory } from '@/lib/jobs/job-queries';
-import { MAIN_PATH, STATUS_LABELS, allowedMoves, moveLabel } from '@/lib/jobs/status-flow';
+import { STATUS_LABELS, allowedMoves, moveLabel } from '@/lib/jobs/status-flow';
+import { ShopPath } from '@/app/_components/shop-path';
 import { CONNECTION_LABELS } from '@/lib/jobs/motor-schema';
 import { fmt } from '@/lib/presentation/format';
 import { polesFromSpeed } from '@/lib/engine/speed';
 import { getApprovedRedesign } from '@/lib/redesign/redesign-queries';
+import { getGateFacts } from '@/lib/jobs/gate-facts';
+import { gateRefusal, releasingDecision } from '@/lib/jobs/shop-gates';
 import { JobDetailsForm } from './job-details-form';
 import { StatusMoves } from './status-moves';
 import { PhotoUpload } from './photo-upload';
@@ -22,10 +25,14 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
   const [staff, history, redesign] = await Promise.all([listStaff(), motorHistory(job.motorId, job.id), getApprovedRedesign(job.id)]);
   const m = job.motor;
   const poles = m.frequencyHz && m.speedRpm ? polesFromSpeed(m.frequencyHz, m.speedRpm) : null;
+  const facts = await getGateFacts(job.id);
   const moves = can(user.role, 'job.move')
-    ? allowedMoves(job.status, job.heldFrom, user.role).map((to) => ({ to, label: moveLabel(job.status, to) }))
+    ? allowedMoves(job.status, job.heldFrom, user.role).map((to) => {
+        const blocked = gateRefusal(job.status, to, facts);
+        const release = blocked ? releasingDecision(job.status, to) : null;
+        return { to, label: moveLabel(job.status, to), ...(blocked ? { blocked } : {}), ...(release ? { release } : {}) };
+      })
     : [];
-  const currentIndex = MAIN_PATH.indexOf(job.status);
   const contact = job.customer.contacts[0];
 
   return (
@@ -34,18 +41,13 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
       <h1>
         Job {job.number} · {job.customer.company}
       </h1>
-      <ol className="status-path" aria-label="Shop path">
-        {MAIN_PATH.map((s, i) => (
-          <li key={s} aria-current={s === job.status ? 'step' : undefined} className={currentIndex > i ? 'done' : undefined}>
-            {STATUS_LABELS[s]}
-          </li>
-        ))}
-        {!MAIN_PATH.includes(job.status) && <li aria-current="step">{STATUS_LABELS[job.status]}{job.heldFrom ? ` (from ${STATUS_LABELS[job.heldFrom]})` : ''}</li>}
-      </ol>
+      <ShopPath status={job.status} heldFrom={job.heldFrom} />
 
       <section className="card" aria-labelledby="moves-h">
         <h2 id="moves-h">Status: {STATUS_LABELS[job.status]}</h2>
-        <StatusMoves jobId={job.id} version={job.version} moves={moves} />
+        <StatusMoves jobId={job.id} version={job.version} moves={moves} mayRelease={can(user.role, 'job.override')} />
+        {facts.readyOverride && <p className="small" data-testid="ready-override">Engineer’s override on record ({facts.readyOverride.by}, {fmt.date(facts.readyOverride.at)}): {facts.readyOverride.reason}</p>}
+        {facts.keepOriginal && <p className="small">Original winding kept ({facts.keepOriginal.by}, {fmt.date(facts.keepOriginal.at)}): {facts.keepOriginal.reason}</p>}
       </section>
 
       <nav className="card no-print" aria-label="Workshop records">
@@ -60,7 +62,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
         </ul>
       </nav>
 
-      <div className="grid" style={{ gridTemplateColumns: 'repeat(auto-fit, minmax(340px, 1fr))' }}>
+      <div className="grid" style={{ gridTemplateColumns: 'repeat(auto-fit, minmax(min(340px, 100%), 1fr))' }}>
         <section className="card" aria-labelledby="cust-h">
           <h2 id="cust-h">Customer</h2>
           <dl className="dl">

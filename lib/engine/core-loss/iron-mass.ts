@@ -11,8 +11,6 @@
  * Example A core: m_y = 7650·2.85e-3·0.67544 = 14.726 kg [derived].
  */
 export const SILICON_STEEL_DENSITY_KG_PER_M3 = 7650;
-/** 1 lb = 0.45359237 kg exactly (international pound). */
-export const KG_PER_LB = 0.45359237;
 
 export const backIronMassKg = (areaM2: number, meanPathM: number, densityKgPerM3 = SILICON_STEEL_DENSITY_KG_PER_M3): number =>
   densityKgPerM3 * areaM2 * meanPathM;

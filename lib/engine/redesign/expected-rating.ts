@@ -8,7 +8,8 @@ import type { ExpectedRating, RedesignOriginal, RedesignTarget } from './types';
 
 /** Stated with every redesign; the sheet prints them beside the figures. */
 export const RATING_ASSUMPTIONS: readonly string[] = [
-  'Torque is kept: the new winding keeps the gap flux density and the current density of the original in the same core [derived].',
+  // [derived] from the flux and current-density equivalence (reference §3); printed without the marker.
+  'Torque is kept: the new winding keeps the gap flux density and the current density of the original in the same core.',
   'Power follows the synchronous speed: P_new = P_old × n_new/n_old; with a frequency change the speed and the power change together.',
   'Line current follows power over voltage (P = √3·V·I·η·cos φ with efficiency and power factor unchanged): I_new = I_old × (P_new/P_old) × (V_old/V_new).',
   'Slip is taken as the same fraction of synchronous speed as on the original nameplate.',

@@ -17,8 +17,11 @@ import type { RedesignLimits, RedesignOriginal, StockWire } from './types';
  * never pass 6 A/mm² [from memory: textbook stator ranges 3–5 A/mm², 3–8 for totally enclosed machines].
  * Insulated wire may fill 60 % of the gross slot area [common practice, from memory: hand insertion of
  * round wire reaches about 0.65–0.75 of the net area once liner and wedge take their share]. Up to 10
- * wires in hand, 3 sizes mixed within a diameter ratio of 1.3 [common practice, from memory]. All are
- * shop settings: change them on the stock page.
+ * wires in hand, 3 sizes mixed within a diameter ratio of 1.3 [common practice, from memory]. Wire under
+ * 0.50 mm bare is penalised in the ranking (fine wire is slow to wind and easy to nick [common practice, from
+ * memory]); k_w5 and k_w7 may reach 0.26, which is what a full-pitch 60°-belt winding with q = 2 has
+ * (0.2588 [derived], reference §1): every usual integral-slot layout passes, badly chosen fractional or q = 1
+ * layouts do not. All are shop settings: change them on the stock page.
  */
 export const DEFAULT_REDESIGN_LIMITS: RedesignLimits = {
   gap: { over: 0.05, under: 0.1 },
@@ -30,6 +33,8 @@ export const DEFAULT_REDESIGN_LIMITS: RedesignLimits = {
   maxStrandsInHand: 10,
   maxWireSizes: 3,
   mixedSizeRatioMax: 1.3,
+  minWireBareMm: 0.5,
+  harmonicKwMax: 0.26,
 };
 
 /** A stock row as stored. */
@@ -61,7 +66,7 @@ export function originalFromSheet(sheet: WindingSheet, ratedSpeedRpm?: number): 
   for (const [i, w] of sheet.wires.entries()) {
     const s = stockWire(w);
     if (!s.ok) return fail(s.error.code, s.error.message, s.error.hint, `wires.${i}.size`);
-    wires.push({ label: s.value.label, enamelGrade: w.enamelGrade, bareMm: s.value.bareMm, overallMm: s.value.overallMm, areaMm2: s.value.areaMm2, count: w.count });
+    wires.push({ label: s.value.label, standard: s.value.standard, size: s.value.size, enamelGrade: w.enamelGrade, bareMm: s.value.bareMm, overallMm: s.value.overallMm, areaMm2: s.value.areaMm2, count: w.count });
   }
   return ok({
     winding: input.winding,

@@ -67,7 +67,8 @@ const limitText = (over: number, under: number): string => `limit +${num(over * 
 
 function fluxStatus(t: number, limit: FluxLimit): { status: RowStatus; note?: string } {
   const v = judgeFlux(t, limit);
-  if (v === 'high') return { status: 'out', note: `above the typical ${limit.typical.low}–${limit.typical.high} T [from memory]` };
+  // Typical ranges are recalled [from memory] (see lib/engine/flux.ts); the note shows the band used.
+  if (v === 'high') return { status: 'out', note: `above the typical ${limit.typical.low}–${limit.typical.high} T` };
   if (v === 'above-conservative') return { status: 'ok', note: `above the conservative ${limit.conservative?.high} T` };
   return { status: 'ok' };
 }

@@ -37,6 +37,14 @@ export function ratioViolations(r: DensityRatios, limits: Pick<RedesignLimits, '
 /** Worst relative move of any density: max |ratio − 1|. */
 export const worstDeviation = (r: DensityRatios): number => Math.max(Math.abs(r.gap - 1), Math.abs(r.tooth - 1), Math.abs(r.yoke - 1));
 
+/**
+ * Worst move of any density that the redesign could have avoided. When the poles increase and the gap
+ * density is kept, the yoke density falls by P_old/P_new whatever the turns (reference §3): that fall is
+ * forced, so only a yoke rise counts then.
+ */
+export const unforcedDeviation = (r: DensityRatios, poleRatio: number): number =>
+  Math.max(Math.abs(r.gap - 1), Math.abs(r.tooth - 1), poleRatio > 1 ? Math.max(0, r.yoke - 1) : Math.abs(r.yoke - 1));
+
 /** The whole-number turns range allowed by every density limit (lo > hi when none). */
 export function allowedTurnsRange(ratioAtOneTurn: number, poleRatio: number, limits: Pick<RedesignLimits, 'gap' | 'tooth' | 'yoke'>, maxTurns: number): { lo: number; hi: number } {
   let low = 1;
@@ -52,14 +60,15 @@ export function allowedTurnsRange(ratioAtOneTurn: number, poleRatio: number, lim
   return { lo: Math.max(1, Math.ceil(low - 1e-9)), hi: Math.min(maxTurns, Math.floor(high + 1e-9)) };
 }
 
-/** The turns to try inside the range: the `count` closest to the original densities, closest first. */
+/** The turns to try inside the range: the `count` closest to the original densities (forced falls aside), closest first. */
 export function turnsToTry(ratioAtOneTurn: number, poleRatio: number, range: { lo: number; hi: number }, count: number): number[] {
   const all: number[] = [];
   // Only the neighbourhood of the ideal matters; cap the scan for very wide limits.
-  const ideal = Math.max(range.lo, Math.min(range.hi, Math.round(ratioAtOneTurn)));
+  // The gap density is the one to keep (the yoke follows the pole ratio); start at its ideal turns.
+  const ideal = Math.max(range.lo, Math.min(range.hi, Math.round(ratioAtOneTurn * poleRatio)));
   for (let n = Math.max(range.lo, ideal - count - 1); n <= Math.min(range.hi, ideal + count + 1); n++) all.push(n);
   return all
-    .map((n) => ({ n, dev: worstDeviation(ratiosAt(ratioAtOneTurn, n, poleRatio)) }))
+    .map((n) => ({ n, dev: unforcedDeviation(ratiosAt(ratioAtOneTurn, n, poleRatio), poleRatio) }))
     .sort((a, b) => a.dev - b.dev || a.n - b.n)
     .slice(0, count)
     .map((x) => x.n);

@@ -20,6 +20,8 @@ export interface StockWire {
   /** Typical insulated diameter for the grade (enamel-build.ts approximation). */
   overallMm: number;
   areaMm2: number;
+  /** Kilograms on hand and free for this job (stock less what other approved redesigns reserve); null: not counted. */
+  onHandKg?: number | null;
 }
 
 /** How far one density may move from the original, as fractions (0.05 = +5 %). */
@@ -45,6 +47,10 @@ export interface RedesignLimits {
   maxWireSizes: 1 | 2 | 3;
   /** Largest ratio of diameters mixed in one conductor (e.g. 1.3). */
   mixedSizeRatioMax: number;
+  /** Thinnest bare wire the shop likes to wind, mm (or the as-found wire, if thinner); thinner wire is penalised. */
+  minWireBareMm: number;
+  /** Largest k_w5 and k_w7 (or the as-found winding's own, if higher); windings above it are rejected. */
+  harmonicKwMax: number;
 }
 
 /** The winding as found, on its core, with what the search needs from the data sheet (metres inside). */
@@ -54,7 +60,7 @@ export interface RedesignOriginal {
   core: CoreGeometry;
   grossSlotAreaMm2: number;
   /** Wires in hand as found (label, diameters, area, count). */
-  wires: { label: string; enamelGrade: EnamelGrade; bareMm: number; overallMm: number; areaMm2: number; count: number }[];
+  wires: { label: string; standard?: WireStandard; size?: string; enamelGrade: EnamelGrade; bareMm: number; overallMm: number; areaMm2: number; count: number }[];
   meanTurnLengthMm?: number;
   ratedCurrentA?: number;
   ratedOutputKw?: number;
@@ -77,6 +83,8 @@ export interface RedesignTarget {
   layers: 'keep' | 'double-lap';
   /** Parallel circuits to try; empty: every count the layout allows, up to 8. */
   parallelPaths: number[];
+  /** Over-pitched spans (longer than the pole pitch) are evaluated only when the engineer asks for them. */
+  allowOverPitch: boolean;
 }
 
 /** The full request as stored with a redesign revision. */
@@ -104,6 +112,22 @@ export interface DensityRatios {
   yoke: number;
 }
 
+/** One line of a candidate's winder-effort points (ranking.ts). */
+export interface EffortItem {
+  what: string;
+  points: number;
+}
+
+/** Wire a candidate needs from stock, per size, and whether the stock holds it. */
+export interface WireNeed {
+  label: string;
+  /** Copper mass wound into the stator (no allowance for leads and waste), kg. */
+  kg: number;
+  /** Free on hand, kg (null: the stock page does not count this size). */
+  onHandKg: number | null;
+  short: boolean;
+}
+
 /** One winding that meets every limit. */
 export interface Candidate {
   /** Stable identity: the same candidate has the same key in every search (used to choose and approve). */
@@ -116,33 +140,63 @@ export interface Candidate {
   fractional: boolean;
   /** k_w5, k_w7 and the MMF harmonic content √Σ(relative amplitude²) over orders ≠ 1 up to 49. */
   harmonics: { kw5: number; kw7: number; mmfDistortion: number };
+  /** Orders below the working wave or even orders a fractional-slot layout carries (relative amplitude). */
+  subHarmonics: { order: number; relativeAmplitude: number }[];
   ratios: DensityRatios;
   /** J_new/J_old with the expected current; absolute J when the rated current is known. */
   currentDensity: { ratio: number; aPerMm2: number | null };
   conductorsPerSlot: number;
   /** Insulated wire area over the gross slot area. */
   slotFill: number;
-  /** What differs from the original, in the winder's words (also what the simplicity score counts). */
+  /** Span over the new pole pitch (turn-weighted mean span / τ). */
+  pitch: number;
+  /** A double-layer span longer than the pole pitch: only when asked for, ranked after every other, with a caution. */
+  overPitched: boolean;
+  /** The as-found layout and wires in hand, re-turned or reconnected: ranked first when inside the limits. */
+  keepsAsFoundWire: boolean;
+  /** What differs from the original, in the winder's words. */
   changes: string[];
-  /** max |ratio − 1| over the densities plus a quarter of |J ratio − 1|: smaller is closer to the original. */
+  /**
+   * Unforced move from the original: max(|gap − 1|, |tooth − 1|, yoke term) + max(0, J ratio − 1). The yoke
+   * term ignores a fall when the poles increase (forced); a falling current density is never counted.
+   */
   closeness: number;
-  /** Strands + 2 per extra size + 1 per changed span, circuit count or layers, + 2 for a changed connection. */
-  simplicity: number;
+  /** Winder-effort points (ranking.ts RANKING_POINTS), itemised. */
+  effort: EffortItem[];
+  /** closeness in 5 % steps (ranking.ts) plus the effort points: lower ranks higher within a tier. */
+  score: number;
+  /** Wire needed per size against the stock on hand. */
+  wireNeeds: WireNeed[];
 }
 
 /** A family of windings (layout, connection, circuits) the search gave up on, and why. */
 export interface RejectedFamily {
   family: string;
+  /** The binding constraint, with its numbers. */
   reason: string;
+  /** Which limit binds: the screen groups by it. */
+  binding?: 'flux' | 'slot-fill' | 'strands' | 'stock-sizes' | 'circuits' | 'harmonics' | 'span' | 'layout' | 'current-density' | 'stock';
+}
+
+/** What became of the as-found winding's wires on the new supply (always evaluated). */
+export interface AsFoundCheck {
+  /** Key of the best feasible as-found-wire candidate, or null. */
+  key: string | null;
+  /** Why the as-found wires cannot be kept, with numbers (null when a candidate keeps them). */
+  reason: string | null;
 }
 
 /** Everything the search found. */
 export interface RedesignSearch {
   candidates: Candidate[];
   rejected: RejectedFamily[];
-  /** Families (layout × connection × circuits) and wire combinations looked at. */
+  /** Families (layout × connection × circuits) examined, turn counts checked and wire combinations looked at. */
   familiesTried: number;
+  turnsChecked: number;
   wireSetsConsidered: number;
+  asFound: AsFoundCheck;
+  /** Spans requested that do not suit the pole count, and what was done about it. */
+  spanNotes: string[];
   /** Ratios that hold for every candidate (from the supply change alone). */
   expected: ExpectedRating;
   /** The original's own figures for comparison. */
@@ -189,4 +243,10 @@ export interface LayoutFamily {
   coilsPerPhase: number;
   /** Turn-weighted mean span, slots (end-turn length scales with it). */
   meanSpan: number;
+  /** Mean span over the pole pitch; over 1 is over-pitched (double layer only). */
+  pitch: number;
+  overPitched: boolean;
+  /** The as-found layout (poles, layers, style and spans unchanged). */
+  asFoundLayout: boolean;
+  subHarmonics: { order: number; relativeAmplitude: number }[];
 }

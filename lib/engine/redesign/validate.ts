@@ -40,6 +40,10 @@ export function checkRedesignInput(original: RedesignOriginal, request: Redesign
     return fail('invalid-input', 'Sizes per conductor must be 1, 2 or 3.', 'Most shops mix at most 2 or 3 sizes.', 'limits.maxWireSizes');
   if (!(limits.mixedSizeRatioMax >= 1 && limits.mixedSizeRatioMax <= 3))
     return fail('invalid-input', 'The mixed-size diameter ratio must be from 1 to 3.', 'Typical: 1.3.', 'limits.mixedSizeRatioMax');
+  if (!(limits.minWireBareMm >= 0 && limits.minWireBareMm <= 5))
+    return fail('invalid-input', 'The thinnest wire must be from 0 to 5 mm bare.', 'Typical: 0.5 mm.', 'limits.minWireBareMm');
+  if (!(limits.harmonicKwMax > 0 && limits.harmonicKwMax <= 1))
+    return fail('invalid-input', 'The k_w5/k_w7 limit must be above 0 and at most 1.', 'Typical: 0.26 (a full-pitch winding with q = 2).', 'limits.harmonicKwMax');
   if (!positive(original.grossSlotAreaMm2))
     return fail('invalid-input', 'The slot area of the as-found sheet is not usable.', 'Check the slot depth and widths on the sheet.', 'core.slotDepthMm');
   if (original.wires.length === 0 || original.wires.some((w) => !positive(w.areaMm2) || !(w.count >= 1)))

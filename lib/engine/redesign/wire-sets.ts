@@ -73,11 +73,14 @@ export interface WireSetView {
 
 /**
  * Calls `visit` for every wire set whose copper area lies in [minArea, maxArea]: for each group the last
- * size's count is solved from the window, so only sets inside it are generated. Returns how many. The
- * view's arrays are reused between calls: copy what you keep.
+ * size's count is solved from the window, so only sets inside it are generated, and partial counts that
+ * cannot reach the window are skipped. Returns how many sets were visited (`n`), the work spent (`steps`:
+ * visits plus partial counts tried) and whether it stopped at `budget` steps (the caller reports a request
+ * too wide). The view's arrays are reused between calls: copy what you keep.
  */
-export function forEachWireSet(g: WireGroups, minArea: number, maxArea: number, visit: (v: WireSetView) => void): number {
+export function forEachWireSet(g: WireGroups, minArea: number, maxArea: number, visit: (v: WireSetView) => void, budget = Number.POSITIVE_INFINITY): { n: number; steps: number; exhausted: boolean } {
   let n = 0;
+  let steps = 0;
   const view: WireSetView = { group: [], counts: [], areaMm2: 0, insulatedAreaMm2: 0, strands: 0 };
   const area = g.wires.map((w) => w.areaMm2);
   const ins = g.wires.map((w) => circle(w.overallMm));
@@ -92,29 +95,39 @@ export function forEachWireSet(g: WireGroups, minArea: number, maxArea: number, 
         const lo = Math.max(1, Math.ceil((minArea - usedA) / aLast - 1e-9));
         const hi = Math.min(left, Math.floor((maxArea - usedA) / aLast + 1e-9));
         for (let c = lo; c <= hi; c++) {
+          if (steps >= budget) return;
           counts[pos] = c;
           view.counts = counts;
           view.areaMm2 = usedA + c * aLast;
           view.insulatedAreaMm2 = usedI + c * (ins[last] as number);
           view.strands = usedN + c;
           n++;
+          steps++;
           visit(view);
         }
         return;
       }
       const idx = group[pos] as number;
+      // Sizes are thickest first: the rest of the strands of the next size bound what the remaining sizes add.
+      const nextArea = area[group[pos + 1] as number] as number;
       // Leave at least one strand for each remaining size.
-      for (let c = 1; usedN + c <= g.maxStrands - (k - 1 - pos); c++) {
+      for (let c = 1; usedN + c <= g.maxStrands - (k - 1 - pos) && steps < budget; c++) {
         const a = usedA + c * (area[idx] as number);
         if (a >= maxArea) break;
+        steps++;
+        if (a + (g.maxStrands - usedN - c) * nextArea < minArea) continue;
         counts[pos] = c;
         rec(pos + 1, a, usedI + c * (ins[idx] as number), usedN + c, counts);
       }
     };
     rec(0, 0, 0, 0, new Array<number>(k).fill(1));
+    if (steps >= budget) return { n, steps, exhausted: true };
   }
-  return n;
+  return { n, steps, exhausted: false };
 }
+
+/** The largest copper area the stock can make with the wires in hand allowed: the thickest size, every strand. */
+export const largestArea = (g: WireGroups): number => g.maxStrands * Math.max(0, ...g.wires.map((w) => w.areaMm2));
 
 /** "2 × 0.850 mm + 1 × 0.800 mm (grade 3)": grade shown when it is not the usual grade 2. */
 export function partsLabel(parts: readonly { wire: Pick<StockWire, 'label' | 'enamelGrade'>; count: number }[]): string {

@@ -26,7 +26,7 @@ export async function seedStock(prisma: PrismaClient): Promise<void> {
     data: {
       fluxGapRise: l.gap.over, fluxGapFall: l.gap.under, fluxToothRise: l.tooth.over, fluxToothFall: l.tooth.under, fluxYokeRise: l.yoke.over,
       fluxYokeFall: l.yoke.under, currentDensityRise: l.currentDensityRise, currentDensityMaxAPerMm2: l.currentDensityMaxAPerMm2,
-      slotFillMax: l.slotFillMax, maxStrandsInHand: l.maxStrandsInHand, maxWireSizes: l.maxWireSizes, mixedSizeRatioMax: l.mixedSizeRatioMax,
+      slotFillMax: l.slotFillMax, maxStrandsInHand: l.maxStrandsInHand, maxWireSizes: l.maxWireSizes, mixedSizeRatioMax: l.mixedSizeRatioMax, minWireBareMm: l.minWireBareMm, harmonicKwMax: l.harmonicKwMax,
     },
   });
 }

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { windingSheetSchema } from '@/lib/as-found/winding-sheet-schema';
-import { convertTypedLength } from '@/lib/as-found/length-entry';
-import { convertFormLengths, emptySheetForm, formToSheetInput, sheetPathToFormPath, sheetToForm } from '@/lib/as-found/as-found-form';
+import { emptySheetForm, savedLengthMemory, switchFormLengths, formToSheetInput, sheetPathToFormPath, sheetToForm } from '@/lib/as-found/as-found-form';
 import { restoreDraftValues } from '@/lib/as-found/draft-values';
 import { prefillFromNameplate } from '@/lib/as-found/prefill';
 import { EXAMPLE_A_SHEET } from '../../support/fixtures/winding-fixtures';
@@ -20,11 +19,18 @@ describe('the sheet form model', () => {
     expect(back.core.slots).toBe(36);
   });
 
+  // Issue 9: a saved sheet shown in inches and saved untouched keeps its stored millimetres exactly.
+  it('saves a sheet shown in inches without changing a stored length', () => {
+    const memory = new Map(savedLengthMemory(EXAMPLE_A_SHEET, 'in'));
+    const back = windingSheetSchema.parse(formToSheetInput(sheetToForm(EXAMPLE_A_SHEET, 'in'), 'in', undefined, memory));
+    expect(back).toEqual(windingSheetSchema.parse(EXAMPLE_A_SHEET));
+  });
+
   it('shows lengths in the chosen unit beside counts that never convert', () => {
     const f = sheetToForm(EXAMPLE_A_SHEET, 'in');
     expect(f.core.boreMm).toBe('5.9055');
     expect(f.core.slots).toBe('36');
-    const mm = convertFormLengths(f, 'in', 'mm', convertTypedLength);
+    const mm = switchFormLengths(f, 'in', 'mm', new Map()).values;
     expect(Number(mm.core.boreMm)).toBeCloseTo(150, 2);
     expect(mm.core.slots).toBe('36');
   });
@@ -40,6 +46,13 @@ describe('the sheet form model', () => {
     expect(input.winding.turnsPerCoil).toEqual([20, 21]);
     expect('ventDucts' in input.core).toBe(false);
     expect(input.resistance).toBeUndefined();
+  });
+
+  // Issue 9: a span written the way the label shows it is accepted as well as the number of pitches.
+  it.each([['1–8', 7], ['1-8', 7], ['7', 7]])('reads the span "%s" as %i slot pitches', (text, pitches) => {
+    const f = sheetToForm(EXAMPLE_A_SHEET, 'mm');
+    f.winding.coils = [{ span: text as string, turns: '14' }];
+    expect((formToSheetInput(f, 'mm') as { winding: { spans: unknown } }).winding.spans).toEqual([pitches]);
   });
 
   it('lets the schema name a field typed with words instead of a number', () => {

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { convertTypedLength, lengthToMm, mmToLength, parseTypedNumber } from '@/lib/as-found/length-entry';
+import { convertTypedLength, lengthToMm, mmToLength, parseTypedNumber, switchTypedLength, typedLengthToMm, type LengthUnit, type TypedLength } from '@/lib/as-found/length-entry';
+import { parseDecimal } from '@/lib/validation/number-text';
 
 describe('lengths typed in mm or inches, stored in mm', () => {
   // 1 in = 25.4 mm exactly (international inch, 1959) [derived from the definition].
@@ -46,5 +47,58 @@ describe('lengths typed in mm or inches, stored in mm', () => {
     ['12..5', '12..5'],
   ] as const)('reads "%s" as %s', (text, expected) => {
     expect(parseTypedNumber(text)).toBe(expected);
+  });
+});
+
+describe('the mm/in toggle never changes a stored value (issue 9)', () => {
+  /** Switches a field through a sequence of units, then returns what it shows and what it would store. */
+  function toggle(text: string, start: LengthUnit, path: LengthUnit[]): { shown: string; storedMm: number | string | undefined } {
+    let unit = start;
+    let shown = text;
+    let memory: TypedLength | undefined;
+    for (const to of path) {
+      const r = switchTypedLength(shown, unit, to, memory);
+      shown = r.text;
+      memory = r.memory;
+      unit = to;
+    }
+    return { shown, storedMm: typedLengthToMm(shown, unit, memory) };
+  }
+
+  it('mm → in → mm gives back 0.4 and 560, not 0.399 and 559.999', () => {
+    expect(toggle('0.4', 'mm', ['in', 'mm'])).toEqual({ shown: '0.4', storedMm: 0.4 });
+    expect(toggle('560', 'mm', ['in', 'mm'])).toEqual({ shown: '560', storedMm: 560 });
+    expect(toggle('560', 'mm', ['in']).storedMm).toBe(560);
+  });
+
+  it('stores what was typed, converted once, after any number of toggles [property]', () => {
+    const typed = fc.tuple(fc.integer({ min: 1, max: 5_000_000 }), fc.integer({ min: 0, max: 4 })).map(([n, d]) => (n / 10 ** d).toString());
+    fc.assert(
+      fc.property(typed, fc.constantFrom<LengthUnit>('mm', 'in'), fc.array(fc.constantFrom<LengthUnit>('mm', 'in'), { maxLength: 8 }), (text, start, path) => {
+        const r = toggle(text, start, path);
+        expect(r.storedMm).toBe(lengthToMm(Number(text), start));
+        if ((path.at(-1) ?? start) === start) expect(r.shown).toBe(text);
+      }),
+    );
+  });
+
+  it('converts an edited field from its new text, not from the remembered one', () => {
+    const first = switchTypedLength('150', 'mm', 'in', undefined);
+    expect(typedLengthToMm('6', 'in', first.memory)).toBe(152.4);
+  });
+});
+
+describe('decimal commas (issue 9)', () => {
+  it.each([
+    ['15,5', 15.5],
+    ['0,4', 0.4],
+    [',5', 0.5],
+    ['15.5', 15.5],
+    ['1500', 1500],
+  ] as const)('reads "%s" as %s, never as 155', (text, value) => {
+    expect(parseDecimal(text)).toBe(value);
+  });
+  it.each(['1,500', '1.234,5', '1,2,3', '15,5 mm'])('refuses "%s" as typed instead of guessing', (text) => {
+    expect(parseDecimal(text)).toBe(text);
   });
 });

@@ -2,13 +2,19 @@ import { describe, expect, it } from 'vitest';
 import { instrumentSerials, testDataSchema, testRecordFormSchema } from '@/lib/final-tests/test-record-schema';
 import { basisDefaults, newRecordDefaults, recordToFormData } from '@/lib/final-tests/defaults';
 import { liveJudgement } from '@/lib/final-tests/live-judgement';
+import { asRepairedRating } from '@/lib/final-tests/test-rating';
 import { PASSING, record } from '../../support/fixtures/final-test-fixtures';
+
+const plate = (ratedVoltageV: number, insulationClass: string | null, outputKw: number | null, frequencyHz: number) => ({
+  rating: asRepairedRating({ ratedVoltageV, frequencyHz, outputKw, speedRpm: null, currentA: null, connection: null }, null),
+  insulationClass,
+});
 
 const paths = (r: ReturnType<typeof testDataSchema.safeParse>) => (r.success ? [] : r.error.issues.map((i) => i.path.join('.')));
 
 describe('test record schema', () => {
   it('accepts an empty set of readings (tests are recorded as they are done)', () => {
-    const empty = newRecordDefaults({ ratedVoltageV: 460, insulationClass: 'F', outputKw: 3.7, frequencyHz: 60 }, null, null);
+    const empty = newRecordDefaults(plate(460, 'F', 3.7, 60), null, null);
     const r = testDataSchema.safeParse(empty);
     expect(r.success).toBe(true);
   });
@@ -51,20 +57,20 @@ describe('test record schema', () => {
 
 describe('defaults from the nameplate and the as-found sheet', () => {
   it('takes voltage and class from the nameplate, random-wound below 1000 V, NEMA at 60 Hz', () => {
-    const { basis, practice } = basisDefaults({ ratedVoltageV: 460, insulationClass: 'f', outputKw: 3.7, frequencyHz: 60 }, null);
+    const { basis, practice } = basisDefaults(plate(460, 'f', 3.7, 60), null);
     expect(basis).toMatchObject({ ratedVoltageV: 460, insulationClass: 'F', windingKind: 'random', irCategory: 'random-wound' });
     expect(practice).toBe('nema');
   });
 
   it('uses form-wound and the 100 MΩ category at 4160 V, IEC at 50 Hz', () => {
-    const { basis, practice } = basisDefaults({ ratedVoltageV: 4160, insulationClass: null, outputKw: null, frequencyHz: 50 }, null);
+    const { basis, practice } = basisDefaults(plate(4160, null, null, 50), null);
     expect(basis).toMatchObject({ windingKind: 'form', irCategory: 'form-wound', insulationClass: '' });
     expect(practice).toBe('iec');
   });
 
   it('starts a retest from the previous basis with the 80 % repeat hipot', () => {
     const prev = record((d) => { d.basis.insulationClass = 'H'; });
-    const next = newRecordDefaults({ ratedVoltageV: 460, insulationClass: 'F', outputKw: 3.7, frequencyHz: 60 }, null, prev);
+    const next = newRecordDefaults(plate(460, 'F', 3.7, 60), null, prev);
     expect(next.basis.insulationClass).toBe('H');
     expect(next.hipot.case).toBe('repeat');
     expect(next.ir.instrumentSerial).toBe('MEG-1001');
@@ -86,5 +92,42 @@ describe('live verdicts while typing', () => {
     const d = structuredClone(PASSING);
     d.basis.ratedVoltageV = '';
     expect(liveJudgement(d)).toBeNull();
+  });
+});
+
+describe('impossible readings are refused with a field error (issue 9)', () => {
+  const rated = (d: typeof PASSING) => { d.basis.frequencyHz = 60; d.basis.poles = 4; };
+  it('refuses a speed above synchronous without a note (120·60/4 = 1800 rpm)', () => {
+    const d = structuredClone(PASSING);
+    rated(d);
+    d.run.speedRpm = 1850;
+    const r = testDataSchema.safeParse(d);
+    expect(paths(r)).toContain('run.speedRpm');
+    expect(r.success ? '' : r.error.issues.map((i) => i.message).join(' ')).toContain('above the synchronous 1800 rpm');
+    d.run.notes = 'Run on the test-bay inverter at 62 Hz.';
+    expect(testDataSchema.safeParse(d).success).toBe(true);
+  });
+  it.each([
+    ['a winding temperature below −40 °C', (d: typeof PASSING) => { d.ir.temperatureC = -80; }, 'ir.temperatureC'],
+    ['a bearing temperature above 250 °C', (d: typeof PASSING) => { d.run.bearingDeC = 400; }, 'run.bearingDeC'],
+    ['a negative phase current', (d: typeof PASSING) => { d.run.currentsA = [-1, 3, 3]; }, 'run.currentsA.0'],
+    ['a hipot voltage without its duration', (d: typeof PASSING) => { d.hipot.durationS = ''; }, 'hipot.durationS'],
+  ])('refuses %s', (_n, patch, path) => {
+    const d = structuredClone(PASSING);
+    patch(d);
+    expect(paths(testDataSchema.safeParse(d))).toContain(path);
+  });
+});
+
+describe('defaults follow the as-repaired rating', () => {
+  it('takes 460 V 60 Hz from an approved redesign of a 400 V 50 Hz motor, and says so', () => {
+    const rating = asRepairedRating(
+      { ratedVoltageV: 400, frequencyHz: 50, speedRpm: 1460, currentA: 21, outputKw: 11, connection: 'delta' },
+      { revision: 1, nameplate: { lineVoltageV: 460, connection: 'star', frequencyHz: 60, poles: 4, speedRpm: 1752, currentA: 18.4, outputKw: 11 } },
+    );
+    const { basis, practice, sources } = basisDefaults({ rating, insulationClass: 'F' }, null);
+    expect(basis).toMatchObject({ ratedVoltageV: 460, frequencyHz: 60, poles: 4, ratedCurrentA: 18.4, ratingSource: 'redesign', redesignRevision: 1 });
+    expect(practice).toBe('nema');
+    expect(sources.rating).toBe('from the approved redesign, revision 1');
   });
 });

@@ -4,7 +4,7 @@ import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { draftPayloadSchema } from '@/lib/as-found/draft-schema';
 import { restoreDraftValues } from '@/lib/as-found/draft-values';
 import { prefillFromNameplate } from '@/lib/as-found/prefill';
-import { sheetToForm } from '@/lib/as-found/as-found-form';
+import { savedLengthMemory, sheetToForm } from '@/lib/as-found/as-found-form';
 import { SHEET_MESSAGES } from '@/lib/as-found/as-found-messages';
 import { getAsFoundSheet, getJobForSheet, getLengthUnit, getSheetDraft, listSheetRevisions } from '@/lib/as-found/as-found-queries';
 import { fmt } from '@/lib/presentation/format';
@@ -37,7 +37,7 @@ export default async function SheetPage({ params }: { params: Promise<{ number: 
       ...(draft.data.baseRevision !== undefined ? { baseRevision: draft.data.baseRevision } : {}),
     };
   } else if (saved) {
-    initial = { values: sheetToForm(saved.sheet, unit), unit, slotTable: saved.sheet.winding.slotTable, source: 'saved' };
+    initial = { values: sheetToForm(saved.sheet, unit), unit, slotTable: saved.sheet.winding.slotTable, source: 'saved', lengthMemory: savedLengthMemory(saved.sheet, unit) };
   } else {
     initial = { values: prefillFromNameplate(job.motor), unit, source: 'nameplate' };
   }

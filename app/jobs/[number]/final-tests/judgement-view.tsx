@@ -28,10 +28,10 @@ export function SectionVerdict({ section, id }: { section: SectionJudgement; id?
 
 export function OverallVerdict({ judgement, live }: { judgement: TestJudgement | null; live?: boolean }) {
   if (!judgement) return <p className="verdict incomplete">Fill in the basis (rated voltage, insulation class) to see verdicts.</p>;
-  const tone = judgement.overall === 'PASS' ? 'pass' : judgement.overall === 'FAIL' ? 'fail' : 'incomplete';
+  const tone = judgement.overall === 'PASS' ? 'pass' : judgement.overall === 'FAIL' ? 'fail' : judgement.qualifiers.length ? 'reduced' : 'incomplete';
   return (
     <p className={`verdict overall ${tone}`} data-testid={live ? 'overall-live' : 'overall'}>
-      Overall verdict{live ? ' (as typed, not yet saved)' : ''}: <strong>{overallText(judgement.overall)}</strong>
+      Overall verdict{live ? ' (as typed, not yet saved)' : ''}: <strong>{overallText(judgement.overall, judgement.qualifiers)}</strong>
     </p>
   );
 }

@@ -1,14 +1,17 @@
 import Link from 'next/link';
+import { notFound } from 'next/navigation';
 import { can } from '@/lib/auth/permissions';
 import { listStaff } from '@/lib/jobs/job-queries';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { getAsFoundSheet } from '@/lib/as-found/as-found-queries';
 import { TEST_HAZARD_CAUTIONS } from '@/lib/job-sheet/safety-notices';
-import { getJobForFinalTests, listTestRecords } from '@/lib/final-tests/record-queries';
+import { listTestRecords, getJobForFinalTests } from '@/lib/final-tests/record-queries';
 import { basisDefaults, newRecordDefaults, recordToFormData } from '@/lib/final-tests/defaults';
 import { judgeTestRecord } from '@/lib/final-tests/verdicts';
 import { compareFinalResistance, RESISTANCE_CHECK_PERCENT, type ExpectedResistance } from '@/lib/final-tests/expected-resistance';
 import { expectedResistanceFor } from '@/lib/final-tests/expected-resistance-source';
+import { jobAsRepairedRating } from '@/lib/final-tests/test-rating-source';
+import { ratingSentence } from '@/lib/final-tests/readings';
 import { fmt, toZonedLocal } from '@/lib/presentation/format';
 import type { TestRecordFormInput } from '@/lib/final-tests/test-record-schema';
 import { OverallVerdict, SectionVerdict } from './judgement-view';
@@ -32,7 +35,9 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
   const [records, sheet, staff] = await Promise.all([listTestRecords(job.id), getAsFoundSheet(job.id), listStaff()]);
   const current = records[0] ?? null;
   const expected = await expectedResistanceFor(job.id, sheet);
-  const motor = { ratedVoltageV: job.motor.ratedVoltageV, insulationClass: job.motor.insulationClass, outputKw: job.motor.outputKw, frequencyHz: job.motor.frequencyHz };
+  const rating = await jobAsRepairedRating(job.id);
+  if (!rating) notFound();
+  const motor = { rating, insulationClass: job.motor.insulationClass };
   const { sources } = basisDefaults(motor, sheet?.sheet ?? null);
   const closed = isRecordLocked('finalTests', job.status, job.heldFrom);
   const mayRecord = can(user.role, 'tests.record') && !closed;
@@ -60,6 +65,11 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
       </section>
 
       {!sheet && <p className="notice">No as-found sheet is saved for this job: the basis below comes from the nameplate alone.</p>}
+      <p className="notice" data-testid="rating-basis">
+        {rating.source === 'redesign'
+          ? `New records are judged for the as-repaired rating from the approved redesign, revision ${rating.redesignRevision}: ${rating.ratedVoltageV ?? '—'} V ${rating.frequencyHz ?? '—'} Hz${rating.connection ? `, ${rating.connection}` : ''}. The nameplate as received no longer applies.`
+          : 'New records are judged for the nameplate rating as received: no redesign is approved for this job.'}
+      </p>
 
       <section className="card" aria-labelledby="current-h">
         <h2 id="current-h" style={{ marginTop: 0 }}>
@@ -70,6 +80,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
             <p className="muted small">
               Tested {fmt.dateTime(current.testedAt)} by {current.testedBy?.name ?? '—'} · instruments {current.instrumentSerials.join(', ') || '—'} · version {current.version}
             </p>
+            <p data-testid="current-rating"><strong>Verdicts {ratingSentence(current.data.basis)}.</strong></p>
             <CurrentJudgement data={current.data} />
             <ResistanceAgainstPrediction expected={expected} data={current.data} />
             <RecordReadings data={current.data} />

@@ -18,7 +18,9 @@ import {
   type TestRecordFormInput,
 } from '@/lib/final-tests/test-record-schema';
 import { saveTestRecordAction } from '@/lib/final-tests/record-actions';
-import { liveJudgement } from '@/lib/final-tests/live-judgement';
+import { lenientTestData, liveJudgement } from '@/lib/final-tests/live-judgement';
+import { HIPOT_DURATION_S } from '@/lib/engine/hipot';
+import { ratingSentence } from '@/lib/final-tests/readings';
 import { ohmText, percentText, megohmText } from '@/lib/final-tests/display';
 import type { BasisSources } from '@/lib/final-tests/defaults';
 import type { SectionKey, TestJudgement } from '@/lib/final-tests/verdicts';
@@ -178,7 +180,12 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
           <SelectField path="data.basis.insulationClass" label="Insulation class" options={INSULATION_CLASSES.map((c) => [c, `Class ${c}`] as const)} blank="Pick a class" hint={sources.insulationClass} />
           <SelectField path="data.basis.windingKind" label="Winding" options={[['random', 'Random-wound (round wire)'], ['form', 'Form-wound (formed coils)']]} hint={sources.windingKind} />
           <SelectField path="data.basis.irCategory" label="IEEE 43 IR minimum" options={IR_CATEGORIES.map((c) => [c, CATEGORY_LABELS[c]] as const)} />
+          <NumberField path="data.basis.frequencyHz" label="Rated frequency" unit="Hz" hint={sources.rating} />
+          <NumberField path="data.basis.poles" label="Poles" hint="With the frequency, gives the synchronous speed." />
+          <NumberField path="data.basis.ratedCurrentA" label="Rated current" unit="A" />
+          <NumberField path="data.basis.ratedSpeedRpm" label="Rated speed" unit="rpm" />
         </div>
+        <RatingLine control={control} />
       </fieldset>
 
       <fieldset>
@@ -209,10 +216,11 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
         <div className="grid">
           <SelectField path="data.hipot.kind" label="Applied as" options={HIPOT_KINDS.map((k) => [k, k.toUpperCase()] as const)} />
           <NumberField path="data.hipot.appliedV" label="Applied voltage" unit="V" />
-          <NumberField path="data.hipot.durationS" label="Duration" unit="s" />
-          <NumberField path="data.hipot.leakageMa" label="Leakage current" unit="mA" hint="DC: 0.004 mA = 4 µA." />
-          <SelectField path="data.hipot.result" label="Result" options={RESULT_OPTIONS} blank="Not tested yet" />
+          <NumberField path="data.hipot.durationS" label="Held for" unit="s" hint={`The rule asks ${HIPOT_DURATION_S} s at the full level.`} />
+          <NumberField path="data.hipot.leakageMa" label="Leakage current" unit="mA" hint="DC: 0.004 mA = 4 µA. Recorded, not judged." />
+          <SelectField path="data.hipot.result" label="Did the winding hold?" options={[['pass', 'Held: no breakdown'], ['fail', 'Broke down']]} blank="Not tested yet" />
           <TextField path="data.hipot.instrumentSerial" label="Hipot tester serial" />
+          <TextField path="data.hipot.reducedReason" label="Reason for a reduced level or time" hint="Only when the level or time was lowered on purpose (customer's instruction, repeat test). The sheet then prints a reduced-level test, never a pass." />
         </div>
         <Live j={j} section="hipot" />
       </fieldset>
@@ -272,6 +280,13 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
       </fieldset>
     </>
   );
+}
+
+/** Which rating the verdicts are judged for, in one sentence (the saved record prints the same). */
+function RatingLine({ control }: { control: Control<TestRecordFormInput> }) {
+  const data = useWatch({ control, name: 'data' });
+  const judged = useMemo(() => lenientTestData(data), [data]);
+  return judged ? <p className="readout" data-testid="rating-sentence">Verdicts {ratingSentence(judged.basis)}.</p> : null;
 }
 
 /** Tested-at date and time: datetime-local gives "YYYY-MM-DDTHH:MM", taken as UTC like every time the app shows. */

@@ -42,7 +42,7 @@ export default async function JobSheetPage({ params }: { params: Promise<{ numbe
       </div>
       {d.job.shipped && (
         <p className="notice no-print snapshot-note">
-          This job has shipped. {snapshot ? `The PDF is the sheet stored when it shipped (revision ${snapshot.revision}).` : 'The PDF download stores the shipped sheet the first time it is opened.'} This page shows the current records.
+          This job has shipped. {snapshot ? `The PDF is the sheet stored when it shipped (issue ${snapshot.revision}).` : 'The PDF download stores the shipped sheet the first time it is opened.'} This page shows the current records.
         </p>
       )}
       <article className="jobsheet" aria-labelledby="sheet-title">
@@ -51,7 +51,7 @@ export default async function JobSheetPage({ params }: { params: Promise<{ numbe
             <strong style={{ fontSize: '1.2rem' }}>{d.shop.name}</strong>
             {(d.shop.address || d.shop.phone) && <div className="small">{[d.shop.address, d.shop.phone].filter(Boolean).join(' · ')}</div>}
           </div>
-          <div data-testid="sheet-revision">Job {d.job.number} · Rev {d.revision} · {d.revisionDate}</div>
+          <div data-testid="sheet-revision">Job {d.job.number} · Issue {d.revision} · {d.revisionDate}</div>
         </header>
         <h1 id="sheet-title">Motor repair job sheet · job {d.job.number}</h1>
 
@@ -59,6 +59,13 @@ export default async function JobSheetPage({ params }: { params: Promise<{ numbe
           <section aria-labelledby="js-job"><h2 id="js-job">Job</h2><Rows rows={d.job.rows} /></section>
           <section aria-labelledby="js-cust"><h2 id="js-cust">Customer</h2><Rows rows={d.customer} /></section>
           <section aria-labelledby="js-plate"><h2 id="js-plate">Nameplate as received</h2><Rows rows={d.nameplate} /></section>
+          {d.asRepaired && (
+            <section aria-labelledby="js-plate-new" data-testid="nameplate-as-repaired">
+              <h2 id="js-plate-new">Nameplate as repaired</h2>
+              <p className="small muted">Update the plate or fit a supplementary plate.</p>
+              <Rows rows={d.asRepaired} />
+            </section>
+          )}
           <section aria-labelledby="js-found">
             <h2 id="js-found">As-found winding</h2>
             {d.asFound ? (
@@ -72,6 +79,7 @@ export default async function JobSheetPage({ params }: { params: Promise<{ numbe
 
         <section aria-labelledby="js-repaired">
           <h2 id="js-repaired">Winding as repaired</h2>
+          <p data-testid="statement-of-work"><strong>{d.statementOfWork}</strong></p>
           {d.redesign ? (
             <div className="redesigned">
               <p><strong>⚠ REDESIGNED WINDING: differs from the original.</strong> Approved redesign revision {d.redesign.revision}, by {d.redesign.approvedBy} on {d.redesign.approvedAt}.</p>
@@ -80,19 +88,25 @@ export default async function JobSheetPage({ params }: { params: Promise<{ numbe
                 <thead><tr><th>Item</th><th>Original</th><th>Redesigned</th></tr></thead>
                 <tbody>{d.redesign.changes.map((c) => <tr key={c.label}><td>{c.label}</td><td>{c.original}</td><td>{c.redesigned}</td></tr>)}</tbody>
               </table>
-              <h3 className="small">Proposed nameplate data (update the plate or fit a supplementary plate)</h3>
-              <Rows rows={d.redesign.proposedNameplate} />
             </div>
-          ) : <p>Rewound to the original winding data: no redesign was approved for this job.</p>}
+          ) : null}
         </section>
+
+        {d.decisions.length > 0 && (
+          <section aria-labelledby="js-decisions" data-testid="decisions">
+            <h2 id="js-decisions">Engineer’s decisions</h2>
+            <Rows rows={d.decisions} />
+          </section>
+        )}
 
         <section aria-labelledby="js-tests">
           <h2 id="js-tests">Final tests</h2>
           {t ? (
             <>
-              <p className="small muted">Judged for: {t.basis}.</p>
+              <p data-testid="judged-for"><strong>Verdicts {t.judgedFor}.</strong></p>
+              <p className="small muted">Basis: {t.basis}.</p>
               <p>Record #{t.sequence} · tested {t.testedAt} by {t.testedBy} · instruments {t.instruments}</p>
-              <OverallVerdict judgement={{ overall: t.verdict, sections: t.sections, derived: {} }} />
+              <OverallVerdict judgement={{ overall: t.verdict, sections: t.sections, qualifiers: t.qualifiers, derived: {} }} />
               {t.sections.map((s) => {
                 const readings = t.readings.find((r) => r.key === s.key);
                 return (

@@ -4,8 +4,11 @@ import { can } from '@/lib/auth/permissions';
 import { getJobByNumber } from '@/lib/jobs/job-queries';
 import { redesignReport } from '@/lib/engine/redesign/report';
 import type { RedesignRequest } from '@/lib/engine/redesign/types';
-import { loadRedesignContext, runSearch, type RedesignContext } from '@/lib/redesign/redesign-context';
-import { listRedesigns, type RedesignRevision } from '@/lib/redesign/redesign-queries';
+import { loadRedesignContext, type RedesignContext } from '@/lib/redesign/redesign-context';
+import { analyseWinding } from '@/lib/engine/analyse-winding';
+import { harmonicSummary } from '@/lib/engine/redesign/families';
+import { harmonicOf } from '@/lib/engine/redesign/ranking';
+import { getStoredSearch, listRedesigns, type RedesignRevision } from '@/lib/redesign/redesign-queries';
 import { REDESIGN_MESSAGES } from '@/lib/redesign/redesign-writes';
 import { limitsToForm, type RedesignRequestFormInput } from '@/lib/redesign/redesign-schema';
 import { fmt } from '@/lib/presentation/format';
@@ -32,7 +35,7 @@ function formDefaults(jobId: string, request: RedesignRequest, draftVersion?: nu
     ...(draftVersion ? { draftVersion } : {}),
     target: {
       lineVoltageV: t.lineVoltageV, frequencyHz: t.frequencyHz, poles: t.poles, connection: t.connection,
-      spans: t.spans.join(', '), layers: t.layers, parallelPaths: t.parallelPaths.join(', '),
+      spans: t.spans.join(', '), layers: t.layers, parallelPaths: t.parallelPaths.join(', '), allowOverPitch: t.allowOverPitch,
     },
     limits: limitsToForm(request.limits),
   };
@@ -71,7 +74,7 @@ export default async function RedesignPage({ params, searchParams }: { params: P
   if (ctx.ok) {
     const s = ctx.value.sheet.sheet;
     const fromSheet: RedesignRequest = {
-      target: { lineVoltageV: s.supply.lineVoltageV, frequencyHz: s.supply.frequencyHz, poles: s.supply.poles, connection: s.winding.connection, spans: [], layers: 'keep', parallelPaths: [] },
+      target: { lineVoltageV: s.supply.lineVoltageV, frequencyHz: s.supply.frequencyHz, poles: s.supply.poles, connection: s.winding.connection, spans: [], layers: 'keep', parallelPaths: [], allowOverPitch: false },
       limits: ctx.value.shopLimits,
     };
     requestDefaults = latest?.status === 'DRAFT' ? formDefaults(job.id, latest.request, latest.version) : formDefaults(job.id, latest?.request ?? fromSheet);
@@ -157,18 +160,26 @@ function ApprovedRevision({ r, number }: { r: RedesignRevision; number: number }
   );
 }
 
-function DraftRevision({ r, ctx, canEdit, mayApprove }: { r: RedesignRevision; ctx: RedesignContext; canEdit: boolean; mayApprove: boolean }) {
-  const searched = runSearch(ctx, r.request);
-  if (!searched.ok) return <p className="notice bad">The stored request cannot be searched: {searched.error.message} {searched.error.hint}</p>;
-  const chosen = r.chosenKey ? searched.value.candidates.find((c) => c.key === r.chosenKey) : undefined;
-  const report = chosen ? redesignReport(ctx.original, r.request, searched.value, chosen) : null;
+async function DraftRevision({ r, ctx, canEdit, mayApprove }: { r: RedesignRevision; ctx: RedesignContext; canEdit: boolean; mayApprove: boolean }) {
+  // The page reads the result stored when the request was saved: it never searches on render.
+  const stored = await getStoredSearch(r.id);
+  if (!stored) return <p className="notice warn">{REDESIGN_MESSAGES.noStoredSearch}</p>;
+  const search = stored.search;
+  const chosen = r.chosenKey ? search.candidates.find((c) => c.key === r.chosenKey) : undefined;
+  const report = chosen ? redesignReport(ctx.original, r.request, search, chosen) : null;
+  const old = analyseWinding({ winding: ctx.original.winding, supply: ctx.original.supply, core: ctx.original.core });
+  const flux = old.ok && old.value.flux ? { gapPeakT: old.value.flux.gapPeak.tesla, toothT: old.value.flux.toothMax.tesla, yokeT: old.value.flux.yoke.tesla } : null;
+  const originalHarmonic = old.ok ? harmonicOf(harmonicSummary(old.value)) : 0;
   const t = r.request.target;
   return (
     <>
       <section className="card" aria-labelledby="cand-h" id="candidates">
         <h2 id="cand-h">Revision {r.revision} (draft): candidates for {t.lineVoltageV} V {t.frequencyHz} Hz, {t.poles} poles, {t.connection === 'either' ? 'star or delta' : t.connection}</h2>
         {r.sheetRevision !== ctx.sheet.revision && <p className="notice warn">{REDESIGN_MESSAGES.sheetChanged}</p>}
-        <CandidateTable search={searched.value} choose={canEdit ? { redesignId: r.id, version: r.version } : null} chosenKey={r.chosenKey} fillLimit={r.request.limits.slotFillMax} />
+        <CandidateTable
+          search={search} candidatesFound={stored.candidatesFound} choose={canEdit ? { redesignId: r.id, version: r.version } : null} chosenKey={r.chosenKey}
+          fillLimit={search.originalBasis.slotFillLimit} limits={r.request.limits} originalFlux={flux} originalHarmonic={originalHarmonic} poleRatio={t.poles / ctx.original.winding.poles}
+        />
       </section>
       {r.chosenKey && !chosen && <p className="notice bad">{REDESIGN_MESSAGES.candidateGone}</p>}
       {chosen && report?.ok && (

@@ -24,6 +24,8 @@ const LIMIT_FIELDS: [keyof RedesignRequestFormInput['limits'], string, string, s
   ['maxStrandsInHand', 'Wires in hand at most', 'strands'],
   ['maxWireSizes', 'Sizes per conductor at most', '1–3'],
   ['mixedSizeRatioMax', 'Mixed sizes: diameter ratio at most', '×'],
+  ['minWireBareMm', 'Thinnest wire without penalty', 'mm bare', 'Thinner wire ranks lower (slow to wind, easy to nick).'],
+  ['harmonicKwMax', 'k_w5 and k_w7 at most', '', 'A full-pitch winding with q = 2 has 0.259.'],
 ];
 
 type Err = { message?: string } | undefined;
@@ -96,6 +98,11 @@ export function RequestForm({ defaults, submitLabel, intro }: { defaults: Redesi
           </Field>
           <InputField id="target-parallelPaths" label="Parallel circuits to try" error={pathsError} registration={register('target.parallelPaths')} hint="Empty: every count the layout allows (up to 8)." />
         </div>
+        <p className="check">
+          <input id="target-allowOverPitch" type="checkbox" {...register('target.allowOverPitch')} aria-describedby="target-allowOverPitch-hint" />{' '}
+          <label htmlFor="target-allowOverPitch">Also evaluate over-pitched spans (longer than the pole pitch)</label>
+          <br /><span id="target-allowOverPitch-hint" className="small muted">Off: a span longer than the pole pitch is refused. On a pole change the usual spans of the new pole pitch are always tried.</span>
+        </p>
       </fieldset>
       <details>
         <summary>Limits for this job (shop defaults; change them here for this request only)</summary>

@@ -6,18 +6,18 @@
 import type { FluxDensity } from '@/lib/engine/flux';
 import type { LiveAnalysis } from '@/lib/as-found/live-analysis';
 import { fmt } from '@/lib/presentation/format';
+import { fluxBandText } from '@/lib/as-found/flux-band';
 
-const VERDICT: Record<FluxDensity['verdict'], string> = { low: 'below range', ok: 'in range', 'above-conservative': 'above conservative', high: 'HIGH' };
 const SEVERITY = { problem: 'Problem', check: 'Check', note: 'Note' } as const;
 
 function FluxRow({ name, d }: { name: string; d: FluxDensity }) {
-  const range = `${d.limit.typical.low}–${d.limit.typical.high} T${d.limit.conservative ? ` (conservative ≤ ${d.limit.conservative.high})` : ''}`;
+  const band = fluxBandText(d.tesla, d.limit);
   return (
     <tr className={d.verdict === 'high' ? 'is-bad' : d.verdict === 'above-conservative' ? 'is-warn' : undefined}>
       <th scope="row">{name}</th>
       <td className="num">{d.tesla.toFixed(3)} T</td>
       <td className="num">{d.kilolinesPerIn2.toFixed(1)} kl/in²</td>
-      <td>{VERDICT[d.verdict]} <span className="muted">· {range}</span></td>
+      <td>{band.verdict} <span className="muted">· {band.band}</span></td>
     </tr>
   );
 }
@@ -75,7 +75,7 @@ export function AnalysisPanel({ live }: { live: LiveAnalysis }) {
       {a?.winding.flux && (
         <section aria-labelledby="an-flux">
           <h3 id="an-flux">Flux densities</h3>
-          <p className="small muted">Φ = {(a.winding.flux.fluxPerPoleWb * 1000).toFixed(3)} mWb per pole at E = V<sub>ph</sub> = {a.winding.flux.phaseVoltageV.toFixed(1)} V. Ranges: typical 50/60 Hz induction motors (from memory, configurable).</p>
+          <p className="small muted">Φ = {(a.winding.flux.fluxPerPoleWb * 1000).toFixed(3)} mWb per pole at E = V<sub>ph</sub> = {a.winding.flux.phaseVoltageV.toFixed(1)} V. Ranges: typical 50/60 Hz induction motors (shop practice); each row shows the band its verdict used.</p>
           <table className="small compact">
             <tbody>
               <FluxRow name="Air gap, average" d={a.winding.flux.gapAverage} />

@@ -24,16 +24,33 @@ export function spectrumBars(mmf: MmfSpectrum, maxOrder = 25) {
     }));
 }
 
+/** The waveform at every `stepDeg` degrees (the point nearest each), for the table beside the chart. */
+export function waveformSamples(waveform: MmfPoint[], stepDeg = 15): { angle: number; mmf: number }[] {
+  if (waveform.length === 0) return [];
+  const out: { angle: number; mmf: number }[] = [];
+  for (let a = 0; a <= 360; a += stepDeg) {
+    let best = waveform[0]!;
+    for (const p of waveform) if (Math.abs(p.angleDeg - a) < Math.abs(best.angleDeg - a)) best = p;
+    out.push({ angle: a, mmf: Math.round(best.value * 100) / 100 });
+  }
+  return out;
+}
+
 export function MmfCharts({ waveform, mmf }: { waveform: MmfPoint[]; mmf: MmfSpectrum }) {
   const bars = spectrumBars(mmf);
   const wave = waveform.map((p) => ({ angle: Math.round(p.angleDeg * 100) / 100, mmf: Math.round(p.value * 1000) / 1000 }));
+  const samples = waveformSamples(waveform);
+  const peak = wave.reduce((m, p) => Math.max(m, Math.abs(p.mmf)), 0);
+  const strongest = bars.filter((b) => b.order !== '1' && b.direction !== 'cancelled').sort((x, y) => y.percent - x.percent)[0];
+  const waveName = `Line chart of the MMF round the air gap from 0 to 360 degrees; peak ${peak.toFixed(2)} ampere-turns per ampere. The table of values follows.`;
+  const barName = `Bar chart of the space harmonics, percent of the working wave${strongest ? `; the largest other order is ${strongest.order} at ${strongest.percent.toFixed(1)} %, ${WORD[strongest.direction]}` : ''}. The table below lists every order.`;
   return (
     <div className="mmf-charts">
-      <figure>
-        <figcaption><strong>MMF round the air gap</strong> at the instant phase A current is at its peak (ampere-turns per ampere of coil current).</figcaption>
-        <div className="chart-box" aria-hidden="true">
+      <figure aria-labelledby="mmf-wave-cap">
+        <figcaption id="mmf-wave-cap"><strong>MMF round the air gap</strong> at the instant phase A current is at its peak (ampere-turns per ampere of coil current).</figcaption>
+        <div className="chart-box" role="img" aria-label={waveName}>
           <ResponsiveContainer width="100%" height={220}>
-            <LineChart data={wave} margin={{ top: 8, right: 12, bottom: 22, left: 4 }}>
+            <LineChart data={wave} margin={{ top: 8, right: 12, bottom: 22, left: 4 }} accessibilityLayer={false}>
               <CartesianGrid strokeDasharray="3 3" stroke="#d5dae1" />
               <XAxis dataKey="angle" type="number" domain={[0, 360]} ticks={[0, 45, 90, 135, 180, 225, 270, 315, 360]} label={{ value: 'Mechanical angle from slot 1 (°)', position: 'insideBottom', offset: -12 }} />
               <YAxis width={48} />
@@ -42,15 +59,23 @@ export function MmfCharts({ waveform, mmf }: { waveform: MmfPoint[]; mmf: MmfSpe
             </LineChart>
           </ResponsiveContainer>
         </div>
+        <details className="no-print">
+          <summary>MMF values as a table</summary>
+          <table className="small compact spectrum-table">
+            <caption className="sr-only">MMF round the air gap every 15 degrees</caption>
+            <thead><tr><th scope="col" className="num">Angle from slot 1 (°)</th><th scope="col" className="num">MMF (A-turns/A)</th></tr></thead>
+            <tbody>{samples.map((p) => <tr key={p.angle}><td className="num">{p.angle}</td><td className="num">{p.mmf.toFixed(2)}</td></tr>)}</tbody>
+          </table>
+        </details>
       </figure>
-      <figure>
-        <figcaption>
+      <figure aria-labelledby="mmf-bars-cap">
+        <figcaption id="mmf-bars-cap">
           <strong>Space harmonics</strong> of the three-phase MMF, % of the working wave: → forward, ← backward, × cancelled
           (each phase has it, the three together cancel it).
         </figcaption>
-        <div className="chart-box" aria-hidden="true">
+        <div className="chart-box" role="img" aria-label={barName}>
           <ResponsiveContainer width="100%" height={230}>
-            <BarChart data={bars} margin={{ top: 22, right: 12, bottom: 22, left: 4 }}>
+            <BarChart data={bars} margin={{ top: 22, right: 12, bottom: 22, left: 4 }} accessibilityLayer={false}>
               <defs>
                 <pattern id="mmf-back" width="5" height="5" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
                   <rect width="5" height="5" fill="#fff" />

@@ -5,7 +5,7 @@
  * the live analysis beside it, the slot diagram and MMF pictures below, drafts kept on the server as the
  * winder types, unit toggle, JSON import, and saving under optimistic locking.
  */
-import { useCallback, useEffect, useMemo, useRef, useState, useTransition } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, useTransition, type KeyboardEvent as ReactKeyboardEvent } from 'react';
 import { useRouter } from 'next/navigation';
 import { FormProvider, useForm } from 'react-hook-form';
 import { FormStatus } from '@/app/_components/form-status';
@@ -14,14 +14,16 @@ import { applyFieldErrors } from '@/lib/errors/form-errors';
 import type { CoilSide } from '@/lib/engine/winding-layout';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { chooseLengthUnit, discardSheetDraft, saveAsFoundSheet } from '@/lib/as-found/as-found-actions';
-import { convertTypedLength, type LengthUnit } from '@/lib/as-found/length-entry';
+import type { LengthUnit, TypedLength } from '@/lib/as-found/length-entry';
 import { liveAnalysis, type LiveAnalysis } from '@/lib/as-found/live-analysis';
-import { convertFormLengths, type SheetFormValues } from '@/lib/as-found/as-found-form';
+import { switchFormLengths, type SheetFormValues } from '@/lib/as-found/as-found-form';
 import { AnalysisPanel } from './analysis-panel';
+import { FindingsStrip } from './findings-strip';
 import { ImportSheet } from './import-sheet';
 import { Pictures } from './pictures';
 import { CoreSection, InsulationSection, NotesSection, ResistanceSection, SupplySection, WiresSection, WindingSection } from './sheet-sections';
 import { serverErrorsToForm, sheetResolver } from './sheet-resolver';
+import { ReadOnlyFields } from './sheet-fields';
 import { draftStatusText, useDraftAutosave } from './use-draft-autosave';
 import { jobRoutes } from '@/lib/routes';
 
@@ -41,6 +43,8 @@ export interface SheetEditorProps {
     draftSavedAt?: string;
     /** For a restored draft: the revision it was started from (see the draft schema). */
     baseRevision?: number | null;
+    /** The stored millimetres behind lengths shown in inches (see savedLengthMemory). */
+    lengthMemory?: [string, TypedLength][];
   };
 }
 
@@ -57,6 +61,8 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   const [baseRevision, setBaseRevision] = useState<number | null>(initial.baseRevision !== undefined ? initial.baseRevision : savedRevision);
   const baseRef = useRef(baseRevision);
   baseRef.current = baseRevision;
+  // What was typed (or stored) behind each length field shown in the other unit: a toggle never changes it.
+  const memoryRef = useRef<Map<string, TypedLength>>(new Map(initial.lengthMemory ?? []));
   const [conflict, setConflict] = useState(false);
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(
     initial.source === 'draft' ? { tone: 'warn', text: `Restored your unsaved draft from ${fmt.dateTime(new Date(initial.draftSavedAt ?? Date.now()))}. Save the sheet to keep it, or discard the draft.` } : null,
@@ -64,16 +70,16 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   const [hasDraft, setHasDraft] = useState(initial.source === 'draft');
   const [pending, startTransition] = useTransition();
 
-  const resolver = useMemo(() => sheetResolver(() => unitRef.current, () => slotRef.current), []);
+  const resolver = useMemo(() => sheetResolver(() => unitRef.current, () => slotRef.current, () => memoryRef.current), []);
   const form = useForm<SheetFormValues, unknown, WindingSheet>({ resolver, defaultValues: initial.values, mode: 'onSubmit' });
   const { handleSubmit, setError, watch, getValues, setValue, reset } = form;
 
   const autosave = useDraftAutosave(jobId, editable, () => ({ unit: unitRef.current, values: getValues(), baseRevision: baseRef.current, ...(slotRef.current ? { slotTable: slotRef.current } : {}) }));
-  const [live, setLive] = useState<LiveAnalysis>(() => liveAnalysis(initial.values, initial.unit, initial.slotTable));
+  const [live, setLive] = useState<LiveAnalysis>(() => liveAnalysis(initial.values, initial.unit, initial.slotTable, memoryRef.current));
   const analysisTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const reanalyse = useCallback(() => {
     if (analysisTimer.current) clearTimeout(analysisTimer.current);
-    analysisTimer.current = setTimeout(() => setLive(liveAnalysis(getValues(), unitRef.current, slotRef.current)), ANALYSIS_DELAY_MS);
+    analysisTimer.current = setTimeout(() => setLive(liveAnalysis(getValues(), unitRef.current, slotRef.current, memoryRef.current)), ANALYSIS_DELAY_MS);
   }, [getValues]);
 
   useEffect(() => {
@@ -87,7 +93,9 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
 
   const switchUnit = (to: LengthUnit) => {
     if (to === unit) return;
-    const converted = convertFormLengths(getValues(), unit, to, convertTypedLength);
+    const switched = switchFormLengths(getValues(), unit, to, memoryRef.current);
+    const converted = switched.values;
+    memoryRef.current = switched.memory;
     unitRef.current = to;
     setUnit(to);
     for (const [k, v] of Object.entries(converted.core)) setValue(`core.${k as keyof SheetFormValues['core']}`, v);
@@ -141,6 +149,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
 
   const readOnly = !editable;
   const statusText = draftStatusText(autosave.state);
+  const drawer = useAnalysisDrawer();
 
   return (
     <FormProvider {...form}>
@@ -149,7 +158,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
           <span className="label">Lengths in</span>
           {(['mm', 'in'] as const).map((u) => (
             <label key={u} className="inline">
-              <input type="radio" name="length-unit" value={u} checked={unit === u} onChange={() => switchUnit(u)} disabled={readOnly} /> {u === 'mm' ? 'millimetres' : 'inches'}
+              <input type="radio" name="length-unit" value={u} checked={unit === u} onChange={() => switchUnit(u)} /> {u === 'mm' ? 'millimetres' : 'inches'}
             </label>
           ))}
         </div>
@@ -180,15 +189,17 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
       )}
       <div className="sheet-layout">
         <form onSubmit={onSave} noValidate aria-label="As-found data sheet" className="sheet-form">
-          <fieldset disabled={readOnly} className="plain">
-            <CoreSection unit={unit} />
-            <WindingSection unit={unit} />
-            <WiresSection />
-            <SupplySection />
-            <ResistanceSection />
-            <InsulationSection />
-            <NotesSection />
-          </fieldset>
+          <ReadOnlyFields value={readOnly}>
+            <div className="plain">
+              <CoreSection unit={unit} />
+              <WindingSection unit={unit} />
+              <WiresSection />
+              <SupplySection />
+              <ResistanceSection />
+              <InsulationSection />
+              <NotesSection />
+            </div>
+          </ReadOnlyFields>
           {slotTable && <p className="small muted">This sheet carries a slot table drawn by the winder ({slotTable.length} coil sides); the diagram and analysis use it.</p>}
           {editable && (
             <div className="row save-row no-print">
@@ -197,15 +208,46 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
               <span className="small muted">{baseRevision === null ? 'Not saved yet.' : `Editing from revision ${baseRevision}.`}</span>
             </div>
           )}
+          <FindingsStrip live={live} open={drawer.open} onToggle={drawer.toggle} controls="live-analysis" />
         </form>
-        <aside className="sheet-analysis" aria-labelledby="live-h">
-          <h2 id="live-h">Live analysis</h2>
+        <aside id="live-analysis" className={`sheet-analysis${drawer.open ? ' open' : ''}`} aria-labelledby="live-h" ref={drawer.ref} tabIndex={0} onKeyDown={drawer.onKeyDown}>
+          <div className="analysis-head">
+            <h2 id="live-h">Live analysis</h2>
+            <button type="button" className="btn quiet analysis-close" onClick={drawer.close}>Close</button>
+          </div>
           <AnalysisPanel live={live} />
         </aside>
       </div>
       <Pictures live={live} />
     </FormProvider>
   );
+}
+
+/**
+ * The analysis drawer of narrow screens: opening it moves focus into it, Escape or Close shuts it and
+ * returns focus to the strip's button.
+ */
+function useAnalysisDrawer() {
+  const [open, setOpen] = useState(false);
+  const ref = useRef<HTMLElement>(null);
+  const opener = useRef<HTMLElement | null>(null);
+  const close = useCallback(() => {
+    setOpen(false);
+    opener.current?.focus();
+  }, []);
+  const toggle = useCallback(() => {
+    if (open) return close();
+    opener.current = document.activeElement instanceof HTMLElement ? document.activeElement : null;
+    setOpen(true);
+    requestAnimationFrame(() => ref.current?.focus());
+  }, [open, close]);
+  const onKeyDown = (e: ReactKeyboardEvent) => {
+    if (open && e.key === 'Escape') {
+      e.preventDefault();
+      close();
+    }
+  };
+  return { open, toggle, close, ref, onKeyDown };
 }
 
 function LibraryLink({ jobNumber, values, unit }: { jobNumber: number; values: () => SheetFormValues; unit: LengthUnit }) {

@@ -8,11 +8,11 @@ import type { FieldError, Resolver } from 'react-hook-form';
 import type { CoilSide } from '@/lib/engine/winding-layout';
 import { windingSheetSchema, type WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import type { LengthUnit } from '@/lib/as-found/length-entry';
-import { formToSheetInput, sheetPathToFormPath, type SheetFormValues } from '@/lib/as-found/as-found-form';
+import { formToSheetInput, sheetPathToFormPath, type LengthMemory, type SheetFormValues } from '@/lib/as-found/as-found-form';
 
-export function sheetResolver(unit: () => LengthUnit, slotTable: () => CoilSide[] | undefined): Resolver<SheetFormValues, unknown, WindingSheet> {
+export function sheetResolver(unit: () => LengthUnit, slotTable: () => CoilSide[] | undefined, memory: () => LengthMemory): Resolver<SheetFormValues, unknown, WindingSheet> {
   return async (values, _context, options) => {
-    const r = windingSheetSchema.safeParse(formToSheetInput(values, unit(), slotTable()));
+    const r = windingSheetSchema.safeParse(formToSheetInput(values, unit(), slotTable(), memory()));
     if (r.success) return { values: r.data, errors: {} };
     const flat: Record<string, FieldError> = {};
     for (const issue of r.error.issues) {

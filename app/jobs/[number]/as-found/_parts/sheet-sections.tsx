@@ -7,7 +7,8 @@
 import { get, useFieldArray, useFormContext, useWatch, type FieldErrors } from 'react-hook-form';
 import type { LengthUnit } from '@/lib/as-found/length-entry';
 import { blankWire, type SheetFormValues } from '@/lib/as-found/as-found-form';
-import { fieldId, NumField, Section, SelectField, TextField, useFieldError } from './sheet-fields';
+import { fieldId, NumField, Section, SelectField, TextField, useFieldError, useReadOnly } from './sheet-fields';
+import { RowKeys, rowKeyHandler, ROW_KEYS } from './row-keys';
 
 export function CoreSection({ unit }: { unit: LengthUnit }) {
   return (
@@ -34,10 +35,26 @@ function CoilRows() {
   const { control, register, formState: { errors } } = useFormContext<SheetFormValues>();
   const { fields, append, remove } = useFieldArray({ control, name: 'winding.coils' });
   const style = useWatch({ control, name: 'winding.style' });
+  const coils = useWatch({ control, name: 'winding.coils' });
   const rootError = useFieldError('winding.coils.root');
+  const readOnly = useReadOnly();
   const concentric = style === 'concentric';
+  const canAdd = concentric && fields.length < 12;
+  const add = () => append({ span: '', turns: '' }, { focusName: `winding.coils.${fields.length}.span` });
+  const onKeyDown = rowKeyHandler({
+    add: canAdd ? add : null,
+    remove: concentric && fields.length > 1 ? (i) => { remove(i); focusLater(fieldId(`winding.coils.${Math.max(0, i - 1)}.span`)); } : null,
+  });
+  if (readOnly) {
+    return (
+      <div className="sf wide">
+        <dt>{concentric ? 'Coils of one group, outside coil first' : 'Coil'}</dt>
+        <dd className="ro-value">{coils.map((c, i) => `${concentric ? `coil ${i + 1}: ` : ''}span ${c.span || '—'}, ${c.turns || '—'} turns`).join('; ')}</dd>
+      </div>
+    );
+  }
   return (
-    <div className="wide coil-rows" role="group" aria-labelledby="coils-h">
+    <div className="wide coil-rows" role="group" aria-labelledby="coils-h" aria-describedby={concentric ? 'coil-keys' : undefined} onKeyDown={onKeyDown}>
       <p id="coils-h" className="label">{concentric ? 'Coils of one group, outside coil first' : 'Coil'}</p>
       <table className="compact">
         <thead><tr><th scope="col">{concentric ? 'Coil' : ''}</th><th scope="col">Span (slots; “1–8” is 7)</th><th scope="col">Turns per coil</th><th /></tr></thead>
@@ -46,7 +63,7 @@ function CoilRows() {
             const spanId = fieldId(`winding.coils.${i}.span`);
             const turnsId = fieldId(`winding.coils.${i}.turns`);
             return (
-              <tr key={f.id}>
+              <tr key={f.id} data-row={i}>
                 <td>{concentric ? i + 1 : ''}</td>
                 <td>
                   <label htmlFor={spanId} className="sr-only">Span of coil {i + 1}</label>
@@ -64,7 +81,8 @@ function CoilRows() {
           })}
         </tbody>
       </table>
-      {concentric && fields.length < 12 && <button type="button" className="btn quiet small-btn" onClick={() => append({ span: '', turns: '' })}>Add a coil to the group</button>}
+      {canAdd && <button type="button" className="btn quiet small-btn" onClick={add} aria-keyshortcuts={ROW_KEYS.add.aria}>Add a coil to the group</button>}
+      {concentric && <RowKeys id="coil-keys" what="a coil to the group" />}
       {rootError && <p className="field-error" id="f-winding-coils-error">{rootError}</p>}
     </div>
   );
@@ -98,19 +116,58 @@ export function WindingSection({ unit }: { unit: LengthUnit }) {
   );
 }
 
+const STANDARD_LABELS: Record<string, string> = { metric: 'Metric (mm)', awg: 'AWG' };
+const GRADE_LABELS: Record<string, string> = { '1': '1 (single build)', '2': '2 (heavy)', '3': '3' };
+
+/** Wires in hand as plain rows, for a reader who may not edit the sheet. */
+function WireRowsReadOnly() {
+  const { control } = useFormContext<SheetFormValues>();
+  const wires = useWatch({ control, name: 'wires' });
+  return (
+    <table className="compact wires">
+      <caption className="sr-only">Wires in hand</caption>
+      <thead><tr><th scope="col">#</th><th scope="col">Standard</th><th scope="col">Size (AWG, or bare mm)</th><th scope="col">Wires in hand</th><th scope="col">Enamel grade</th></tr></thead>
+      <tbody>
+        {wires.map((w, i) => (
+          <tr key={i}><td>{i + 1}</td><td>{STANDARD_LABELS[w.standard] ?? w.standard}</td><td>{w.size || '—'}</td><td>{w.count || '—'}</td><td>{GRADE_LABELS[w.enamelGrade] ?? w.enamelGrade}</td></tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+/** Moves focus once React has drawn the rows again. */
+function focusLater(id: string): void {
+  requestAnimationFrame(() => document.getElementById(id)?.focus());
+}
+
 export function WiresSection() {
   const { control, register, formState: { errors } } = useFormContext<SheetFormValues>();
   const { fields, append, remove } = useFieldArray({ control, name: 'wires' });
   const rootError = errorAt(errors, 'wires.root') ?? errorAt(errors, 'wires');
+  const readOnly = useReadOnly();
+  const add = () => append(blankWire(), { focusName: `wires.${fields.length}.size` });
+  const onKeyDown = rowKeyHandler({
+    add: fields.length < 4 ? add : null,
+    remove: fields.length > 1 ? (i) => { remove(i); focusLater(fieldId(`wires.${Math.max(0, i - 1)}.size`)); } : null,
+  });
+  if (readOnly) {
+    return (
+      <fieldset className="sheet-section">
+        <legend>Wires in hand</legend>
+        <WireRowsReadOnly />
+      </fieldset>
+    );
+  }
   return (
-    <fieldset className="sheet-section">
+    <fieldset className="sheet-section" onKeyDown={onKeyDown} aria-describedby="wire-keys">
       <legend>Wires in hand</legend>
       <p className="hint">One row per wire size; “count” is how many wires of that size are wound together in hand.</p>
       <table className="compact wires">
         <thead><tr><th scope="col">#</th><th scope="col">Standard</th><th scope="col">Size (AWG, or bare mm)</th><th scope="col">Wires in hand</th><th scope="col">Enamel grade</th><th /></tr></thead>
         <tbody>
           {fields.map((f, i) => (
-            <tr key={f.id}>
+            <tr key={f.id} data-row={i}>
               <td>{i + 1}</td>
               <td>
                 <label htmlFor={fieldId(`wires.${i}.standard`)} className="sr-only">Wire {i + 1} standard</label>
@@ -135,7 +192,8 @@ export function WiresSection() {
           ))}
         </tbody>
       </table>
-      {fields.length < 4 && <button type="button" className="btn quiet small-btn" onClick={() => append(blankWire())}>Add a wire size</button>}
+      {fields.length < 4 && <button type="button" className="btn quiet small-btn" onClick={add} aria-keyshortcuts={ROW_KEYS.add.aria}>Add a wire size</button>}
+      <RowKeys id="wire-keys" what="a wire size" />
       {rootError && <p className="field-error">{rootError}</p>}
     </fieldset>
   );

@@ -11,6 +11,13 @@ const R_BORE = 118;
 const RING = 56;
 const PHASE_TINT = { A: '#f3c77a', B: '#a9d6f2', C: '#8fd3bd' } as const;
 const MINUS = '−';
+/**
+ * Smallest text on the drawing, in drawing units: the diagram shows at up to 520 px for 530 units, so this
+ * is about 11 px on screen. Slot numbers, phase belts, captions and the legend use
+ * it; the labels inside the slots never drop below CELL_TEXT_MIN (they are repeated in the slot table).
+ */
+const TEXT_MIN = 11;
+const CELL_TEXT_MIN = 7.5;
 
 export const sideLabel = (s: Pick<CoilSide, 'phase' | 'polarity'>): string => `${s.phase}${s.polarity > 0 ? '+' : MINUS}`;
 
@@ -87,7 +94,7 @@ export function SlotDiagram({ table, caption, id = 'slot-diagram' }: SlotDiagram
   const labelEvery = S <= 48 ? 1 : S <= 96 ? 3 : 6;
   const layerR = (layer: number): [number, number] =>
     table.layers === 2 ? (layer === 1 ? [R_BORE, R_BORE + RING / 2] : [R_BORE + RING / 2, R_BORE + RING]) : [R_BORE, R_BORE + RING];
-  const fontCell = Math.max(5, Math.min(10, ((2 * Math.PI * R_BORE) / S) * 0.42));
+  const fontCell = Math.max(CELL_TEXT_MIN, Math.min(11, ((2 * Math.PI * R_BORE) / S) * 0.5));
   const beltText = belts.map((b) => `${b.label} slots ${((b.first - 1 + S) % S) + 1}–${b.last}`).join('; ');
   return (
     <svg viewBox="-265 -265 530 580" role="img" aria-labelledby={`${id}-title ${id}-desc`} className="slot-diagram" id={id}>
@@ -130,7 +137,7 @@ export function SlotDiagram({ table, caption, id = 'slot-diagram' }: SlotDiagram
       })}
       {Array.from({ length: S }, (_, i) => i + 1).filter((n) => n === 1 || (n - 1) % labelEvery === 0).map((n) => {
         const [x, y] = polar(R_BORE + RING + 13, (n - 1) * pitch);
-        return <text key={n} x={f(x)} y={f(y)} fontSize="8" textAnchor="middle" dominantBaseline="central" fill="#5a6473">{n}</text>;
+        return <text key={n} x={f(x)} y={f(y)} fontSize={TEXT_MIN} textAnchor="middle" dominantBaseline="central" fill="#3d4654">{n}</text>;
       })}
       {belts.map((b) => {
         const a1 = (b.first - 1) * pitch - pitch * 0.45;
@@ -139,7 +146,7 @@ export function SlotDiagram({ table, caption, id = 'slot-diagram' }: SlotDiagram
         return (
           <g key={`${b.first}-${b.label}`}>
             <path d={arc(R_BORE + RING + 26, a1, a2)} fill="none" stroke="#1d2430" strokeWidth="2" strokeDasharray={b.label.endsWith('+') ? undefined : '4 2'} />
-            <text x={f(lx)} y={f(ly)} fontSize="10" fontWeight="700" textAnchor="middle" dominantBaseline="central">{b.label}</text>
+            <text x={f(lx)} y={f(ly)} fontSize={TEXT_MIN + 1} fontWeight="700" textAnchor="middle" dominantBaseline="central">{b.label}</text>
           </g>
         );
       })}
@@ -151,14 +158,15 @@ export function SlotDiagram({ table, caption, id = 'slot-diagram' }: SlotDiagram
         const r = R_BORE - 10 - k * 9;
         return <path key={`${from}-${to}`} d={arc(r, a1, a2)} fill="none" stroke="#a4531c" strokeWidth="1.6" markerEnd={`url(#${id}-arrow)`} />;
       })}
-      <text y="-14" textAnchor="middle" fontSize="11" fontWeight="700">{S} slots · {table.poles} poles</text>
-      <text y="2" textAnchor="middle" fontSize="9.5">{caption}</text>
+      <text y="-16" textAnchor="middle" fontSize={TEXT_MIN + 1} fontWeight="700">{S} slots · {table.poles} poles</text>
+      <text y="2" textAnchor="middle" fontSize={TEXT_MIN}>{caption}</text>
       {group.length > 0 && (
-        <text y="18" textAnchor="middle" fontSize="9" fill="#a4531c">
-          arrows: span of the first A+ group ({group.map(([a, b]) => `${a}–${b}`).join(', ')})
+        <text y="20" textAnchor="middle" fontSize={TEXT_MIN} fill="#8a4516">
+          <tspan x="0">arrows: span of the first A+ group</tspan>
+          <tspan x="0" dy={TEXT_MIN + 3}>{group.map(([a, b]) => `${a}–${b}`).join(', ')}</tspan>
         </text>
       )}
-      <g transform="translate(-250,285)" fontSize="9.5">
+      <g transform="translate(-255,285)" fontSize={TEXT_MIN}>
         <rect width="18" height="12" fill={PHASE_TINT.A} stroke="#1d2430" />
         <text x="23" y="10">Phase A (plain)</text>
         <rect x="118" width="18" height="12" fill={`url(#${id}-hatch)`} stroke="#1d2430" />

@@ -5,6 +5,7 @@
  * connection drops, and saves at once when the tab is hidden or closed, so nothing typed is lost.
  */
 import { useCallback, useEffect, useRef, useState } from 'react';
+import { useRouter } from 'next/navigation';
 import { saveSheetDraft } from '@/lib/as-found/as-found-actions';
 import type { DraftPayload } from '@/lib/as-found/draft-schema';
 import { fmt } from '@/lib/presentation/format';
@@ -35,6 +36,7 @@ export function draftStatusText(s: DraftState): string {
 }
 
 export function useDraftAutosave(jobId: string, enabled: boolean, snapshot: () => DraftPayload) {
+  const router = useRouter();
   const [state, setState] = useState<DraftState>({ kind: 'idle' });
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const dirty = useRef(false);
@@ -109,14 +111,46 @@ export function useDraftAutosave(jobId: string, enabled: boolean, snapshot: () =
         e.preventDefault();
       }
     };
+    // The page is going away (tab closed, reload, another address): send what is pending now.
+    const onPageHide = () => {
+      if (dirty.current) {
+        if (timer.current) clearTimeout(timer.current);
+        timer.current = null;
+        void send();
+      }
+    };
+    // A link inside the app leaves without unloading the page: hold the navigation until the draft is sent,
+    // so leaving within the autosave delay loses nothing.
+    const onClick = (e: MouseEvent) => {
+      if (!dirty.current && !inFlight.current) return;
+      const a = (e.target as Element | null)?.closest?.('a[href]');
+      if (!(a instanceof HTMLAnchorElement) || a.target || a.hasAttribute('download') || e.defaultPrevented || e.button !== 0 || e.metaKey || e.ctrlKey || e.shiftKey) return;
+      const url = new URL(a.href, window.location.href);
+      if (url.origin !== window.location.origin || url.pathname === window.location.pathname) return;
+      e.preventDefault();
+      e.stopPropagation();
+      if (timer.current) clearTimeout(timer.current);
+      timer.current = null;
+      void (async () => {
+        for (let i = 0; i < 50 && inFlight.current; i++) await new Promise((r) => setTimeout(r, 100));
+        await send();
+        router.push(url.pathname + url.search + url.hash);
+      })();
+    };
     document.addEventListener('visibilitychange', flush);
     window.addEventListener('beforeunload', warn);
+    window.addEventListener('pagehide', onPageHide);
+    document.addEventListener('click', onClick, true);
     return () => {
       document.removeEventListener('visibilitychange', flush);
       window.removeEventListener('beforeunload', warn);
+      window.removeEventListener('pagehide', onPageHide);
+      document.removeEventListener('click', onClick, true);
       if (timer.current) clearTimeout(timer.current);
+      // Unmounted by a navigation the click handler did not see (back button): send what is pending.
+      if (dirty.current) void send();
     };
-  }, [send]);
+  }, [send, router]);
 
   return { state, changed, clear, hasUnsaved: () => dirty.current || inFlight.current };
 }
