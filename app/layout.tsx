@@ -4,6 +4,8 @@ import Link from 'next/link';
 import { currentUser } from '@/lib/auth/guard';
 import { signOut } from '@/lib/auth/auth-actions';
 import { can, ROLE_LABELS } from '@/lib/auth/permissions';
+import { displaySettings } from '@/lib/presentation/format';
+import { ShopFormat } from './_components/shop-format';
 import './globals.css';
 
 export const metadata: Metadata = {
@@ -16,6 +18,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
   return (
     <html lang="en">
       <body>
+        <ShopFormat settings={displaySettings()} />
         <a className="skip" href="#main">Skip to content</a>
         <header className="topbar">
           <Link href="/jobs" className="brand">

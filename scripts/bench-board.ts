@@ -15,7 +15,8 @@ delete process.env.DATABASE_URL;
 
 const QUERIES: [string, Record<string, string>][] = [
   ['open jobs, by promised date, page 1', {}],
-  ['open jobs, page 400', { page: '400' }],
+  ['open jobs, jump to job 41,000 (by number)', { sort: 'number', from: '41000' }],
+  ['any status, jump to a promised date', { status: 'ANY', from: '2026-12-15' }],
   ['search by job number', { q: '1777' }],
   ['search by customer text', { q: 'customer 37' }],
   ['search by serial', { q: 'SN-0012345' }],

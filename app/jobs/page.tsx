@@ -1,8 +1,9 @@
 import Link from 'next/link';
 import { requirePageUser } from '@/lib/auth/guard';
 import { can } from '@/lib/auth/permissions';
-import { listBoard, listCustomers, listStaff } from '@/lib/jobs/job-queries';
-import { boardHref } from '@/lib/jobs/board-url';
+import { customerName, listBoard, listStaff } from '@/lib/jobs/job-queries';
+import { boardHref, sortInWords } from '@/lib/jobs/board-url';
+import { CustomerFilter } from './customer-filter';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
 import { boardQuerySchema, boardSearchRefusal, JOB_STATUSES, type BoardQuery } from '@/lib/jobs/job-schema';
 import { fmt } from '@/lib/presentation/format';
@@ -22,9 +23,12 @@ const COLUMNS: { key: SortKey | null; label: string; className?: string }[] = [
   { key: null, label: 'Assigned to' },
 ];
 
-/** Sort keys in words for the table caption ("sorted by promised date, ascending"). */
-const SORT_WORDS: Record<BoardQuery['sort'], string> = {
-  number: 'job number', promisedAt: 'promised date', receivedAt: 'date received', status: 'status', customer: 'customer', priority: 'priority',
+/** The "start at" field for sorts that have one: a date, a job number or the start of a name. */
+const JUMP_INPUT: Partial<Record<SortKey, { label: string; type: 'date' | 'text' }>> = {
+  promisedAt: { label: 'Start at promised date', type: 'date' },
+  receivedAt: { label: 'Start at date received', type: 'date' },
+  number: { label: 'Start at job number', type: 'text' },
+  customer: { label: 'Start at customer name', type: 'text' },
 };
 
 export default async function JobBoard({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
@@ -32,8 +36,9 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
   const raw = await searchParams;
   const q = boardQuerySchema.parse(raw);
   const qRefusal = boardSearchRefusal(raw.q);
-  const [board, customers, staff] = await Promise.all([listBoard(q), listCustomers(), listStaff()]);
+  const [board, chosenCustomer, staff] = await Promise.all([listBoard(q), q.customerId ? customerName(q.customerId) : null, listStaff()]);
   const statusValue = q.status[0] ?? '';
+  const jumpKind = JUMP_INPUT[q.sort];
   return (
     <>
       <div className="row" style={{ justifyContent: 'space-between' }}>
@@ -50,17 +55,12 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
           <div>
             <label htmlFor="status">Status</label>
             <select id="status" name="status" defaultValue={statusValue}>
-              <option value="">All open jobs</option>
+              <option value="">Open jobs</option>
+              <option value="ANY">Any status (shipped and returned included)</option>
               {JOB_STATUSES.map((s) => <option key={s} value={s}>{STATUS_LABELS[s]}</option>)}
             </select>
           </div>
-          <div>
-            <label htmlFor="customerId">Customer</label>
-            <select id="customerId" name="customerId" defaultValue={q.customerId ?? ''}>
-              <option value="">Any customer</option>
-              {customers.map((c) => <option key={c.id} value={c.id}>{c.company}</option>)}
-            </select>
-          </div>
+          <CustomerFilter initialId={q.customerId} initialName={chosenCustomer ?? undefined} />
           <div>
             <label htmlFor="assigneeId">Assigned to</label>
             <select id="assigneeId" name="assigneeId" defaultValue={q.assigneeId ?? ''}>
@@ -85,11 +85,14 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
         </div>
       </form>
       <p className="muted" role="status">
-        {board.total} job{board.total === 1 ? '' : 's'} · page {q.page} of {board.pages}
+        {board.capped ? `More than ${fmt.int(board.count)} jobs` : `${fmt.int(board.count)} job${board.count === 1 ? '' : 's'}`}
+        {' · '}{board.scope === 'any' ? 'every status' : board.scope === 'open' ? 'open jobs' : 'chosen statuses'}
+        {' · '}{sortInWords(q)}
+        {board.scope === 'any' && !q.status.includes('ANY') ? ' (a search with a number looks across every status)' : ''}
       </p>
       <div style={{ overflowX: 'auto' }}>
         <table className="board">
-          <caption className="sr-only">Jobs, sorted by {SORT_WORDS[q.sort]}, {q.dir === 'asc' ? 'ascending' : 'descending'}</caption>
+          <caption className="sr-only">Jobs, {sortInWords(q)}</caption>
           <thead>
             <tr>
               {COLUMNS.map((c) => {
@@ -97,7 +100,7 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
                 return (
                   <th key={c.label} className={c.className} scope="col" aria-sort={active ? (q.dir === 'asc' ? 'ascending' : 'descending') : undefined}>
                     {c.key ? (
-                      <Link href={boardHref(q, { sort: c.key, dir: active && q.dir === 'asc' ? 'desc' : 'asc', page: 1 })}>
+                      <Link href={boardHref(q, { sort: c.key, dir: active && q.dir === 'asc' ? 'desc' : 'asc' })}>
                         {c.label} {active ? (q.dir === 'asc' ? '▲' : '▼') : ''}
                       </Link>
                     ) : c.label}
@@ -110,7 +113,7 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
             {board.rows.map((r) => (
               <tr key={r.id} className={r.overdue ? 'overdue' : undefined}>
                 <td className="num"><Link href={`/jobs/${r.number}`}>{r.number}</Link></td>
-                <td>{r.customer.company}</td>
+                <td>{r.customerName}</td>
                 <td>
                   {r.motor.manufacturer} {r.motor.model ?? ''}
                   <div className="small muted">S/N {r.motor.serial ?? '—'}</div>
@@ -123,7 +126,7 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
                 <td>{r.priority === 'NORMAL' ? 'Normal' : <span className={`tag ${r.priority}`}>{r.priority.toLowerCase()}</span>}</td>
                 <td>{fmt.date(r.receivedAt)}</td>
                 <td>
-                  {fmt.date(r.promisedAt)} {r.overdue && <span className="tag overdue">overdue</span>}
+                  {fmt.day(r.promisedAt)} {r.overdue && <span className="tag overdue">overdue</span>}
                 </td>
                 <td>{r.assignee?.name ?? <span className="muted">—</span>}</td>
               </tr>
@@ -135,10 +138,24 @@ export default async function JobBoard({ searchParams }: { searchParams: Promise
         </table>
       </div>
       <nav className="pager no-print" aria-label="Pages">
-        {q.page > 1 ? <Link href={boardHref(q, { page: q.page - 1 })}>← Previous</Link> : <span className="muted">← Previous</span>}
-        <span>Page {q.page} of {board.pages}</span>
-        {q.page < board.pages ? <Link href={boardHref(q, { page: q.page + 1 })}>Next →</Link> : <span className="muted">Next →</span>}
+        {board.previous ? <Link href={boardHref(q, { before: board.previous })}>← Previous</Link> : <span className="muted">← Previous</span>}
+        <Link href={boardHref(q, {})}>First page</Link>
+        {board.next ? <Link href={boardHref(q, { after: board.next })}>Next →</Link> : <span className="muted">Next →</span>}
       </nav>
+      {jumpKind && (
+        <form className="row no-print" method="get" action="/jobs" aria-label="Jump to a position">
+          {q.status.map((st) => <input key={st} type="hidden" name="status" value={st} />)}
+          {q.customerId && <input type="hidden" name="customerId" value={q.customerId} />}
+          {q.assigneeId && <input type="hidden" name="assigneeId" value={q.assigneeId} />}
+          {q.due !== 'any' && <input type="hidden" name="due" value={q.due} />}
+          {q.q && <input type="hidden" name="q" value={q.q} />}
+          <input type="hidden" name="sort" value={q.sort} />
+          <input type="hidden" name="dir" value={q.dir} />
+          <label htmlFor="from">{jumpKind.label}</label>
+          <input id="from" name="from" type={jumpKind.type} defaultValue={q.from ?? ''} inputMode={jumpKind.type === 'text' && q.sort === 'number' ? 'numeric' : undefined} />
+          <button className="btn" type="submit">Go</button>
+        </form>
+      )}
     </>
   );
 }

@@ -5,6 +5,9 @@ import { mmToInches } from '@/lib/engine/units';
 import { fmt } from '@/lib/presentation/format';
 import { limitsToForm } from '@/lib/redesign/redesign-schema';
 import { getShopLimits } from '@/lib/settings/settings-queries';
+import { readDisplaySettings } from '@/lib/settings/display-settings';
+import { DATE_FORMAT_LABELS, DATE_FORMATS, serverTimeZone } from '@/lib/presentation/format';
+import { DisplaySettingsForm } from './display-settings-form';
 import { listStock } from '@/lib/stock/stock-queries';
 import { AddStockForm, RemoveStockButton } from './stock-forms';
 import { SettingsForm } from './settings-form';
@@ -17,7 +20,8 @@ export const metadata = { title: 'Wire stock and shop limits' };
 /** The wire sizes on hand (the redesign search picks only from these) and the shop's redesign limits. */
 export default async function StockPage() {
   const user = await requirePageUser('stock.manage');
-  const [stock, settings, bench] = await Promise.all([listStock(), getShopLimits(), getBenchPackSettings()]);
+  const [stock, settings, bench, display] = await Promise.all([listStock(), getShopLimits(), getBenchPackSettings(), readDisplaySettings()]);
+  const dateFormat = DATE_FORMATS.find((f) => f === display.dateFormat) ?? 'iso';
   const l = settings.limits;
   const mayEditSettings = can(user.role, 'settings.manage');
   return (
@@ -85,6 +89,18 @@ export default async function StockPage() {
           <dl className="dl">
             <dt>Allowance</dt><dd>{(bench.wireAllowance * 100).toFixed(1)} % for leads, jumpers and waste</dd>
             <dt>Lead marking</dt><dd>{bench.leadConvention === 'nema' ? 'NEMA MG 1 Part 2' : 'IEC 60034-8'}</dd>
+          </dl>
+        )}
+      </section>
+      <section className="card" aria-labelledby="dates-h">
+        <h2 id="dates-h">Dates and times</h2>
+        <p className="muted small">One time zone and one date format for every screen, print view and PDF (times are written 24-hour with the zone&apos;s name).</p>
+        {mayEditSettings ? (
+          <DisplaySettingsForm version={display.version} timeZone={display.timeZone} dateFormat={dateFormat} serverZone={serverTimeZone()} zones={Intl.supportedValuesOf('timeZone')} />
+        ) : (
+          <dl className="dl">
+            <dt>Time zone</dt><dd>{display.timeZone ?? `${serverTimeZone()} (the server's)`}</dd>
+            <dt>Date format</dt><dd>{DATE_FORMAT_LABELS[dateFormat]}</dd>
           </dl>
         )}
       </section>

@@ -3,6 +3,7 @@
  * `guardedAction`, which checks the session and the role BEFORE it parses or writes anything.
  */
 import { cookies } from 'next/headers';
+import { ensureDisplaySettings } from '@/lib/settings/display-settings';
 import { redirect } from 'next/navigation';
 import type { z } from 'zod';
 import { DomainError, MESSAGES } from '@/lib/errors/domain-errors';
@@ -13,6 +14,9 @@ import { SESSION_COOKIE, findSessionUser, type SessionUser } from './session-sto
 
 export async function currentUser(): Promise<SessionUser | null> {
   const jar = await cookies();
+  // Every page, route and action passes here first: keep the shop's date settings fresh (cheap when fresh).
+  // After cookies(): that call marks the page dynamic, so nothing here runs while `next build` prerenders.
+  await ensureDisplaySettings();
   return findSessionUser(jar.get(SESSION_COOKIE)?.value);
 }
 

@@ -4,6 +4,7 @@
  * version they were made from; a retest names the sequence it follows, and the (jobId, sequence) unique
  * key refuses two retests racing for the same number.
  */
+import { fromZonedLocal } from '@/lib/presentation/format';
 import { db, Prisma } from '@/lib/db/client';
 import { recordJobEvent } from '@/lib/jobs/job-writes';
 import { STATUS_LABELS } from '@/lib/jobs/status-flow';
@@ -67,7 +68,8 @@ export async function saveTestRecord(userId: string, raw: TestRecordForm): Promi
   if (!rating) throw new DomainError('not-found', MESSAGES.notFound('job'));
   const input = bindRating(raw, rating);
   const judgement = judgeTestRecord(input.data);
-  const testedAt = new Date(`${input.testedAt.length === 16 ? `${input.testedAt}:00` : input.testedAt}Z`);
+  // Typed as the shop's wall-clock time (shop settings), stored as the instant it names.
+  const testedAt = fromZonedLocal(input.testedAt);
   const columns = {
     // JSON has no undefined: a blank reading inside a tuple (e.g. one phase current) is stored as null,
     // which the schema reads back as blank; blank fields of objects are simply left out.

@@ -167,7 +167,7 @@ export const testDataSchema = testDataShape.superRefine(completeness);
 export type TestDataInput = z.input<typeof testDataSchema>;
 export type TestDataValues = z.output<typeof testDataSchema>;
 
-/** A date and time from <input type="datetime-local"> (taken as UTC, like every time the app shows). */
+/** A date and time from <input type="datetime-local"> (the shop's wall-clock time in its time zone; read as an instant on save). */
 export const testedAtSchema = z
   .string({ error: 'Give the date and time of the tests.' })
   .regex(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2})?$/, 'Give the date and time as YYYY-MM-DD HH:MM.')

@@ -169,7 +169,7 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
         { label: 'Job', value: String(job.number) },
         { label: 'Status', value: STATUS_LABELS[job.status] },
         { label: 'Received', value: fmt.date(job.receivedAt) },
-        { label: 'Promised', value: fmt.date(job.promisedAt) },
+        { label: 'Promised', value: fmt.day(job.promisedAt) },
         { label: 'Customer PO', value: dash(job.customerPo) },
         { label: 'Reported fault', value: dash(job.reportedFault) },
         { label: 'Assigned to', value: dash(job.assignee?.name) },

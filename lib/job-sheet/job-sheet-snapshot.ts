@@ -7,13 +7,15 @@
  */
 import { db, Prisma } from '@/lib/db/client';
 import { loadJobSheet } from './job-sheet-data';
-import { renderJobSheetPdf } from './job-sheet-pdf';
+import { cachedJobSheetPdf } from './pdf-cache';
 
 export interface JobSheetPdf {
   pdf: Uint8Array;
   filename: string;
   /** True when served from the snapshot stored at shipping. */
   snapshot: boolean;
+  /** True when a generated sheet came from the per-issue cache. */
+  cached?: boolean;
   revision: number;
 }
 
@@ -29,7 +31,7 @@ export async function snapshotShippedJobSheet(jobId: string): Promise<{ revision
   if (!job || job.status !== 'SHIPPED') return null;
   const data = await loadJobSheet(job.number);
   if (!data) return null;
-  const pdf = await renderJobSheetPdf(data);
+  const { pdf } = await cachedJobSheetPdf(data);
   try {
     await db().jobSheetSnapshot.create({ data: { jobId, pdf: new Uint8Array(pdf), sizeBytes: pdf.length, revision: data.revision } });
   } catch (err) {
@@ -54,5 +56,7 @@ export async function jobSheetPdf(number: number): Promise<JobSheetPdf | null> {
   }
   const data = await loadJobSheet(number);
   if (!data) return null;
-  return { pdf: new Uint8Array(await renderJobSheetPdf(data)), filename: jobSheetFilename(number, data.revision), snapshot: false, revision: data.revision };
+  // Rendered on a worker thread, once per issue of the record (pdf-cache.ts).
+  const { pdf, cached } = await cachedJobSheetPdf(data);
+  return { pdf, filename: jobSheetFilename(number, data.revision), snapshot: false, cached, revision: data.revision };
 }

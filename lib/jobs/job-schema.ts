@@ -66,16 +66,41 @@ export const PAGE_SIZE = 25;
 
 const oneOrMany = <T extends z.ZodType>(s: T) => z.preprocess((v) => (v === undefined ? [] : Array.isArray(v) ? v : [v]), z.array(s));
 
+/**
+ * A position on the board: the sort key's value of a row (ISO date, name, enum or number as text; null for
+ * "no promised date") and its job number, which breaks ties. Written in the URL as `<number>~<value>` or
+ * `<number>~` for null.
+ */
+export interface BoardCursor {
+  number: number;
+  value: string | null;
+}
+export const boardCursorSchema = z
+  .string()
+  .max(300)
+  .regex(/^\d{1,10}~/)
+  .transform((s): BoardCursor => {
+    const at = s.indexOf('~');
+    const value = s.slice(at + 1);
+    return { number: Number(s.slice(0, at)), value: value === '' ? null : value };
+  });
+export const encodeBoardCursor = (c: BoardCursor): string => `${c.number}~${c.value ?? ''}`;
+
 /** The job board's search params, parsed with zod (a bad URL falls back to defaults, never crashes). */
 export const boardQuerySchema = z.object({
-  status: oneOrMany(z.enum([...JOB_STATUSES, 'OPEN'])).catch([]),
+  /** Empty: open jobs (or, for a search containing a digit, every status); 'ANY': every status. */
+  status: oneOrMany(z.enum([...JOB_STATUSES, 'OPEN', 'ANY'])).catch([]),
   customerId: z.uuid().optional().catch(undefined),
   assigneeId: z.union([z.uuid(), z.literal('none')]).optional().catch(undefined),
   due: z.enum(DUE_FILTERS).default('any').catch('any'),
   q: noNul(z.string().trim().max(80)).optional().catch(undefined),
   sort: z.enum(BOARD_SORTS).default('promisedAt').catch('promisedAt'),
   dir: z.enum(['asc', 'desc']).default('asc').catch('asc'),
-  page: z.coerce.number().int().min(1).max(100_000).default(1).catch(1),
+  /** Rows after this position (next page) or before it (previous page). */
+  after: boardCursorSchema.optional().catch(undefined),
+  before: boardCursorSchema.optional().catch(undefined),
+  /** Jump: start at this value of the sort key (a date, a job number or the start of a customer's name). */
+  from: z.string().trim().max(80).optional().catch(undefined),
 });
 export type BoardQuery = z.output<typeof boardQuerySchema>;
 

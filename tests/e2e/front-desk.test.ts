@@ -49,7 +49,8 @@ describe('the front desk', () => {
     await page.getByRole('link', { name: number, exact: true }).click();
     await page.waitForURL(jobUrl);
     await page.getByRole('button', { name: 'Move to Inspection' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: /^Status:/ }).textContent()).toContain('Inspection');
+    // The move is a server action plus a refresh: seconds on a loaded machine, so poll longer than the 1 s default.
+    await expect.poll(() => page.getByRole('heading', { name: /^Status:/ }).textContent(), { timeout: 15_000 }).toContain('Inspection');
     // Only allowed moves are offered: from inspection, shipping is not one of them.
     expect(await page.getByRole('button', { name: 'Move to Shipped' }).count()).toBe(0);
     await page.close();

@@ -103,7 +103,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
             current={{
               jobId: job.id,
               version: job.version,
-              promisedAt: job.promisedAt ? fmt.date(job.promisedAt) : '',
+              promisedAt: job.promisedAt ? job.promisedAt.toISOString().slice(0, 10) : '',
               priority: job.priority,
               customerPo: job.customerPo ?? '',
               reportedFault: job.reportedFault ?? '',
@@ -114,7 +114,7 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
         ) : (
           <dl className="dl">
             <dt>Reported fault</dt><dd>{job.reportedFault ?? '—'}</dd>
-            <dt>Promised</dt><dd>{fmt.date(job.promisedAt)}</dd>
+            <dt>Promised</dt><dd>{fmt.day(job.promisedAt)}</dd>
             <dt>Priority</dt><dd>{job.priority.toLowerCase()}</dd>
             <dt>Customer PO</dt><dd>{job.customerPo ?? '—'}</dd>
             <dt>Assigned to</dt><dd>{job.assignee?.name ?? '—'}</dd>

@@ -12,7 +12,7 @@ import { compareFinalResistance, RESISTANCE_CHECK_PERCENT, type ExpectedResistan
 import { expectedResistanceFor } from '@/lib/final-tests/expected-resistance-source';
 import { jobAsRepairedRating } from '@/lib/final-tests/test-rating-source';
 import { ratingSentence } from '@/lib/final-tests/readings';
-import { fmt } from '@/lib/presentation/format';
+import { fmt, toZonedLocal } from '@/lib/presentation/format';
 import type { TestRecordFormInput } from '@/lib/final-tests/test-record-schema';
 import { OverallVerdict, SectionVerdict } from './judgement-view';
 import { RecordReadings } from './record-readings';
@@ -28,7 +28,7 @@ export async function generateMetadata({ params }: { params: Promise<{ number: s
 }
 
 /** datetime-local value for now, in UTC (minutes). */
-const nowLocal = () => new Date().toISOString().slice(0, 16);
+const nowLocal = () => toZonedLocal(new Date());
 
 export default async function TestsPage({ params }: { params: Promise<{ number: string }> }) {
   const { user, job } = await loadJobRoute(params, getJobForFinalTests);
@@ -50,7 +50,7 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
   const editValues: TestRecordFormInput | null = current
     ? {
         jobId: job.id, recordId: current.id, version: current.version, previousSequence: current.sequence,
-        testedAt: current.testedAt.toISOString().slice(0, 16), testedById: current.testedBy?.id ?? '', data: recordToFormData(current.data),
+        testedAt: toZonedLocal(current.testedAt), testedById: current.testedBy?.id ?? '', data: recordToFormData(current.data),
       }
     : null;
 

@@ -9,6 +9,7 @@ import { useCallback, useEffect, useMemo, useRef, useState, useTransition, type 
 import { useRouter } from 'next/navigation';
 import { FormProvider, useForm } from 'react-hook-form';
 import { FormStatus } from '@/app/_components/form-status';
+import { fmt } from '@/lib/presentation/format';
 import { applyFieldErrors } from '@/lib/errors/form-errors';
 import type { CoilSide } from '@/lib/engine/winding-layout';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
@@ -65,7 +66,7 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   const memoryRef = useRef<Map<string, TypedLength>>(new Map(initial.lengthMemory ?? []));
   const [conflict, setConflict] = useState(false);
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(
-    initial.source === 'draft' ? { tone: 'warn', text: `Restored your unsaved draft from ${new Date(initial.draftSavedAt ?? Date.now()).toLocaleString()}. Save the sheet to keep it, or discard the draft.` } : null,
+    initial.source === 'draft' ? { tone: 'warn', text: `Restored your unsaved draft from ${fmt.dateTime(new Date(initial.draftSavedAt ?? Date.now()))}. Save the sheet to keep it, or discard the draft.` } : null,
   );
   const [hasDraft, setHasDraft] = useState(initial.source === 'draft');
   const [pending, startTransition] = useTransition();

@@ -9,6 +9,7 @@ import { useRouter } from 'next/navigation';
 import { saveSheetDraft } from '@/lib/as-found/as-found-actions';
 import type { DraftPayload } from '@/lib/as-found/draft-schema';
 import { callAction } from '@/lib/errors/call-action';
+import { fmt } from '@/lib/presentation/format';
 
 /** Quiet time after the last change before the draft is sent. */
 export const DRAFT_DELAY_MS = 2500;
@@ -22,7 +23,7 @@ export type DraftState =
   | { kind: 'failed'; message: string }
   | { kind: 'cleared'; text: string };
 
-const hhmm = (d: Date): string => d.toLocaleTimeString([], { hour: '2-digit', minute: '2-digit' });
+const hhmm = (d: Date): string => fmt.time(d);
 
 export function draftStatusText(s: DraftState): string {
   switch (s.kind) {
