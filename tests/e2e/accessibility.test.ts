@@ -133,7 +133,8 @@ describe('accessibility and tablet layout of every screen', () => {
     await page.getByLabel(/^Line voltage/).fill('460');
     await page.getByLabel(/^Frequency/).fill('60');
     await page.getByRole('button', { name: 'Find windings (open revision 1)' }).click();
-    await page.waitForURL(/rev=1/);
+    // The search runs on the request thread for now; give it room on a busy machine.
+    await page.waitForURL(/rev=1/, { timeout: 120_000 });
     await expect.poll(() => page.getByRole('table', { name: 'Candidate windings' }).count(), { timeout: 60_000 }).toBe(1);
     await page.getByRole('button', { name: 'Choose candidate 1', exact: true }).click();
     await expect.poll(() => page.getByRole('heading', { name: 'Candidate 1 beside the as-found winding' }).count(), { timeout: 60_000 }).toBe(1);
