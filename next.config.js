@@ -1,6 +1,9 @@
 // Extra origins allowed to post to server actions (a proxy that rewrites Host); the app's own host is
 // always allowed. Checked with the other settings in lib/env.ts at start-up.
-const allowedOrigins = (process.env.COILWRIGHT_ALLOWED_ORIGINS ?? '').split(',').map((s) => s.trim()).filter(Boolean);
+const allowedOrigins = (process.env.COILWRIGHT_ALLOWED_ORIGINS ?? '')
+  .split(',')
+  .map((s) => s.trim())
+  .filter(Boolean);
 
 /** @type {import('next').NextConfig} */
 const nextConfig = {

@@ -16,11 +16,13 @@ export default function ScreenError({ error, reset }: { error: Error & { digest?
     <div className="card" role="alert">
       <h1>This screen could not be loaded</h1>
       <p>
-        The shop system did not answer in time, or it is restarting. Your saved records are safe. Wait a moment and try again; if
-        it keeps happening, tell your administrator{error.digest ? ` and quote reference ${error.digest}` : ''}.
+        The shop system did not answer in time, or it is restarting. Your saved records are safe. Wait a moment and try again; if it keeps
+        happening, tell your administrator{error.digest ? ` and quote reference ${error.digest}` : ''}.
       </p>
       <p className="row">
-        <button type="button" className="btn" onClick={() => reset()}>Try again</button>
+        <button type="button" className="btn" onClick={() => reset()}>
+          Try again
+        </button>
         <Link href="/jobs">Back to the job board</Link>
       </p>
     </div>

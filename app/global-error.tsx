@@ -11,11 +11,15 @@ export default function GlobalError({ error, reset }: { error: Error & { digest?
         <main role="alert">
           <h1>Coilwright is not answering right now</h1>
           <p>
-            The shop system could not load this page: the database may be restarting or unreachable. Saved records are safe.
-            Wait a moment, then try again{error.digest ? ` (reference ${error.digest})` : ''}.
+            The shop system could not load this page: the database may be restarting or unreachable. Saved records are safe. Wait a moment,
+            then try again{error.digest ? ` (reference ${error.digest})` : ''}.
           </p>
           <p>
-            <button type="button" onClick={() => reset()}>Try again</button>{' '}
+            <button type="button" onClick={() => reset()}>
+              Try again
+            </button>{' '}
+            {/* The root layout itself failed: a full page load, not the client router, is what recovers. */}
+            {/* eslint-disable-next-line @next/next/no-html-link-for-pages */}
             <a href="/jobs">Back to the job board</a>
           </p>
         </main>

@@ -19,7 +19,9 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
     <html lang="en">
       <body>
         <ShopFormat settings={displaySettings()} />
-        <a className="skip" href="#main">Skip to content</a>
+        <a className="skip" href="#main">
+          Skip to content
+        </a>
         <header className="topbar">
           <Link href="/jobs" className="brand">
             Coil<span>wright</span>
@@ -27,12 +29,32 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
           {user && (
             <nav aria-label="Main">
               <ul>
-                <li><Link href="/jobs">Job board</Link></li>
-                {can(user.role, 'job.intake') && <li><Link href="/jobs/new">New intake</Link></li>}
-                <li><Link href="/library">Winding library</Link></li>
-                {can(user.role, 'stock.manage') && <li><Link href="/stock">Wire stock</Link></li>}
-                {can(user.role, 'settings.manage') && <li><Link href="/admin/users">People</Link></li>}
-                {can(user.role, 'settings.manage') && <li><Link href="/admin/commercial">Quoting settings</Link></li>}
+                <li>
+                  <Link href="/jobs">Job board</Link>
+                </li>
+                {can(user.role, 'job.intake') && (
+                  <li>
+                    <Link href="/jobs/new">New intake</Link>
+                  </li>
+                )}
+                <li>
+                  <Link href="/library">Winding library</Link>
+                </li>
+                {can(user.role, 'stock.manage') && (
+                  <li>
+                    <Link href="/stock">Wire stock</Link>
+                  </li>
+                )}
+                {can(user.role, 'settings.manage') && (
+                  <li>
+                    <Link href="/admin/users">People</Link>
+                  </li>
+                )}
+                {can(user.role, 'settings.manage') && (
+                  <li>
+                    <Link href="/admin/commercial">Quoting settings</Link>
+                  </li>
+                )}
               </ul>
             </nav>
           )}

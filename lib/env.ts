@@ -30,7 +30,12 @@ const envSchema = z.object({
    * Extra origins (host[:port], comma-separated) allowed to post to server actions, for a proxy that
    * rewrites the Host header; the app's own host is always allowed (next.config.js).
    */
-  COILWRIGHT_ALLOWED_ORIGINS: z.string().trim().max(1000).regex(/^[A-Za-z0-9.:*,\- ]*$/, 'host names and ports, comma-separated').optional(),
+  COILWRIGHT_ALLOWED_ORIGINS: z
+    .string()
+    .trim()
+    .max(1000)
+    .regex(/^[A-Za-z0-9.:*,\- ]*$/, 'host names and ports, comma-separated')
+    .optional(),
   /** 1 when served over HTTPS: session cookies get the Secure flag. */
   COILWRIGHT_SECURE_COOKIES: flag,
   /** The shop's own details at the head of the job sheet. */

@@ -16,7 +16,10 @@ async function main(): Promise<number> {
   const outAt = args.indexOf('--out');
   const config = readDbConfig();
   const stamp = new Date().toISOString().slice(0, 19).replace(/[-:]/g, '').replace('T', '-');
-  const file = outAt >= 0 && args[outAt + 1] ? args[outAt + 1]! : join('backups', `coilwright-${stamp}.${config.engine === 'postgres' ? 'dump' : 'tar.gz'}`);
+  const file =
+    outAt >= 0 && args[outAt + 1]
+      ? args[outAt + 1]!
+      : join('backups', `coilwright-${stamp}.${config.engine === 'postgres' ? 'dump' : 'tar.gz'}`);
   mkdirSync(dirname(file), { recursive: true });
   if (config.engine === 'postgres') {
     await backupPostgres(config.url, file);

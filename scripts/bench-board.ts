@@ -27,7 +27,10 @@ const QUERIES: [string, Record<string, string>][] = [
 
 async function fill(total: number, startAt: number): Promise<void> {
   const existing = await db().customer.count();
-  const customers = Array.from({ length: 200 - existing > 0 ? 200 - existing : 0 }, (_, i) => ({ id: randomUUID(), company: `Customer ${existing + i}` }));
+  const customers = Array.from({ length: 200 - existing > 0 ? 200 - existing : 0 }, (_, i) => ({
+    id: randomUUID(),
+    company: `Customer ${existing + i}`,
+  }));
   if (customers.length) await db().customer.createMany({ data: customers });
   const allCustomers = await db().customer.findMany({ select: { id: true } });
   const day = 86_400_000;
@@ -78,11 +81,15 @@ for (const [name, q] of QUERIES) small.set(name, await time(q));
 const t0 = performance.now();
 await fill(49_500, 500);
 await db().$executeRawUnsafe('ANALYZE');
-process.stdout.write(`\nJob board (embedded PostgreSQL in memory); 49,500 jobs added in ${((performance.now() - t0) / 1000).toFixed(1)} s\n`);
+process.stdout.write(
+  `\nJob board (embedded PostgreSQL in memory); 49,500 jobs added in ${((performance.now() - t0) / 1000).toFixed(1)} s\n`,
+);
 process.stdout.write(`${'query'.padEnd(40)} ${'500 jobs'.padStart(10)} ${'50,000 jobs'.padStart(12)} ${'ratio'.padStart(7)}\n`);
 for (const [name, q] of QUERIES) {
   const big = await time(q);
   const s = small.get(name)!;
-  process.stdout.write(`${name.padEnd(40)} ${`${s.toFixed(1)} ms`.padStart(10)} ${`${big.toFixed(1)} ms`.padStart(12)} ${(big / s).toFixed(1).padStart(6)}×\n`);
+  process.stdout.write(
+    `${name.padEnd(40)} ${`${s.toFixed(1)} ms`.padStart(10)} ${`${big.toFixed(1)} ms`.padStart(12)} ${(big / s).toFixed(1).padStart(6)}×\n`,
+  );
 }
 await closeDb();

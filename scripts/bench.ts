@@ -27,16 +27,24 @@ const windingSection: BenchSection = {
   title: 'Winding analysis: 96 slots, 4 poles, orders 1–49',
   run: (opts) => {
     const { slots, poles, spans } = BENCH_WINDING.winding;
-    const full = timeIt('full analysis (analyseWinding)', () => {
-      const r = analyseWinding(BENCH_WINDING);
-      if (!r.ok) throw new Error(r.error.message);
-      return r.value;
-    }, opts);
-    const closed = timeIt('closed-form k_d, k_p, k_w only (odd orders)', () => {
-      let sum = 0;
-      for (let nu = 1; nu <= 49; nu += 2) sum += closedFormFactors(slots, poles, spans[0] ?? 0, nu)?.kw ?? 0;
-      return sum;
-    }, opts);
+    const full = timeIt(
+      'full analysis (analyseWinding)',
+      () => {
+        const r = analyseWinding(BENCH_WINDING);
+        if (!r.ok) throw new Error(r.error.message);
+        return r.value;
+      },
+      opts,
+    );
+    const closed = timeIt(
+      'closed-form k_d, k_p, k_w only (odd orders)',
+      () => {
+        let sum = 0;
+        for (let nu = 1; nu <= 49; nu += 2) sum += closedFormFactors(slots, poles, spans[0] ?? 0, nu)?.kw ?? 0;
+        return sum;
+      },
+      opts,
+    );
     const met = full.medianMs < FULL_ANALYSIS_TARGET_MS;
     return [
       formatTiming(full),
@@ -53,7 +61,18 @@ const REDESIGN_ORIGINAL: RedesignOriginal = {
   supply: { lineVoltageV: 400, frequencyHz: 50 },
   core: { boreM: 0.2, coreLengthM: 0.16, outsideDiameterM: 0.31, slots: 48, slotDepthM: 0.024, toothWidthM: 0.0068, stackingFactor: 0.95 },
   grossSlotAreaMm2: 150,
-  wires: [{ label: '1.120 mm', standard: 'metric', size: '1.12', enamelGrade: 2, bareMm: 1.12, overallMm: 1.18, areaMm2: (Math.PI / 4) * 1.12 ** 2, count: 2 }],
+  wires: [
+    {
+      label: '1.120 mm',
+      standard: 'metric',
+      size: '1.12',
+      enamelGrade: 2,
+      bareMm: 1.12,
+      overallMm: 1.18,
+      areaMm2: (Math.PI / 4) * 1.12 ** 2,
+      count: 2,
+    },
+  ],
   meanTurnLengthMm: 700,
   ratedCurrentA: 9,
 };
@@ -70,7 +89,16 @@ const REDESIGN_STOCK: StockWire[] = [
 
 /** 400 V Y 50 Hz → 460 V 60 Hz, either connection, spans 1–10 … 1–13, every allowed circuit count. */
 const REDESIGN_REQUEST: RedesignRequest = {
-  target: { lineVoltageV: 460, frequencyHz: 60, poles: 4, connection: 'either', spans: [9, 10, 11, 12], layers: 'keep', parallelPaths: [], allowOverPitch: false },
+  target: {
+    lineVoltageV: 460,
+    frequencyHz: 60,
+    poles: 4,
+    connection: 'either',
+    spans: [9, 10, 11, 12],
+    layers: 'keep',
+    parallelPaths: [],
+    allowOverPitch: false,
+  },
   limits: DEFAULT_REDESIGN_LIMITS,
 };
 
@@ -84,16 +112,24 @@ const redesignSection: BenchSection = {
     if (!first.ok) throw new Error(first.error.message);
     const best = first.value.candidates[0];
     if (!best) throw new Error('the bench search found no candidate');
-    const search = timeIt('full candidate search (searchRedesign)', () => {
-      const r = searchRedesign(REDESIGN_ORIGINAL, REDESIGN_REQUEST, REDESIGN_STOCK);
-      if (!r.ok) throw new Error(r.error.message);
-      return r.value;
-    }, opts);
-    const one = timeIt('analysing one candidate (analyseWinding)', () => {
-      const r = analyseWinding({ winding: best.winding, supply: { lineVoltageV: 460, frequencyHz: 60 }, core: REDESIGN_ORIGINAL.core });
-      if (!r.ok) throw new Error(r.error.message);
-      return r.value;
-    }, opts);
+    const search = timeIt(
+      'full candidate search (searchRedesign)',
+      () => {
+        const r = searchRedesign(REDESIGN_ORIGINAL, REDESIGN_REQUEST, REDESIGN_STOCK);
+        if (!r.ok) throw new Error(r.error.message);
+        return r.value;
+      },
+      opts,
+    );
+    const one = timeIt(
+      'analysing one candidate (analyseWinding)',
+      () => {
+        const r = analyseWinding({ winding: best.winding, supply: { lineVoltageV: 460, frequencyHz: 60 }, core: REDESIGN_ORIGINAL.core });
+        if (!r.ok) throw new Error(r.error.message);
+        return r.value;
+      },
+      opts,
+    );
     const met = search.medianMs < SEARCH_TARGET_MS;
     return [
       `${first.value.familiesTried} families, ${first.value.wireSetsConsidered} wire sets looked at, ${first.value.candidates.length} candidates, ${first.value.rejected.length} families rejected`,

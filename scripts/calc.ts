@@ -71,7 +71,11 @@ function main(argv: readonly string[]): void {
   const r = analyseSheet(sheet);
   if (!r.ok) die(`${cmd.file}: ${engineMessage(r.error)}`);
   const findings = sheetFindings(sheet, r.value);
-  process.stdout.write(cmd.json ? `${JSON.stringify({ ...r.value, findings }, null, 2)}\n` : `${formatSheet(windingInputFromSheet(sheet).winding, r.value, findings, cmd.orders)}\n`);
+  process.stdout.write(
+    cmd.json
+      ? `${JSON.stringify({ ...r.value, findings }, null, 2)}\n`
+      : `${formatSheet(windingInputFromSheet(sheet).winding, r.value, findings, cmd.orders)}\n`,
+  );
 }
 
 main(process.argv.slice(2));

@@ -15,9 +15,10 @@ async function main(): Promise<number> {
     return 2;
   }
   const config = readDbConfig();
-  const applied = config.engine === 'postgres'
-    ? await restorePostgres(file, config.url, () => postgresRunner(config.url))
-    : await restorePglite(file, config.dataDir);
+  const applied =
+    config.engine === 'postgres'
+      ? await restorePostgres(file, config.url, () => postgresRunner(config.url))
+      : await restorePglite(file, config.dataDir);
   console.log(`Restored ${file}. Migration check passed${applied.length ? `; applied newer migrations: ${applied.join(', ')}` : ''}.`);
   return 0;
 }

@@ -26,13 +26,20 @@ if (built < Math.max(...sources.map(newestMtime))) {
 }
 
 console.log(`Starting Coilwright on http://${host}:${port} …`);
-console.log(process.env.DATABASE_URL ? 'Database: PostgreSQL from DATABASE_URL' : `Database: embedded, in ${process.env.COILWRIGHT_DATA_DIR ?? './data/pglite'}`);
+console.log(
+  process.env.DATABASE_URL
+    ? 'Database: PostgreSQL from DATABASE_URL'
+    : `Database: embedded, in ${process.env.COILWRIGHT_DATA_DIR ?? './data/pglite'}`,
+);
 // A heap cap for the server's JavaScript heap: measured use stays well below it (README, "Memory"), and a cap
 // makes the collector work before the process grows rather than after. PDF workers have their own cap.
 // An explicit NODE_OPTIONS from the environment wins.
 const HEAP_CAP_MB = 320;
 const nodeOptions = process.env.NODE_OPTIONS ?? `--max-old-space-size=${HEAP_CAP_MB}`;
-const server = spawn(process.execPath, [join('scripts', 'serve.mjs')], { stdio: 'inherit', env: { ...process.env, PORT: port, HOST: host, NODE_OPTIONS: nodeOptions } });
+const server = spawn(process.execPath, [join('scripts', 'serve.mjs')], {
+  stdio: 'inherit',
+  env: { ...process.env, PORT: port, HOST: host, NODE_OPTIONS: nodeOptions },
+});
 const stop = (signal) => server.kill(signal);
 process.on('SIGINT', stop);
 process.on('SIGTERM', stop);

@@ -25,13 +25,17 @@ function run(title, cmd, args, env = {}) {
 if (!existsSync(chromium)) {
   if (process.getuid?.() === 0) run('install Chromium from Debian', 'bash', ['scripts/ensure-chromium.sh']);
   else {
-    console.error(`Chromium is needed for the browser tests: install Debian's package (sudo apt-get install -y chromium) or set CHROMIUM_PATH.`);
+    console.error(
+      `Chromium is needed for the browser tests: install Debian's package (sudo apt-get install -y chromium) or set CHROMIUM_PATH.`,
+    );
     process.exit(1);
   }
 }
 
 const vitest = (project, env, title) => run(title, bin('vitest'), ['run', '--project', project], env);
 run('typecheck', bin('tsc'), ['--noEmit', '-p', '.']);
+run('lint', bin('eslint'), ['.']);
+run('format check', bin('prettier'), ['--check', '.']);
 vitest('unit', {}, 'unit tests');
 vitest('integration', { INTEGRATION_DB: 'pglite' }, 'integration tests, embedded PostgreSQL (PGlite)');
 if (pg) vitest('integration', { INTEGRATION_DB: 'postgres' }, 'integration tests, PostgreSQL');

@@ -22,7 +22,11 @@ export function Field({ id, label, unit, hint, error, className, children }: Fie
         {label} {unit && <span className="unit">({unit})</span>}
       </label>
       {children}
-      {hint && <p id={`${id}-hint`} className="hint">{hint}</p>}
+      {hint && (
+        <p id={`${id}-hint`} className="hint">
+          {hint}
+        </p>
+      )}
       {error && (
         <p id={`${id}-error`} className="field-error">
           {error}

@@ -19,7 +19,11 @@ function errorAt(errors: FieldErrors<AnyForm>, path: string): string | undefined
  * (e.g. "motor"). Output takes kW or hp; the server stores kW.
  */
 export function NameplateFields({
-  prefix, register, errors, frequencyHz, speedRpm,
+  prefix,
+  register,
+  errors,
+  frequencyHz,
+  speedRpm,
 }: {
   prefix: string;
   register: UseFormRegister<AnyForm>;
@@ -40,15 +44,26 @@ export function NameplateFields({
     <fieldset>
       <legend>Motor and nameplate</legend>
       <div className="grid">
-        <p className="small wide" id={id('required-note')}>Fields marked * are required. A plate that cannot be read: tick “Plate unreadable”; rated voltage, frequency and speed may then be left blank and are recorded as unknown (write “unknown” as the manufacturer if that is unreadable too).</p>
-        <label className="wide"><input type="checkbox" {...register(p('plateUnreadable'))} /> Plate unreadable</label>
+        <p className="small wide" id={id('required-note')}>
+          Fields marked * are required. A plate that cannot be read: tick “Plate unreadable”; rated voltage, frequency and speed may then be
+          left blank and are recorded as unknown (write “unknown” as the manufacturer if that is unreadable too).
+        </p>
+        <label className="wide">
+          <input type="checkbox" {...register(p('plateUnreadable'))} /> Plate unreadable
+        </label>
         {text('manufacturer', 'Manufacturer *')}
         {text('model', 'Model / type')}
         {text('serial', 'Serial number')}
         {text('frame', 'Frame')}
         <Field id={id('outputValue')} label="Rated output" unit="kW or hp" error={e('outputValue')}>
           <div className="with-unit">
-            <input {...register(p('outputValue'))} {...describe(id('outputValue'), e('outputValue'))} type="number" step="any" inputMode="decimal" />
+            <input
+              {...register(p('outputValue'))}
+              {...describe(id('outputValue'), e('outputValue'))}
+              type="number"
+              step="any"
+              inputMode="decimal"
+            />
             <select {...register(p('outputUnit'))} aria-label="Output unit">
               <option value="kW">kW</option>
               <option value="hp">hp</option>
@@ -58,9 +73,16 @@ export function NameplateFields({
         {num('ratedVoltageV', 'Rated voltage *', 'V', 'Line voltage the winding is connected for')}
         {text('voltages', 'All nameplate voltages', 'e.g. 230/460 or 400/690')}
         <Field id={id('connection')} label="Connection" error={e('connection')}>
-          <select {...register(p('connection'), { setValueAs: (v: string) => (v === '' ? undefined : v) })} {...describe(id('connection'), e('connection'))}>
+          <select
+            {...register(p('connection'), { setValueAs: (v: string) => (v === '' ? undefined : v) })}
+            {...describe(id('connection'), e('connection'))}
+          >
             <option value="">Not stated</option>
-            {CONNECTIONS.map((c) => <option key={c} value={c}>{CONNECTION_LABELS[c]}</option>)}
+            {CONNECTIONS.map((c) => (
+              <option key={c} value={c}>
+                {CONNECTION_LABELS[c]}
+              </option>
+            ))}
           </select>
         </Field>
         {num('currentA', 'Full-load current', 'A')}
@@ -79,7 +101,11 @@ export function NameplateFields({
         <Field id={id('insulationClass')} label="Insulation class" error={e('insulationClass')}>
           <select {...register(p('insulationClass'))} {...describe(id('insulationClass'), e('insulationClass'))}>
             <option value="">Not stated</option>
-            {INSULATION_CLASSES.map((c) => <option key={c} value={c}>Class {c}</option>)}
+            {INSULATION_CLASSES.map((c) => (
+              <option key={c} value={c}>
+                Class {c}
+              </option>
+            ))}
           </select>
         </Field>
         {text('duty', 'Duty', 'S1 … S10, or continuous')}

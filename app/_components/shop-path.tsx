@@ -15,7 +15,10 @@ export function ShopPath({ status, heldFrom }: { status: JobStatus; heldFrom: Jo
         <li key={s} className={`step ${state.replace(' ', '-')}`} aria-current={state === 'current' ? 'step' : undefined}>
           <span className="step-name">{STATUS_LABELS[s]}</span>
           <span className="sr-only">, </span>
-          <span className="step-state">{state === 'done' && <span aria-hidden="true">✓ </span>}{state}</span>
+          <span className="step-state">
+            {state === 'done' && <span aria-hidden="true">✓ </span>}
+            {state}
+          </span>
         </li>
       ))}
       {!onPath && (

@@ -12,7 +12,10 @@ export default async function Denied({ searchParams }: { searchParams: Promise<R
   return (
     <div className="card">
       <h1>Not allowed for your role</h1>
-      <p>{what ? `Your role does not allow you to ${what}.` : 'This page is for another role in the shop.'} Ask your administrator if you need it.</p>
+      <p>
+        {what ? `Your role does not allow you to ${what}.` : 'This page is for another role in the shop.'} Ask your administrator if you
+        need it.
+      </p>
       <p>
         <Link href="/jobs">Back to the job board</Link>
       </p>

@@ -2,7 +2,10 @@
 
 import { useEffect, useId, useRef, useState } from 'react';
 
-interface Option { id: string; company: string }
+interface Option {
+  id: string;
+  company: string;
+}
 
 /**
  * The board's customer filter: type part of a name and matching customers load on demand from
@@ -32,7 +35,11 @@ export function CustomerFilter({ initialId, initialName }: { initialId?: string;
         if (!res.ok) return setStatus('Customers could not be loaded.');
         const body: { customers: Option[] } = await res.json();
         setOptions(body.customers);
-        setStatus(body.customers.length ? `${body.customers.length} customer${body.customers.length === 1 ? '' : 's'} found` : 'No customer matches');
+        setStatus(
+          body.customers.length
+            ? `${body.customers.length} customer${body.customers.length === 1 ? '' : 's'} found`
+            : 'No customer matches',
+        );
       } catch {
         setStatus('Customers could not be loaded.');
       }
@@ -53,10 +60,14 @@ export function CustomerFilter({ initialId, initialName }: { initialId?: string;
         onChange={(e) => onChange(e.target.value)}
       />
       <datalist id={listId}>
-        {options.map((o) => <option key={o.id} value={o.company} />)}
+        {options.map((o) => (
+          <option key={o.id} value={o.company} />
+        ))}
       </datalist>
       <input type="hidden" name="customerId" value={id} />
-      <div id={`${listId}-status`} className="small muted" aria-live="polite">{status}</div>
+      <div id={`${listId}-status`} className="small muted" aria-live="polite">
+        {status}
+      </div>
     </div>
   );
 }

@@ -23,7 +23,9 @@ function toSearch(q: LibraryQuery, unit: LengthUnit): LibrarySearch {
   const length = q.length === undefined ? undefined : lengthToMm(q.length, unit);
   const boreTol = q.boreTol === undefined ? LIBRARY_DEFAULT_TOLERANCE.boreMm : lengthToMm(q.boreTol, unit);
   const lengthTol = q.lengthTol === undefined ? LIBRARY_DEFAULT_TOLERANCE.lengthMm : lengthToMm(q.lengthTol, unit);
-  const s: LibrarySearch = { target: { ...(bore !== undefined ? { boreMm: bore } : {}), ...(length !== undefined ? { coreLengthMm: length } : {}) } };
+  const s: LibrarySearch = {
+    target: { ...(bore !== undefined ? { boreMm: bore } : {}), ...(length !== undefined ? { coreLengthMm: length } : {}) },
+  };
   if (q.slots !== undefined) s.slots = q.slots;
   if (q.poles !== undefined) s.poles = q.poles;
   const b = around(bore, boreTol);
@@ -43,7 +45,11 @@ const COMPARE_ROWS: [string, (s: WindingSheet, u: LengthUnit) => string][] = [
   ['Bore', (s, u) => `${mmToLength(s.core.boreMm, u)} ${u}`],
   ['Core length', (s, u) => `${mmToLength(s.core.coreLengthMm, u)} ${u}`],
   ['Outside diameter', (s, u) => `${mmToLength(s.core.outsideDiameterMm, u)} ${u}`],
-  ['Slot depth × widths', (s, u) => `${mmToLength(s.core.slotDepthMm, u)} × ${mmToLength(s.core.slotWidthTopMm, u)}/${mmToLength(s.core.slotWidthBottomMm, u)} ${u}`],
+  [
+    'Slot depth × widths',
+    (s, u) =>
+      `${mmToLength(s.core.slotDepthMm, u)} × ${mmToLength(s.core.slotWidthTopMm, u)}/${mmToLength(s.core.slotWidthBottomMm, u)} ${u}`,
+  ],
   ['Tooth width', (s, u) => `${mmToLength(s.core.toothWidthMm, u)} ${u}`],
   ['Layout', (s) => `${layoutLabel(s.winding)}`],
   ['Spans', (s) => spansLabel(s.winding.spans)],
@@ -64,29 +70,96 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
   const [result, compared] = await Promise.all([searched ? searchLibrary(toSearch(q, unit)) : null, getLibrarySheets(q.compare)]);
   const mayUse = q.forJob !== undefined && can(user.role, 'sheet.edit');
   const val = (v: number | string | undefined) => (v === undefined ? '' : String(v));
-  const keep = Object.entries({ slots: q.slots, poles: q.poles, bore: q.bore, boreTol: q.boreTol, length: q.length, lengthTol: q.lengthTol, kw: q.kw, volts: q.volts, q: q.q, forJob: q.forJob, unit })
-    .filter(([, v]) => v !== undefined) as [string, string | number][];
+  const keep = Object.entries({
+    slots: q.slots,
+    poles: q.poles,
+    bore: q.bore,
+    boreTol: q.boreTol,
+    length: q.length,
+    lengthTol: q.lengthTol,
+    kw: q.kw,
+    volts: q.volts,
+    q: q.q,
+    forJob: q.forJob,
+    unit,
+  }).filter(([, v]) => v !== undefined) as [string, string | number][];
 
   return (
     <>
       <h1>Winding library</h1>
-      <p className="muted">Every data sheet recorded in the shop. Find an earlier motor with the same core to rewind from{q.forJob ? ` — matches for job ${q.forJob}` : ''}.</p>
+      <p className="muted">
+        Every data sheet recorded in the shop. Find an earlier motor with the same core to rewind from
+        {q.forJob ? ` — matches for job ${q.forJob}` : ''}.
+      </p>
       <form method="get" className="card no-print" aria-label="Search the winding library">
         {q.forJob !== undefined && <input type="hidden" name="forJob" value={q.forJob} />}
         <input type="hidden" name="unit" value={unit} />
         <div className="grid">
-          <div><label htmlFor="l-slots">Stator slots</label><input id="l-slots" name="slots" inputMode="numeric" defaultValue={val(q.slots)} /></div>
-          <div><label htmlFor="l-poles">Poles</label><input id="l-poles" name="poles" inputMode="numeric" defaultValue={val(q.poles)} /></div>
-          <div><label htmlFor="l-bore">Bore <span className="unit">({unit})</span></label><input id="l-bore" name="bore" inputMode="decimal" defaultValue={val(q.bore)} /></div>
-          <div><label htmlFor="l-boreTol">Bore ± <span className="unit">({unit})</span></label><input id="l-boreTol" name="boreTol" inputMode="decimal" placeholder={String(mmToLength(LIBRARY_DEFAULT_TOLERANCE.boreMm, unit))} defaultValue={val(q.boreTol)} /></div>
-          <div><label htmlFor="l-length">Core length <span className="unit">({unit})</span></label><input id="l-length" name="length" inputMode="decimal" defaultValue={val(q.length)} /></div>
-          <div><label htmlFor="l-lengthTol">Core length ± <span className="unit">({unit})</span></label><input id="l-lengthTol" name="lengthTol" inputMode="decimal" placeholder={String(mmToLength(LIBRARY_DEFAULT_TOLERANCE.lengthMm, unit))} defaultValue={val(q.lengthTol)} /></div>
-          <div><label htmlFor="l-kw">Output <span className="unit">(kW, ±{LIBRARY_DEFAULT_TOLERANCE.kwPct} %)</span></label><input id="l-kw" name="kw" inputMode="decimal" defaultValue={val(q.kw)} /></div>
-          <div><label htmlFor="l-volts">Line voltage <span className="unit">(V, ±{LIBRARY_DEFAULT_TOLERANCE.voltsPct} %)</span></label><input id="l-volts" name="volts" inputMode="decimal" defaultValue={val(q.volts)} /></div>
-          <div><label htmlFor="l-q">Manufacturer or model</label><input id="l-q" name="q" defaultValue={q.q ?? ''} /></div>
+          <div>
+            <label htmlFor="l-slots">Stator slots</label>
+            <input id="l-slots" name="slots" inputMode="numeric" defaultValue={val(q.slots)} />
+          </div>
+          <div>
+            <label htmlFor="l-poles">Poles</label>
+            <input id="l-poles" name="poles" inputMode="numeric" defaultValue={val(q.poles)} />
+          </div>
+          <div>
+            <label htmlFor="l-bore">
+              Bore <span className="unit">({unit})</span>
+            </label>
+            <input id="l-bore" name="bore" inputMode="decimal" defaultValue={val(q.bore)} />
+          </div>
+          <div>
+            <label htmlFor="l-boreTol">
+              Bore ± <span className="unit">({unit})</span>
+            </label>
+            <input
+              id="l-boreTol"
+              name="boreTol"
+              inputMode="decimal"
+              placeholder={String(mmToLength(LIBRARY_DEFAULT_TOLERANCE.boreMm, unit))}
+              defaultValue={val(q.boreTol)}
+            />
+          </div>
+          <div>
+            <label htmlFor="l-length">
+              Core length <span className="unit">({unit})</span>
+            </label>
+            <input id="l-length" name="length" inputMode="decimal" defaultValue={val(q.length)} />
+          </div>
+          <div>
+            <label htmlFor="l-lengthTol">
+              Core length ± <span className="unit">({unit})</span>
+            </label>
+            <input
+              id="l-lengthTol"
+              name="lengthTol"
+              inputMode="decimal"
+              placeholder={String(mmToLength(LIBRARY_DEFAULT_TOLERANCE.lengthMm, unit))}
+              defaultValue={val(q.lengthTol)}
+            />
+          </div>
+          <div>
+            <label htmlFor="l-kw">
+              Output <span className="unit">(kW, ±{LIBRARY_DEFAULT_TOLERANCE.kwPct} %)</span>
+            </label>
+            <input id="l-kw" name="kw" inputMode="decimal" defaultValue={val(q.kw)} />
+          </div>
+          <div>
+            <label htmlFor="l-volts">
+              Line voltage <span className="unit">(V, ±{LIBRARY_DEFAULT_TOLERANCE.voltsPct} %)</span>
+            </label>
+            <input id="l-volts" name="volts" inputMode="decimal" defaultValue={val(q.volts)} />
+          </div>
+          <div>
+            <label htmlFor="l-q">Manufacturer or model</label>
+            <input id="l-q" name="q" defaultValue={q.q ?? ''} />
+          </div>
         </div>
         <p className="row" style={{ marginTop: '0.75rem' }}>
-          <button className="btn" type="submit">Search</button>
+          <button className="btn" type="submit">
+            Search
+          </button>
           <Link href={`/library${q.forJob ? `?forJob=${q.forJob}` : ''}`}>Clear</Link>
           <span className="small muted">Lengths in {unit === 'mm' ? 'millimetres' : 'inches'} (your sheet setting).</span>
         </p>
@@ -96,18 +169,56 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
         <section className="card" aria-labelledby="cmp-h">
           <h2 id="cmp-h">Side by side</h2>
           <TableScroll label="Sheets side by side">
-          <table className="side-by-side">
-            <caption className="sr-only">Sheets side by side; rows where they differ are marked “differs”</caption>
-            <thead><tr><th scope="col">Job</th>{compared.map((c) => <th key={c.id} scope="col"><Link href={jobRoutes(c.jobNumber).asFoundPrint}>Job {c.jobNumber}</Link> <span className="muted">{c.manufacturer} {c.model}</span></th>)}</tr></thead>
-            <tbody>
-              {COMPARE_ROWS.map(([label, f]) => {
-                const cells = compared.map((c) => f(c.sheet, unit));
-                const differ = new Set(cells).size > 1;
-                return <tr key={label} className={differ ? 'differs' : undefined}><th scope="row">{label}{differ && <> <span className="tag differs-tag"><span aria-hidden="true">≠ </span>differs</span></>}</th>{cells.map((v, i) => <td key={compared[i]!.id}>{v}</td>)}</tr>;
-              })}
-              {mayUse && <tr><th scope="row">Use</th>{compared.map((c) => <td key={c.id}><UseForJob jobNumber={q.forJob!} sheetId={c.id} from={c.jobNumber} /></td>)}</tr>}
-            </tbody>
-          </table>
+            <table className="side-by-side">
+              <caption className="sr-only">Sheets side by side; rows where they differ are marked “differs”</caption>
+              <thead>
+                <tr>
+                  <th scope="col">Job</th>
+                  {compared.map((c) => (
+                    <th key={c.id} scope="col">
+                      <Link href={jobRoutes(c.jobNumber).asFoundPrint}>Job {c.jobNumber}</Link>{' '}
+                      <span className="muted">
+                        {c.manufacturer} {c.model}
+                      </span>
+                    </th>
+                  ))}
+                </tr>
+              </thead>
+              <tbody>
+                {COMPARE_ROWS.map(([label, f]) => {
+                  const cells = compared.map((c) => f(c.sheet, unit));
+                  const differ = new Set(cells).size > 1;
+                  return (
+                    <tr key={label} className={differ ? 'differs' : undefined}>
+                      <th scope="row">
+                        {label}
+                        {differ && (
+                          <>
+                            {' '}
+                            <span className="tag differs-tag">
+                              <span aria-hidden="true">≠ </span>differs
+                            </span>
+                          </>
+                        )}
+                      </th>
+                      {cells.map((v, i) => (
+                        <td key={compared[i]!.id}>{v}</td>
+                      ))}
+                    </tr>
+                  );
+                })}
+                {mayUse && (
+                  <tr>
+                    <th scope="row">Use</th>
+                    {compared.map((c) => (
+                      <td key={c.id}>
+                        <UseForJob jobNumber={q.forJob!} sheetId={c.id} from={c.jobNumber} />
+                      </td>
+                    ))}
+                  </tr>
+                )}
+              </tbody>
+            </table>
           </TableScroll>
           <p className="small muted">Rows where the sheets differ are marked “≠ differs”, with a heavier left rule and shading.</p>
         </section>
@@ -115,40 +226,99 @@ export default async function LibraryPage({ searchParams }: { searchParams: Prom
 
       {result && (
         <section className="card" aria-labelledby="res-h">
-          <h2 id="res-h">{result.rows.length === 0 ? 'No matching sheets' : `${result.rows.length}${result.more ? '+' : ''} matching sheet${result.rows.length === 1 ? '' : 's'}`}{result.more ? ' (closest shown; narrow the search for more)' : ''}</h2>
+          <h2 id="res-h">
+            {result.rows.length === 0
+              ? 'No matching sheets'
+              : `${result.rows.length}${result.more ? '+' : ''} matching sheet${result.rows.length === 1 ? '' : 's'}`}
+            {result.more ? ' (closest shown; narrow the search for more)' : ''}
+          </h2>
           {result.rows.length > 0 && (
             <form method="get" aria-label="Compare sheets">
-              {keep.map(([k, v]) => <input key={k} type="hidden" name={k} value={String(v)} />)}
+              {keep.map(([k, v]) => (
+                <input key={k} type="hidden" name={k} value={String(v)} />
+              ))}
               <TableScroll label="Matching sheets">
-              <table>
-                <thead>
-                  <tr>
-                    <th scope="col">Compare</th><th scope="col">Job</th><th scope="col">Motor</th><th scope="col" className="num">Slots</th><th scope="col" className="num">Poles</th>
-                    <th scope="col" className="num">Bore ({unit})</th><th scope="col" className="num">Length ({unit})</th><th scope="col" className="num">Output</th><th scope="col" className="num">Supply</th><th scope="col">Saved</th>{mayUse && <th scope="col" />}
-                  </tr>
-                </thead>
-                <tbody>
-                  {result.rows.map((r) => (
-                    <tr key={r.id}>
-                      <td><label className="check"><input type="checkbox" name="compare" value={r.id} defaultChecked={q.compare.includes(r.id)} aria-label={`Compare job ${r.jobNumber}`} /></label></td>
-                      <td><Link href={jobRoutes(r.jobNumber).asFoundPrint}>{r.jobNumber}</Link></td>
-                      <td>{r.manufacturer ?? '—'} {r.model ?? ''}</td>
-                      <td className="num">{r.slots}</td><td className="num">{r.poles}</td>
-                      <td className="num">{mmToLength(r.boreMm, unit)}</td><td className="num">{mmToLength(r.coreLengthMm, unit)}</td>
-                      <td className="num">{fmt.num(r.outputKw, 2, 'kW')}</td><td className="num">{fmt.num(r.lineVoltageV, 0, 'V')} {fmt.num(r.frequencyHz, 0, 'Hz')}</td>
-                      <td>{fmt.date(r.updatedAt)} · r{r.revision}</td>
-                      {mayUse && <td><UseForJob jobNumber={q.forJob!} sheetId={r.id} from={r.jobNumber} /></td>}
+                <table>
+                  <thead>
+                    <tr>
+                      <th scope="col">Compare</th>
+                      <th scope="col">Job</th>
+                      <th scope="col">Motor</th>
+                      <th scope="col" className="num">
+                        Slots
+                      </th>
+                      <th scope="col" className="num">
+                        Poles
+                      </th>
+                      <th scope="col" className="num">
+                        Bore ({unit})
+                      </th>
+                      <th scope="col" className="num">
+                        Length ({unit})
+                      </th>
+                      <th scope="col" className="num">
+                        Output
+                      </th>
+                      <th scope="col" className="num">
+                        Supply
+                      </th>
+                      <th scope="col">Saved</th>
+                      {mayUse && <th scope="col" />}
                     </tr>
-                  ))}
-                </tbody>
-              </table>
+                  </thead>
+                  <tbody>
+                    {result.rows.map((r) => (
+                      <tr key={r.id}>
+                        <td>
+                          <label className="check">
+                            <input
+                              type="checkbox"
+                              name="compare"
+                              value={r.id}
+                              defaultChecked={q.compare.includes(r.id)}
+                              aria-label={`Compare job ${r.jobNumber}`}
+                            />
+                          </label>
+                        </td>
+                        <td>
+                          <Link href={jobRoutes(r.jobNumber).asFoundPrint}>{r.jobNumber}</Link>
+                        </td>
+                        <td>
+                          {r.manufacturer ?? '—'} {r.model ?? ''}
+                        </td>
+                        <td className="num">{r.slots}</td>
+                        <td className="num">{r.poles}</td>
+                        <td className="num">{mmToLength(r.boreMm, unit)}</td>
+                        <td className="num">{mmToLength(r.coreLengthMm, unit)}</td>
+                        <td className="num">{fmt.num(r.outputKw, 2, 'kW')}</td>
+                        <td className="num">
+                          {fmt.num(r.lineVoltageV, 0, 'V')} {fmt.num(r.frequencyHz, 0, 'Hz')}
+                        </td>
+                        <td>
+                          {fmt.date(r.updatedAt)} · r{r.revision}
+                        </td>
+                        {mayUse && (
+                          <td>
+                            <UseForJob jobNumber={q.forJob!} sheetId={r.id} from={r.jobNumber} />
+                          </td>
+                        )}
+                      </tr>
+                    ))}
+                  </tbody>
+                </table>
               </TableScroll>
-              <p className="row" style={{ marginTop: '0.5rem' }}><button type="submit" className="btn secondary">Compare selected (2–3)</button></p>
+              <p className="row" style={{ marginTop: '0.5rem' }}>
+                <button type="submit" className="btn secondary">
+                  Compare selected (2–3)
+                </button>
+              </p>
             </form>
           )}
         </section>
       )}
-      {!searched && compared.length === 0 && <p className="muted">Search by any of the fields above; slots and poles with bore narrow it fastest.</p>}
+      {!searched && compared.length === 0 && (
+        <p className="muted">Search by any of the fields above; slots and poles with bore narrow it fastest.</p>
+      )}
     </>
   );
 }

@@ -29,7 +29,11 @@ export function UseForJob({ jobNumber, sheetId, from }: { jobNumber: number; she
         {/* The name starts with the visible words (WCAG 2.5.3) and says which sheet. */}
         <span className="sr-only"> (job {from}’s sheet)</span>
       </button>
-      {error && <span role="alert" className="field-error">{error}</span>}
+      {error && (
+        <span role="alert" className="field-error">
+          {error}
+        </span>
+      )}
     </>
   );
 }

@@ -14,18 +14,37 @@ export function SignInForm({ next }: { next: string | undefined }) {
       <p>
         <label htmlFor="email">Email</label>
         <input
-          id="email" name="email" type="email" autoComplete="username" required defaultValue={state.email}
-          aria-invalid={!!state.fieldErrors?.email} aria-describedby={state.fieldErrors?.email ? 'email-error' : undefined}
+          id="email"
+          name="email"
+          type="email"
+          autoComplete="username"
+          required
+          defaultValue={state.email}
+          aria-invalid={!!state.fieldErrors?.email}
+          aria-describedby={state.fieldErrors?.email ? 'email-error' : undefined}
         />
-        {state.fieldErrors?.email && <span id="email-error" className="field-error">{state.fieldErrors.email}</span>}
+        {state.fieldErrors?.email && (
+          <span id="email-error" className="field-error">
+            {state.fieldErrors.email}
+          </span>
+        )}
       </p>
       <p>
         <label htmlFor="password">Password</label>
         <input
-          id="password" name="password" type="password" autoComplete="current-password" required
-          aria-invalid={!!state.fieldErrors?.password} aria-describedby={state.fieldErrors?.password ? 'password-error' : undefined}
+          id="password"
+          name="password"
+          type="password"
+          autoComplete="current-password"
+          required
+          aria-invalid={!!state.fieldErrors?.password}
+          aria-describedby={state.fieldErrors?.password ? 'password-error' : undefined}
         />
-        {state.fieldErrors?.password && <span id="password-error" className="field-error">{state.fieldErrors.password}</span>}
+        {state.fieldErrors?.password && (
+          <span id="password-error" className="field-error">
+            {state.fieldErrors.password}
+          </span>
+        )}
       </p>
       <button className="btn" type="submit" disabled={pending}>
         {pending ? 'Signing in…' : 'Sign in'}

@@ -13,13 +13,20 @@ import { FormStatus } from '@/app/_components/form-status';
 import { callAction } from '@/lib/errors/call-action';
 
 const FIELDS: [keyof LimitsForm, string, string][] = [
-  ['gapRisePercent', 'Gap density may rise by', '%'], ['gapFallPercent', 'Gap density may fall by', '%'],
-  ['toothRisePercent', 'Tooth density may rise by', '%'], ['toothFallPercent', 'Tooth density may fall by', '%'],
-  ['yokeRisePercent', 'Yoke density may rise by', '%'], ['yokeFallPercent', 'Yoke density may fall by', '%'],
-  ['currentDensityRisePercent', 'Current density may rise by', '%'], ['currentDensityMaxAPerMm2', 'Current density at most', 'A/mm²'],
-  ['slotFillMaxPercent', 'Slot fill at most', '% of gross area'], ['maxStrandsInHand', 'Wires in hand at most', 'strands'],
-  ['maxWireSizes', 'Sizes per conductor at most', '1–3'], ['mixedSizeRatioMax', 'Mixed sizes: diameter ratio at most', '×'],
-  ['minWireBareMm', 'Thinnest wire without a ranking penalty', 'mm bare'], ['harmonicKwMax', 'k_w5 and k_w7 at most', ''],
+  ['gapRisePercent', 'Gap density may rise by', '%'],
+  ['gapFallPercent', 'Gap density may fall by', '%'],
+  ['toothRisePercent', 'Tooth density may rise by', '%'],
+  ['toothFallPercent', 'Tooth density may fall by', '%'],
+  ['yokeRisePercent', 'Yoke density may rise by', '%'],
+  ['yokeFallPercent', 'Yoke density may fall by', '%'],
+  ['currentDensityRisePercent', 'Current density may rise by', '%'],
+  ['currentDensityMaxAPerMm2', 'Current density at most', 'A/mm²'],
+  ['slotFillMaxPercent', 'Slot fill at most', '% of gross area'],
+  ['maxStrandsInHand', 'Wires in hand at most', 'strands'],
+  ['maxWireSizes', 'Sizes per conductor at most', '1–3'],
+  ['mixedSizeRatioMax', 'Mixed sizes: diameter ratio at most', '×'],
+  ['minWireBareMm', 'Thinnest wire without a ranking penalty', 'mm bare'],
+  ['harmonicKwMax', 'k_w5 and k_w7 at most', ''],
 ];
 
 /** The shop's redesign limits (administrators only); saving names the version it was loaded from. */
@@ -28,7 +35,13 @@ export function SettingsForm({ version, defaults, starting }: { version: number;
   const [pending, startTransition] = useTransition();
   const [base, setBase] = useState(version);
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad'; text: string } | null>(null);
-  const { register, handleSubmit, setError, reset, formState: { errors } } = useForm<ShopSettingsInput, unknown, z.output<typeof shopSettingsSchema>>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    reset,
+    formState: { errors },
+  } = useForm<ShopSettingsInput, unknown, z.output<typeof shopSettingsSchema>>({
     resolver: zodResolver(shopSettingsSchema),
     defaultValues: { version, limits: defaults },
   });
@@ -54,12 +67,24 @@ export function SettingsForm({ version, defaults, starting }: { version: number;
       <FormStatus message={summary?.text} tone={summary?.tone ?? 'ok'} />
       <div className="grid">
         {FIELDS.map(([name, label, unit]) => (
-          <InputField key={name} id={`settings-${name}`} label={label} unit={unit} type="number" error={e?.[name]?.message} registration={register(`limits.${name}`)} />
+          <InputField
+            key={name}
+            id={`settings-${name}`}
+            label={label}
+            unit={unit}
+            type="number"
+            error={e?.[name]?.message}
+            registration={register(`limits.${name}`)}
+          />
         ))}
       </div>
       <div className="row" style={{ marginTop: '0.5rem' }}>
-        <button className="btn" type="submit" disabled={pending}>{pending ? 'Saving…' : 'Save shop limits'}</button>
-        <button type="button" className="btn quiet" onClick={() => reset({ version: base, limits: starting })}>Fill in the starting values</button>
+        <button className="btn" type="submit" disabled={pending}>
+          {pending ? 'Saving…' : 'Save shop limits'}
+        </button>
+        <button type="button" className="btn quiet" onClick={() => reset({ version: base, limits: starting })}>
+          Fill in the starting values
+        </button>
       </div>
     </form>
   );

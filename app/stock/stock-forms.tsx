@@ -16,7 +16,13 @@ export function AddStockForm() {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad'; text: string } | null>(null);
-  const { register, handleSubmit, setError, reset, formState: { errors } } = useForm<WireStockInput, unknown, WireStockEntry>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    reset,
+    formState: { errors },
+  } = useForm<WireStockInput, unknown, WireStockEntry>({
     resolver: zodResolver(wireStockSchema),
     defaultValues: { standard: 'metric', size: '', enamelGrade: 2, quantityKg: '', note: '' },
   });
@@ -45,7 +51,13 @@ export function AddStockForm() {
             <option value="awg">AWG (ASTM B258)</option>
           </select>
         </Field>
-        <InputField id="stock-size" label="Size" hint='Metric: bare diameter in mm, e.g. 0.85. AWG: gauge, e.g. 18.' error={errors.size?.message} registration={register('size')} />
+        <InputField
+          id="stock-size"
+          label="Size"
+          hint="Metric: bare diameter in mm, e.g. 0.85. AWG: gauge, e.g. 18."
+          error={errors.size?.message}
+          registration={register('size')}
+        />
         <Field id="stock-grade" label="Enamel grade" error={errors.enamelGrade?.message}>
           <select {...register('enamelGrade')} {...describe('stock-grade', errors.enamelGrade?.message)}>
             <option value={1}>1 (single build)</option>
@@ -53,10 +65,19 @@ export function AddStockForm() {
             <option value={3}>3 (triple build)</option>
           </select>
         </Field>
-        <InputField id="stock-quantity" label="On hand" unit="kg" type="number" error={errors.quantityKg?.message} registration={register('quantityKg')} />
+        <InputField
+          id="stock-quantity"
+          label="On hand"
+          unit="kg"
+          type="number"
+          error={errors.quantityKg?.message}
+          registration={register('quantityKg')}
+        />
         <InputField id="stock-note" label="Note" error={errors.note?.message} registration={register('note')} />
       </div>
-      <button className="btn" type="submit" disabled={pending} style={{ marginTop: '0.5rem' }}>{pending ? 'Adding…' : 'Add to stock'}</button>
+      <button className="btn" type="submit" disabled={pending} style={{ marginTop: '0.5rem' }}>
+        {pending ? 'Adding…' : 'Add to stock'}
+      </button>
     </form>
   );
 }
@@ -84,7 +105,11 @@ export function RemoveStockButton({ id, label }: { id: string; label: string }) 
       >
         {pending ? 'Removing…' : 'Remove'}
       </button>
-      {error && <span role="alert" className="field-error">{error}</span>}
+      {error && (
+        <span role="alert" className="field-error">
+          {error}
+        </span>
+      )}
     </span>
   );
 }

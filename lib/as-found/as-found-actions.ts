@@ -68,10 +68,16 @@ export async function copyLibrarySheetToJob(raw: unknown) {
     const parsed = source ? windingSheetSchema.safeParse(source.data) : null;
     if (!source || !parsed?.success) throw new DomainError('not-found', MESSAGES.notFound('data sheet'));
     const unit = await getLengthUnit(user.id);
-    const copied = sheetToForm({ ...parsed.data, resistance: undefined, notes: `Core and winding copied from job ${source.job.number}'s data sheet.` }, unit);
+    const copied = sheetToForm(
+      { ...parsed.data, resistance: undefined, notes: `Core and winding copied from job ${source.job.number}'s data sheet.` },
+      unit,
+    );
     const values = prefillFromNameplate(job.motor, copied);
     const draft: DraftPayload = { unit, values, ...(parsed.data.winding.slotTable ? { slotTable: parsed.data.winding.slotTable } : {}) };
     await saveDraft(user.id, job.id, draft);
-    return success({ jobNumber: input.jobNumber }, `Copied job ${source.job.number}'s core and winding into job ${input.jobNumber}'s sheet.`);
+    return success(
+      { jobNumber: input.jobNumber },
+      `Copied job ${source.job.number}'s core and winding into job ${input.jobNumber}'s sheet.`,
+    );
   })(raw);
 }

@@ -8,15 +8,23 @@
 import type { CoilSide } from '@/lib/engine/winding-layout';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { parseSpan } from '@/lib/engine/notation';
-import { mmToLength, parseTypedNumber, switchTypedLength, typedLengthToMm, type LengthUnit, type TypedLength, lengthToMm } from './length-entry';
+import { mmToLength, parseTypedNumber, switchTypedLength, typedLengthToMm, type LengthUnit, type TypedLength } from './length-entry';
 
 /** Per length field ("core.boreMm", "winding.meanTurnLengthMm"): what was typed before a unit switch. */
 export type LengthMemory = ReadonlyMap<string, TypedLength>;
 
 /** The core fields that are lengths (typed in mm or in). */
 export const CORE_LENGTH_FIELDS = [
-  'boreMm', 'coreLengthMm', 'outsideDiameterMm', 'slotDepthMm', 'slotWidthTopMm', 'slotWidthBottomMm', 'slotOpeningMm',
-  'toothWidthMm', 'ventDuctWidthMm', 'airGapMm',
+  'boreMm',
+  'coreLengthMm',
+  'outsideDiameterMm',
+  'slotDepthMm',
+  'slotWidthTopMm',
+  'slotWidthBottomMm',
+  'slotOpeningMm',
+  'toothWidthMm',
+  'ventDuctWidthMm',
+  'airGapMm',
 ] as const;
 /** The winding fields that are lengths. */
 export const WINDING_LENGTH_FIELDS = ['meanTurnLengthMm', 'coilExtensionMm'] as const;
@@ -71,8 +79,20 @@ export function emptySheetForm(): SheetFormValues {
   return {
     core,
     winding: {
-      layers: '2', style: 'lap', singleLayerCoiling: '', coils: [{ span: '', turns: '' }], coilsPerGroup: '', groups: '', parallelPaths: '1',
-      connection: '', leads: '', leadMarkings: '', jumperNotes: '', meanTurnLengthMm: '', coilExtensionMm: '', copperWeightKg: '',
+      layers: '2',
+      style: 'lap',
+      singleLayerCoiling: '',
+      coils: [{ span: '', turns: '' }],
+      coilsPerGroup: '',
+      groups: '',
+      parallelPaths: '1',
+      connection: '',
+      leads: '',
+      leadMarkings: '',
+      jumperNotes: '',
+      meanTurnLengthMm: '',
+      coilExtensionMm: '',
+      copperWeightKg: '',
     },
     wires: [blankWire()],
     insulation: { thermalClass: '', slotLiner: '', wedges: '', varnish: '' },
@@ -99,7 +119,12 @@ const compact = <T extends Record<string, unknown>>(o: T): Partial<T> =>
   Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined)) as Partial<T>;
 
 /** The form as the schema's input (metric, numbers); the schema itself judges it. */
-export function formToSheetInput(f: SheetFormValues, unit: LengthUnit, slotTable?: CoilSide[], memory?: LengthMemory): Record<string, unknown> {
+export function formToSheetInput(
+  f: SheetFormValues,
+  unit: LengthUnit,
+  slotTable?: CoilSide[],
+  memory?: LengthMemory,
+): Record<string, unknown> {
   const len = (path: string, v: string | undefined) => typedLengthToMm(v, unit, memory?.get(path));
   const core: Record<string, unknown> = {};
   for (const k of CORE_LENGTH_FIELDS) core[k] = len(`core.${k}`, f.core[k]);
@@ -112,7 +137,7 @@ export function formToSheetInput(f: SheetFormValues, unit: LengthUnit, slotTable
     winding: compact({
       layers: Number(w.layers),
       style: w.style,
-      singleLayerCoiling: w.layers === '1' ? (w.singleLayerCoiling || undefined) : undefined,
+      singleLayerCoiling: w.layers === '1' ? w.singleLayerCoiling || undefined : undefined,
       spans: w.coils.map((c) => span(c.span)),
       turnsPerCoil: w.coils.map((c) => num(c.turns)),
       coilsPerGroup: num(w.coilsPerGroup),
@@ -128,12 +153,22 @@ export function formToSheetInput(f: SheetFormValues, unit: LengthUnit, slotTable
       copperWeightKg: num(w.copperWeightKg),
     }),
     wires: f.wires.map((x) => ({ standard: x.standard, size: x.size.trim(), count: num(x.count), enamelGrade: Number(x.enamelGrade) })),
-    insulation: compact({ thermalClass: f.insulation.thermalClass || undefined, slotLiner: text(f.insulation.slotLiner), wedges: text(f.insulation.wedges), varnish: text(f.insulation.varnish) }),
-    supply: compact({
-      lineVoltageV: num(f.supply.lineVoltageV), frequencyHz: num(f.supply.frequencyHz), poles: num(f.supply.poles),
-      ratedCurrentA: num(f.supply.ratedCurrentA), ratedOutputKw: num(f.supply.ratedOutputKw),
+    insulation: compact({
+      thermalClass: f.insulation.thermalClass || undefined,
+      slotLiner: text(f.insulation.slotLiner),
+      wedges: text(f.insulation.wedges),
+      varnish: text(f.insulation.varnish),
     }),
-    resistance: resistanceGiven ? { readings: r.readings.map((x) => num(x)), temperatureC: num(r.temperatureC), between: r.between } : undefined,
+    supply: compact({
+      lineVoltageV: num(f.supply.lineVoltageV),
+      frequencyHz: num(f.supply.frequencyHz),
+      poles: num(f.supply.poles),
+      ratedCurrentA: num(f.supply.ratedCurrentA),
+      ratedOutputKw: num(f.supply.ratedOutputKw),
+    }),
+    resistance: resistanceGiven
+      ? { readings: r.readings.map((x) => num(x)), temperatureC: num(r.temperatureC), between: r.between }
+      : undefined,
     notes: text(f.notes),
   });
 }
@@ -152,18 +187,42 @@ export function sheetToForm(s: WindingSheet, unit: LengthUnit): SheetFormValues 
     style: w.style,
     singleLayerCoiling: w.singleLayerCoiling ?? '',
     coils: w.spans.map((span, i) => ({ span: String(span), turns: show(w.turnsPerCoil[i]) })),
-    coilsPerGroup: show(w.coilsPerGroup), groups: show(w.groups), parallelPaths: show(w.parallelPaths), connection: w.connection,
-    leads: show(w.leads), leadMarkings: w.leadMarkings ?? '', jumperNotes: w.jumperNotes ?? '',
-    meanTurnLengthMm: showLen(w.meanTurnLengthMm, unit), coilExtensionMm: showLen(w.coilExtensionMm, unit), copperWeightKg: show(w.copperWeightKg),
+    coilsPerGroup: show(w.coilsPerGroup),
+    groups: show(w.groups),
+    parallelPaths: show(w.parallelPaths),
+    connection: w.connection,
+    leads: show(w.leads),
+    leadMarkings: w.leadMarkings ?? '',
+    jumperNotes: w.jumperNotes ?? '',
+    meanTurnLengthMm: showLen(w.meanTurnLengthMm, unit),
+    coilExtensionMm: showLen(w.coilExtensionMm, unit),
+    copperWeightKg: show(w.copperWeightKg),
   };
-  f.wires = s.wires.map((x) => ({ standard: x.standard, size: x.size, count: String(x.count), enamelGrade: String(x.enamelGrade) as WireRowForm['enamelGrade'] }));
-  f.insulation = { thermalClass: s.insulation.thermalClass, slotLiner: s.insulation.slotLiner ?? '', wedges: s.insulation.wedges ?? '', varnish: s.insulation.varnish ?? '' };
+  f.wires = s.wires.map((x) => ({
+    standard: x.standard,
+    size: x.size,
+    count: String(x.count),
+    enamelGrade: String(x.enamelGrade) as WireRowForm['enamelGrade'],
+  }));
+  f.insulation = {
+    thermalClass: s.insulation.thermalClass,
+    slotLiner: s.insulation.slotLiner ?? '',
+    wedges: s.insulation.wedges ?? '',
+    varnish: s.insulation.varnish ?? '',
+  };
   f.supply = {
-    lineVoltageV: show(s.supply.lineVoltageV), frequencyHz: show(s.supply.frequencyHz), poles: show(s.supply.poles),
-    ratedCurrentA: show(s.supply.ratedCurrentA), ratedOutputKw: show(s.supply.ratedOutputKw),
+    lineVoltageV: show(s.supply.lineVoltageV),
+    frequencyHz: show(s.supply.frequencyHz),
+    poles: show(s.supply.poles),
+    ratedCurrentA: show(s.supply.ratedCurrentA),
+    ratedOutputKw: show(s.supply.ratedOutputKw),
   };
   if (s.resistance)
-    f.resistance = { readings: s.resistance.readings.map(String) as [string, string, string], temperatureC: String(s.resistance.temperatureC), between: s.resistance.between };
+    f.resistance = {
+      readings: s.resistance.readings.map(String) as [string, string, string],
+      temperatureC: String(s.resistance.temperatureC),
+      between: s.resistance.between,
+    };
   f.notes = s.notes ?? '';
   return f;
 }
@@ -173,7 +232,12 @@ export function sheetToForm(s: WindingSheet, unit: LengthUnit): SheetFormValues 
  * Switches every length field between mm and inches for display, remembering what was typed so that
  * switching back, or saving, uses the typed value (see switchTypedLength).
  */
-export function switchFormLengths(f: SheetFormValues, from: LengthUnit, to: LengthUnit, memory: LengthMemory): { values: SheetFormValues; memory: Map<string, TypedLength> } {
+export function switchFormLengths(
+  f: SheetFormValues,
+  from: LengthUnit,
+  to: LengthUnit,
+  memory: LengthMemory,
+): { values: SheetFormValues; memory: Map<string, TypedLength> } {
   const next = new Map<string, TypedLength>();
   const one = (path: string, text: string): string => {
     const r = switchTypedLength(text, from, to, memory.get(path));
@@ -206,7 +270,9 @@ export function savedLengthMemory(sheet: WindingSheet, unit: LengthUnit): [strin
   const mm = sheetToForm(sheet, 'mm');
   const shown = sheetToForm(sheet, unit);
   const out: [string, TypedLength][] = [];
-  for (const k of CORE_LENGTH_FIELDS) if (mm.core[k] !== '') out.push([`core.${k}`, { text: mm.core[k], unit: 'mm', shown: shown.core[k] }]);
-  for (const k of WINDING_LENGTH_FIELDS) if (mm.winding[k] !== '') out.push([`winding.${k}`, { text: mm.winding[k], unit: 'mm', shown: shown.winding[k] }]);
+  for (const k of CORE_LENGTH_FIELDS)
+    if (mm.core[k] !== '') out.push([`core.${k}`, { text: mm.core[k], unit: 'mm', shown: shown.core[k] }]);
+  for (const k of WINDING_LENGTH_FIELDS)
+    if (mm.winding[k] !== '') out.push([`winding.${k}`, { text: mm.winding[k], unit: 'mm', shown: shown.winding[k] }]);
   return out;
 }

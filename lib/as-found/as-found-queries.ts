@@ -45,7 +45,9 @@ export async function listSheetRevisions(sheetId: string) {
     take: 50,
   });
   const ids = [...new Set(rows.map((r) => r.savedById).filter((id): id is string => id !== null))];
-  const names = new Map((await db().user.findMany({ where: { id: { in: ids } }, select: { id: true, name: true } })).map((u) => [u.id, u.name]));
+  const names = new Map(
+    (await db().user.findMany({ where: { id: { in: ids } }, select: { id: true, name: true } })).map((u) => [u.id, u.name]),
+  );
   return rows.map((r) => ({ ...r, savedBy: r.savedById ? (names.get(r.savedById) ?? 'a removed user') : 'unknown' }));
 }
 
@@ -62,12 +64,24 @@ export async function getJobForSheet(number: number) {
   return db().job.findUnique({
     where: { number },
     select: {
-      id: true, number: true, status: true, heldFrom: true,
+      id: true,
+      number: true,
+      status: true,
+      heldFrom: true,
       customer: { select: { company: true } },
       motor: {
         select: {
-          manufacturer: true, model: true, serial: true, frame: true, ratedVoltageV: true, frequencyHz: true, speedRpm: true, currentA: true,
-          outputKw: true, connection: true, insulationClass: true,
+          manufacturer: true,
+          model: true,
+          serial: true,
+          frame: true,
+          ratedVoltageV: true,
+          frequencyHz: true,
+          speedRpm: true,
+          currentA: true,
+          outputKw: true,
+          connection: true,
+          insulationClass: true,
         },
       },
       attachments: { orderBy: { createdAt: 'asc' }, select: { id: true, kind: true, filename: true } },

@@ -19,10 +19,17 @@ type Tx = Prisma.TransactionClient;
 async function editableJob(tx: Tx, jobId: string) {
   const job = await tx.job.findUnique({
     where: { id: jobId },
-    select: { id: true, number: true, status: true, heldFrom: true, motor: { select: { manufacturer: true, model: true, outputKw: true } } },
+    select: {
+      id: true,
+      number: true,
+      status: true,
+      heldFrom: true,
+      motor: { select: { manufacturer: true, model: true, outputKw: true } },
+    },
   });
   if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
-  if (isRecordLocked('asFoundSheet', job.status, job.heldFrom)) throw new DomainError('frozen', SHEET_MESSAGES.frozen(STATUS_LABELS[job.status]));
+  if (isRecordLocked('asFoundSheet', job.status, job.heldFrom))
+    throw new DomainError('frozen', SHEET_MESSAGES.frozen(STATUS_LABELS[job.status]));
   return job;
 }
 
@@ -30,7 +37,11 @@ async function editableJob(tx: Tx, jobId: string) {
 function canonical(v: unknown): string {
   if (Array.isArray(v)) return `[${v.map(canonical).join(',')}]`;
   if (v && typeof v === 'object')
-    return `{${Object.entries(v as Record<string, unknown>).filter(([, x]) => x !== undefined).sort(([a], [b]) => (a < b ? -1 : 1)).map(([k, x]) => `${JSON.stringify(k)}:${canonical(x)}`).join(',')}}`;
+    return `{${Object.entries(v as Record<string, unknown>)
+      .filter(([, x]) => x !== undefined)
+      .sort(([a], [b]) => (a < b ? -1 : 1))
+      .map(([k, x]) => `${JSON.stringify(k)}:${canonical(x)}`)
+      .join(',')}}`;
   return JSON.stringify(v ?? null);
 }
 
@@ -56,12 +67,21 @@ export async function saveSheet(userId: string, input: SaveSheetInput): Promise<
       const s = input.sheet;
       const columns = {
         data: s as unknown as Prisma.InputJsonObject,
-        slots: s.core.slots, poles: s.supply.poles, boreMm: s.core.boreMm, coreLengthMm: s.core.coreLengthMm,
-        lineVoltageV: s.supply.lineVoltageV, frequencyHz: s.supply.frequencyHz,
+        slots: s.core.slots,
+        poles: s.supply.poles,
+        boreMm: s.core.boreMm,
+        coreLengthMm: s.core.coreLengthMm,
+        lineVoltageV: s.supply.lineVoltageV,
+        frequencyHz: s.supply.frequencyHz,
         outputKw: s.supply.ratedOutputKw ?? job.motor.outputKw ?? null,
-        manufacturer: job.motor.manufacturer || null, model: job.motor.model ?? null, updatedById: userId,
+        manufacturer: job.motor.manufacturer || null,
+        model: job.motor.model ?? null,
+        updatedById: userId,
       };
-      const existing = await tx.windingSheet.findUnique({ where: { jobId: input.jobId }, select: { id: true, revision: true, data: true } });
+      const existing = await tx.windingSheet.findUnique({
+        where: { jobId: input.jobId },
+        select: { id: true, revision: true, data: true },
+      });
       let sheetId: string;
       let revision: number;
       if (!existing) {
@@ -84,7 +104,9 @@ export async function saveSheet(userId: string, input: SaveSheetInput): Promise<
       const changed = existing ? changedSections(existing.data, s) : [];
       const summary = `${s.core.slots} slots, ${s.supply.poles} poles, ${layoutLabel(s.winding)}`;
       await recordJobEvent(tx, {
-        jobId: input.jobId, userId, kind: 'SHEET',
+        jobId: input.jobId,
+        userId,
+        kind: 'SHEET',
         message: existing
           ? `As-found data sheet revised (revision ${revision})${changed.length ? `: ${changed.join(', ')} changed` : ', no changes'}.`
           : `As-found data sheet recorded (revision 1): ${summary}.`,
@@ -94,7 +116,8 @@ export async function saveSheet(userId: string, input: SaveSheetInput): Promise<
     });
   } catch (err) {
     // Two first saves racing: the unique jobId refuses the second, which is a stale save like any other.
-    if (err instanceof Prisma.PrismaClientKnownRequestError && err.code === 'P2002') throw new DomainError('stale', SHEET_MESSAGES.staleCreated);
+    if (err instanceof Prisma.PrismaClientKnownRequestError && err.code === 'P2002')
+      throw new DomainError('stale', SHEET_MESSAGES.staleCreated);
     throw err;
   }
 }
@@ -104,7 +127,11 @@ export async function saveDraft(userId: string, jobId: string, draft: DraftPaylo
   return db().$transaction(async (tx) => {
     await editableJob(tx, jobId);
     const data = draft as unknown as Prisma.InputJsonObject;
-    const row = await tx.sheetDraft.upsert({ where: { jobId_userId: { jobId, userId } }, create: { jobId, userId, data }, update: { data } });
+    const row = await tx.sheetDraft.upsert({
+      where: { jobId_userId: { jobId, userId } },
+      create: { jobId, userId, data },
+      update: { data },
+    });
     return { savedAt: row.updatedAt };
   });
 }

@@ -35,4 +35,7 @@ export type DraftPayload = z.output<typeof draftPayloadSchema>;
 /** Saving a draft for one job. */
 export const draftSaveSchema = z
   .object({ jobId: z.uuid(), draft: draftPayloadSchema })
-  .refine((v) => JSON.stringify(v.draft).length <= MAX_DRAFT_BYTES, { message: `A draft may be at most ${MAX_DRAFT_BYTES / 1024} kB.`, path: ['draft'] });
+  .refine((v) => JSON.stringify(v.draft).length <= MAX_DRAFT_BYTES, {
+    message: `A draft may be at most ${MAX_DRAFT_BYTES / 1024} kB.`,
+    path: ['draft'],
+  });

@@ -21,8 +21,12 @@ export function restoreDraftValues(values: DraftPayload['values'] | unknown): Sh
   const blank = emptySheetForm();
   if (!isDict(values)) return blank;
   const w = isDict(values.winding) ? values.winding : {};
-  const coils = Array.isArray(w.coils) && w.coils.length > 0 ? w.coils.slice(0, 12).map((c) => pickStrings({ span: '', turns: '' }, c)) : blank.winding.coils;
-  const wires = Array.isArray(values.wires) && values.wires.length > 0 ? values.wires.slice(0, 4).map((x) => pickStrings(blankWire(), x)) : blank.wires;
+  const coils =
+    Array.isArray(w.coils) && w.coils.length > 0
+      ? w.coils.slice(0, 12).map((c) => pickStrings({ span: '', turns: '' }, c))
+      : blank.winding.coils;
+  const wires =
+    Array.isArray(values.wires) && values.wires.length > 0 ? values.wires.slice(0, 4).map((x) => pickStrings(blankWire(), x)) : blank.wires;
   const r = isDict(values.resistance) ? values.resistance : {};
   const readings = Array.isArray(r.readings) ? r.readings : [];
   const reading = (i: number): string => (typeof readings[i] === 'string' ? (readings[i] as string) : '');

@@ -38,6 +38,12 @@ export function findingsSummary(live: LiveAnalysis): FindingsSummary {
     };
   }
   if (live.engineError) return { headline: 'The analysis cannot run', tone: 'bad', first: live.engineError.message, figures };
-  if (!a) return { headline: live.issues.length ? `${plural(live.issues.length, 'field')} to fill in for the full analysis` : 'Analysis pending', tone: 'pending', first: live.issues[0]?.message ?? null, figures };
+  if (!a)
+    return {
+      headline: live.issues.length ? `${plural(live.issues.length, 'field')} to fill in for the full analysis` : 'Analysis pending',
+      tone: 'pending',
+      first: live.issues[0]?.message ?? null,
+      figures,
+    };
   return { headline: 'No inconsistencies found', tone: 'ok', first: null, figures };
 }

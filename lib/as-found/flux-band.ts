@@ -14,11 +14,15 @@ export function fluxBandText(tesla: number, limit: FluxLimit): { verdict: string
     case 'high':
       return { verdict: 'HIGH', band: `above the typical ${range(typical.low, typical.high)}` };
     case 'above-conservative':
-      return { verdict: 'above conservative', band: `conservative ${range(conservative!.low, conservative!.high)}; typical up to ${t(typical.high)}` };
+      return {
+        verdict: 'above conservative',
+        band: `conservative ${range(conservative!.low, conservative!.high)}; typical up to ${t(typical.high)}`,
+      };
     case 'low':
       return { verdict: 'below range', band: `below ${t(Math.min(typical.low, conservative?.low ?? Infinity))}` };
     case 'ok':
-      if (conservative && tesla >= conservative.low && tesla <= conservative.high) return { verdict: 'in the conservative range', band: range(conservative.low, conservative.high) };
+      if (conservative && tesla >= conservative.low && tesla <= conservative.high)
+        return { verdict: 'in the conservative range', band: range(conservative.low, conservative.high) };
       if (tesla >= typical.low) return { verdict: 'in the typical range', band: range(typical.low, typical.high) };
       return { verdict: 'in range', band: range(Math.min(typical.low, conservative?.low ?? typical.low), typical.high) };
   }

@@ -41,7 +41,12 @@ export interface TypedLength {
 }
 
 /** Switches one field's text between units, keeping the typed value behind it. */
-export function switchTypedLength(text: string, from: LengthUnit, to: LengthUnit, memory: TypedLength | undefined): { text: string; memory: TypedLength | undefined } {
+export function switchTypedLength(
+  text: string,
+  from: LengthUnit,
+  to: LengthUnit,
+  memory: TypedLength | undefined,
+): { text: string; memory: TypedLength | undefined } {
   if (from === to) return { text, memory };
   const untouched = memory !== undefined && memory.shown === text;
   const typed = untouched ? memory : { text, unit: from, shown: text };

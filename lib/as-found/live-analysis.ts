@@ -8,7 +8,14 @@ import { analyseSheet, type SheetAnalysis } from '@/lib/engine/analyse-sheet';
 import { analyseWinding, type WindingAnalysis } from '@/lib/engine/analyse-winding';
 import type { EngineError } from '@/lib/engine/result';
 import type { CoilSide } from '@/lib/engine/winding-layout';
-import { coreSchema, supplySchema, windingSchema, windingSheetSchema, type SheetIssue, type WindingSheet } from '@/lib/as-found/winding-sheet-schema';
+import {
+  coreSchema,
+  supplySchema,
+  windingSchema,
+  windingSheetSchema,
+  type SheetIssue,
+  type WindingSheet,
+} from '@/lib/as-found/winding-sheet-schema';
 import { sheetFindings, type SheetFinding } from '../engine/sheet-findings';
 import type { LengthUnit } from './length-entry';
 import { formToSheetInput, type LengthMemory, type SheetFormValues } from './as-found-form';
@@ -37,8 +44,14 @@ function windingOnly(input: Record<string, unknown>): { winding: WindingAnalysis
   const f = typeof supply.frequencyHz === 'number' && supply.frequencyHz > 0 ? supply.frequencyHz : 50;
   const r = analyseWinding({
     winding: {
-      slots: slots.data, poles: poles.data, layers: w.data.layers, style: w.data.style, spans: w.data.spans, turnsPerCoil: w.data.turnsPerCoil,
-      parallelPaths: w.data.parallelPaths, connection: w.data.connection,
+      slots: slots.data,
+      poles: poles.data,
+      layers: w.data.layers,
+      style: w.data.style,
+      spans: w.data.spans,
+      turnsPerCoil: w.data.turnsPerCoil,
+      parallelPaths: w.data.parallelPaths,
+      connection: w.data.connection,
       ...(w.data.singleLayerCoiling ? { singleLayerCoiling: w.data.singleLayerCoiling } : {}),
       ...(w.data.slotTable ? { slotTable: w.data.slotTable } : {}),
     },
@@ -57,5 +70,12 @@ export function liveAnalysis(values: SheetFormValues, unit: LengthUnit, slotTabl
   }
   const r = analyseSheet(parsed.data);
   if (!r.ok) return { sheet: parsed.data, full: null, ...windingOnly(input), findings: [], issues: [], engineError: r.error };
-  return { sheet: parsed.data, full: r.value, winding: r.value.winding, findings: sheetFindings(parsed.data, r.value), issues: [], engineError: null };
+  return {
+    sheet: parsed.data,
+    full: r.value,
+    winding: r.value.winding,
+    findings: sheetFindings(parsed.data, r.value),
+    issues: [],
+    engineError: null,
+  };
 }

@@ -32,7 +32,13 @@ export function prefillFromNameplate(plate: NameplateForSheet, base: SheetFormVa
       // Output to 3 decimals: a 15 hp plate is stored as 11.1855 kW.
       ratedOutputKw: plate.outputKw === null ? '' : String(Math.round(plate.outputKw * 1000) / 1000),
     },
-    winding: { ...base.winding, connection: plate.connection === 'star' || plate.connection === 'delta' ? plate.connection : base.winding.connection },
-    insulation: { ...base.insulation, thermalClass: cls === 'A' || cls === 'B' || cls === 'F' || cls === 'H' ? cls : base.insulation.thermalClass },
+    winding: {
+      ...base.winding,
+      connection: plate.connection === 'star' || plate.connection === 'delta' ? plate.connection : base.winding.connection,
+    },
+    insulation: {
+      ...base.insulation,
+      thermalClass: cls === 'A' || cls === 'B' || cls === 'F' || cls === 'H' ? cls : base.insulation.thermalClass,
+    },
   };
 }

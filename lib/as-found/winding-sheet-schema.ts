@@ -29,7 +29,8 @@ function measure(label: string, { unit, int, min = 0, above = true, max }: Measu
   return s.max(max, `${label} must be at most ${max}${u}.`);
 }
 
-const text = (label: string, max: number) => noNul(z.string({ error: `${label} must be text.` }).max(max, `${label}: at most ${max} characters.`));
+const text = (label: string, max: number) =>
+  noNul(z.string({ error: `${label} must be text.` }).max(max, `${label}: at most ${max} characters.`));
 
 export { THERMAL_CLASSES, WIRE_STANDARDS };
 
@@ -92,7 +93,9 @@ export const wireSchema = z
   .object({
     standard: z.enum(WIRE_STANDARDS, { error: 'Wire standard is AWG or metric.' }),
     /** AWG gauge as written ("18", "4/0"), or the metric nominal bare diameter in mm ("0.85"). */
-    size: noNul(z.string({ error: 'Enter the wire size.' }).trim().min(1, 'Enter the wire size.').max(20, 'Wire size: at most 20 characters.')),
+    size: noNul(
+      z.string({ error: 'Enter the wire size.' }).trim().min(1, 'Enter the wire size.').max(20, 'Wire size: at most 20 characters.'),
+    ),
     count: measure('Wires in hand', { int: true, min: 1, above: false, max: 100 }),
     enamelGrade: z.union([z.literal(1), z.literal(2), z.literal(3)], { error: 'Enamel grade is 1, 2 or 3.' }),
   })
@@ -123,7 +126,11 @@ export const supplySchema = z.object({
 /** Three resistance readings and the winding temperature they were taken at. */
 export const resistanceSchema = z.object({
   readings: z.tuple(
-    [measure('Reading 1', { unit: 'Ω', max: 1e6 }), measure('Reading 2', { unit: 'Ω', max: 1e6 }), measure('Reading 3', { unit: 'Ω', max: 1e6 })],
+    [
+      measure('Reading 1', { unit: 'Ω', max: 1e6 }),
+      measure('Reading 2', { unit: 'Ω', max: 1e6 }),
+      measure('Reading 3', { unit: 'Ω', max: 1e6 }),
+    ],
     { error: 'Give three resistance readings.' },
   ),
   temperatureC: measure('Winding temperature', { unit: '°C', min: -40, above: false, max: 250 }),
@@ -132,7 +139,24 @@ export const resistanceSchema = z.object({
 
 /** Cross-field rules, run even when other fields fail so the winder sees every problem at once. */
 function sheetRules(value: unknown, ctx: z.RefinementCtx): void {
-  const sheet = value as { core?: { slots?: unknown; boreMm?: unknown; outsideDiameterMm?: unknown; slotDepthMm?: unknown; ventDucts?: unknown; ventDuctWidthMm?: unknown }; winding?: { layers?: unknown; style?: unknown; singleLayerCoiling?: unknown; spans?: unknown; turnsPerCoil?: unknown; slotTable?: unknown } };
+  const sheet = value as {
+    core?: {
+      slots?: unknown;
+      boreMm?: unknown;
+      outsideDiameterMm?: unknown;
+      slotDepthMm?: unknown;
+      ventDucts?: unknown;
+      ventDuctWidthMm?: unknown;
+    };
+    winding?: {
+      layers?: unknown;
+      style?: unknown;
+      singleLayerCoiling?: unknown;
+      spans?: unknown;
+      turnsPerCoil?: unknown;
+      slotTable?: unknown;
+    };
+  };
   const core = sheet.core ?? {};
   const w = sheet.winding ?? {};
   const num = (v: unknown): number | undefined => (typeof v === 'number' && Number.isFinite(v) ? v : undefined);
@@ -141,8 +165,7 @@ function sheetRules(value: unknown, ctx: z.RefinementCtx): void {
   const [bore, od, depth] = [num(core.boreMm), num(core.outsideDiameterMm), num(core.slotDepthMm)];
   if (bore !== undefined && od !== undefined && depth !== undefined && od <= bore + 2 * depth)
     add(['core', 'outsideDiameterMm'], 'No back iron left: the outside diameter must exceed the bore plus twice the slot depth.');
-  if ((num(core.ventDucts) ?? 0) > 0 && core.ventDuctWidthMm === undefined)
-    add(['core', 'ventDuctWidthMm'], 'Give the vent duct width.');
+  if ((num(core.ventDucts) ?? 0) > 0 && core.ventDuctWidthMm === undefined) add(['core', 'ventDuctWidthMm'], 'Give the vent duct width.');
   const spans = Array.isArray(w.spans) ? w.spans : [];
   const turns = Array.isArray(w.turnsPerCoil) ? w.turnsPerCoil : [];
   if (Array.isArray(w.spans) && Array.isArray(w.turnsPerCoil) && spans.length !== turns.length)
@@ -168,7 +191,10 @@ export const windingSheetSchema = z
   .object({
     core: coreSchema,
     winding: windingSchema,
-    wires: z.array(wireSchema, { error: 'Give the wire sizes.' }).min(1, 'Give at least one wire size.').max(4, 'At most 4 wire sizes in hand.'),
+    wires: z
+      .array(wireSchema, { error: 'Give the wire sizes.' })
+      .min(1, 'Give at least one wire size.')
+      .max(4, 'At most 4 wire sizes in hand.'),
     insulation: insulationSchema,
     supply: supplySchema,
     resistance: resistanceSchema.optional(),
@@ -184,7 +210,9 @@ export type WindingSheet = z.output<typeof windingSheetSchema>;
 // A checked sheet is exactly what the engine analyses: the engine owns the shape (lib/engine/winding-sheet.ts)
 // and this schema maps user input onto it. The type check fails here if the two drift apart.
 type Assert<T extends true> = T;
-export type SheetFitsEngine = Assert<WindingSheet extends WindingSheetData ? (WindingSheetData extends WindingSheet ? true : false) : false>;
+export type SheetFitsEngine = Assert<
+  WindingSheet extends WindingSheetData ? (WindingSheetData extends WindingSheet ? true : false) : false
+>;
 
 /** Format tag of an export file. */
 export const WINDING_SHEET_FORMAT = 'coilwright.winding-sheet';

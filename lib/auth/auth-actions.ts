@@ -10,8 +10,14 @@ import { SIGN_IN_FAILED } from './messages';
 import { safeNextPath } from './safe-next';
 import { clientAddress } from './client-address';
 import {
-  accountAttemptFailed, addressAttemptFailed, addressAttemptSucceeded, addressHeldMessage, clearFailedSignIns, reserveAccountAttempt,
-  reserveAddressAttempt, signInHeldMessage,
+  accountAttemptFailed,
+  addressAttemptFailed,
+  addressAttemptSucceeded,
+  addressHeldMessage,
+  clearFailedSignIns,
+  reserveAccountAttempt,
+  reserveAddressAttempt,
+  signInHeldMessage,
 } from './sign-in-throttle';
 import { env } from '@/lib/env';
 

@@ -51,7 +51,10 @@ export async function accountAttemptFailed(userId: string, now = new Date()): Pr
 }
 
 export async function clearFailedSignIns(userId: string): Promise<void> {
-  await db().user.updateMany({ where: { id: userId, OR: [{ failedSignIns: { gt: 0 } }, { signInHeldUntil: { not: null } }] }, data: { failedSignIns: 0, signInHeldUntil: null } });
+  await db().user.updateMany({
+    where: { id: userId, OR: [{ failedSignIns: { gt: 0 } }, { signInHeldUntil: { not: null } }] },
+    data: { failedSignIns: 0, signInHeldUntil: null },
+  });
 }
 
 /** Claims one attempt for the network address (counted as a failure until it succeeds). */

@@ -31,7 +31,15 @@ export interface BenchWire {
 
 /** What the pack is made from. */
 export type BenchBasis =
-  | { kind: 'redesign'; revision: number; approvedBy: string; approvedAt: Date; note: string; current: boolean; currentRevision: number | null }
+  | {
+      kind: 'redesign';
+      revision: number;
+      approvedBy: string;
+      approvedAt: Date;
+      note: string;
+      current: boolean;
+      currentRevision: number | null;
+    }
   | { kind: 'original'; sheetRevision: number; savedAt: Date; approvedRedesignRevision: number | null };
 
 export interface BenchPackInput {
@@ -128,13 +136,26 @@ export function buildBenchPack(input: BenchPackInput): { ok: true; value: BenchP
   const dims = coilDimensions(input.core, w.spans, w.turnsPerCoil, input.oldCoils);
   if (!dims.ok) return { ok: false, reason: `${dims.error.message} ${dims.error.hint}` };
   const allCoils = plan.groups.groups.flatMap((g) => g.coils);
-  const perCoil = coilDimensions(input.core, allCoils.map((c) => c.span), allCoils.map((c) => c.turns), input.oldCoils);
+  const perCoil = coilDimensions(
+    input.core,
+    allCoils.map((c) => c.span),
+    allCoils.map((c) => c.turns),
+    input.oldCoils,
+  );
   if (!perCoil.ok) return { ok: false, reason: `${perCoil.error.message} ${perCoil.error.hint}` };
-  const draw = wireDraw(perCoil.value.coils.map((c) => ({ turns: c.turns, meanTurnLengthMm: c.meanTurnLengthMm })), input.wires.map((x) => ({ label: x.label, count: x.count, areaMm2: x.areaMm2 })), input.wireAllowance);
+  const draw = wireDraw(
+    perCoil.value.coils.map((c) => ({ turns: c.turns, meanTurnLengthMm: c.meanTurnLengthMm })),
+    input.wires.map((x) => ({ label: x.label, count: x.count, areaMm2: x.areaMm2 })),
+    input.wireAllowance,
+  );
   if (!draw.ok) return { ok: false, reason: `${draw.error.message} ${draw.error.hint}` };
 
   const groups: GroupRow[] = plan.groups.groups.map((g: CoilGroup) => ({
-    number: g.number, label: groupLabel(g), phase: g.phase, pole: g.pole, coils: g.coils.length,
+    number: g.number,
+    label: groupLabel(g),
+    phase: g.phase,
+    pole: g.pole,
+    coils: g.coils.length,
     slots: g.coils.map((c) => `${c.startSlot}→${c.finishSlot}`).join(', '),
     spans: spansLabel([...new Set(g.coils.map((c) => c.span))]),
     turns: g.coils.map((c) => c.turns).join('/'),
@@ -149,7 +170,11 @@ export function buildBenchPack(input: BenchPackInput): { ok: true; value: BenchP
       if (!c) continue;
       const finishLead = s.finishLead ?? finishInside(leads, s.phase);
       circuits.push({
-        phase: s.phase, index: k, section: s.section, startLead: s.startLead ?? `phase ${s.phase} start`, finishLead,
+        phase: s.phase,
+        index: k,
+        section: s.section,
+        startLead: s.startLead ?? `phase ${s.phase} start`,
+        finishLead,
         path: c.steps.map((st) => `${end(st.enter)}·${groupLabel(st.group)}·${end(st.leave)}`).join(' → '),
         jumpers: c.jumpers.map((j) => `${end(j.from.end)} of ${j.from.label} to ${end(j.to.end)} of ${j.to.label}`),
         turns: c.turns,
@@ -158,7 +183,9 @@ export function buildBenchPack(input: BenchPackInput): { ok: true; value: BenchP
 
   const leadText = {
     lines: leads.lines.map((l) => `${l.line}: ${l.leads.join(' + ')}`),
-    joints: leads.joints.filter((j) => j.role !== 'line').map((j) => `${j.role === 'star point' ? 'Star point' : 'Delta corner'} (${j.where}): ${j.ends.join(' + ')}`),
+    joints: leads.joints
+      .filter((j) => j.role !== 'line')
+      .map((j) => `${j.role === 'star point' ? 'Star point' : 'Delta corner'} (${j.where}): ${j.ends.join(' + ')}`),
   };
 
   const wireRows = draw.value.lines.map((l, i) => {
@@ -181,33 +208,57 @@ export function buildBenchPack(input: BenchPackInput): { ok: true; value: BenchP
     label: `Span ${spanText(c.span)}, ${c.turns} turns`,
     values: [mmIn(c.straightLengthMm), mmIn(c.endExtensionMm), mmIn(c.pitchMm), mmIn(c.meanTurnLengthMm)],
   }));
-  const coilNote = dims.value.basis === 'scaled-from-old-coils'
-    ? `Estimated from the old coils' mean turn length, scaled with the span; straight part ${dims.value.straightExtensionMm} mm beyond the core at each end (shop practice). Check against an old coil before winding the set.`
-    : `Estimated from the core: coil pitch at mid-slot = π × (bore + slot depth) × span / slots; each end a straight part of ${dims.value.straightExtensionMm} mm (shop practice) and a half-round loop across the pitch. Check against an old coil before winding the set.`;
+  const coilNote =
+    dims.value.basis === 'scaled-from-old-coils'
+      ? `Estimated from the old coils' mean turn length, scaled with the span; straight part ${dims.value.straightExtensionMm} mm beyond the core at each end (shop practice). Check against an old coil before winding the set.`
+      : `Estimated from the core: coil pitch at mid-slot = π × (bore + slot depth) × span / slots; each end a straight part of ${dims.value.straightExtensionMm} mm (shop practice) and a half-round loop across the pitch. Check against an old coil before winding the set.`;
 
   const conn = w.connection === 'star' ? 'star (Y)' : 'delta (Δ)';
   const summary: Row[] = [
-    { label: 'Supply', value: `${fmt.num(input.supply.lineVoltageV, 0, 'V')} ${fmt.num(input.supply.frequencyHz, 0, 'Hz')}, ${w.poles} poles, ${conn}` },
-    { label: 'Slots, layers', value: `${w.slots} slots, ${layoutLabel(w)}${w.singleLayerCoiling ? `, ${w.singleLayerCoiling}-coiled` : ''}` },
+    {
+      label: 'Supply',
+      value: `${fmt.num(input.supply.lineVoltageV, 0, 'V')} ${fmt.num(input.supply.frequencyHz, 0, 'Hz')}, ${w.poles} poles, ${conn}`,
+    },
+    {
+      label: 'Slots, layers',
+      value: `${w.slots} slots, ${layoutLabel(w)}${w.singleLayerCoiling ? `, ${w.singleLayerCoiling}-coiled` : ''}`,
+    },
     { label: 'Coil span', value: w.spans.map(spanText).join(', ') },
     { label: 'Turns per coil', value: w.turnsPerCoil.join(' / ') },
     { label: 'Wires in hand', value: input.wires.map((x) => `${x.count} × ${x.label}`).join(' + ') },
-    { label: 'Groups', value: `${plan.groups.groups.length} groups, ${plan.groups.byPhase.A.length} per phase, ${plan.groups.byPhase.A[0]?.coils.length ?? 0} coil(s) per group${new Set(plan.groups.groups.map((g) => g.coils.length)).size > 1 ? ' (sizes vary: see the table)' : ''}` },
+    {
+      label: 'Groups',
+      value: `${plan.groups.groups.length} groups, ${plan.groups.byPhase.A.length} per phase, ${plan.groups.byPhase.A[0]?.coils.length ?? 0} coil(s) per group${new Set(plan.groups.groups.map((g) => g.coils.length)).size > 1 ? ' (sizes vary: see the table)' : ''}`,
+    },
     { label: 'Parallel circuits', value: `${w.parallelPaths} per phase, ${conn}` },
     { label: 'Leads', value: `${leads.leads} leads, ${leads.standard}` },
   ];
 
   const b = input.basis;
-  const approval: Row[] = b.kind === 'redesign'
-    ? [
-      { label: 'Approved redesign', value: `revision ${b.revision}${b.current ? ' (current)' : ` — SUPERSEDED by revision ${b.currentRevision ?? '?'}: do not wind from this one`}` },
-      { label: 'Approved by', value: `${b.approvedBy}, ${fmt.dateTime(b.approvedAt)}` },
-      { label: 'Approval note', value: b.note || '—' },
-    ]
-    : [
-      { label: 'Basis', value: `Rewind to the original: as-found data sheet, revision ${b.sheetRevision}, saved ${fmt.dateTime(b.savedAt)}` },
-      ...(b.approvedRedesignRevision ? [{ label: 'Caution', value: `Redesign revision ${b.approvedRedesignRevision} is approved for this job: wind from its bench pack unless the engineer says otherwise.` }] : []),
-    ];
+  const approval: Row[] =
+    b.kind === 'redesign'
+      ? [
+          {
+            label: 'Approved redesign',
+            value: `revision ${b.revision}${b.current ? ' (current)' : ` — SUPERSEDED by revision ${b.currentRevision ?? '?'}: do not wind from this one`}`,
+          },
+          { label: 'Approved by', value: `${b.approvedBy}, ${fmt.dateTime(b.approvedAt)}` },
+          { label: 'Approval note', value: b.note || '—' },
+        ]
+      : [
+          {
+            label: 'Basis',
+            value: `Rewind to the original: as-found data sheet, revision ${b.sheetRevision}, saved ${fmt.dateTime(b.savedAt)}`,
+          },
+          ...(b.approvedRedesignRevision
+            ? [
+                {
+                  label: 'Caution',
+                  value: `Redesign revision ${b.approvedRedesignRevision} is approved for this job: wind from its bench pack unless the engineer says otherwise.`,
+                },
+              ]
+            : []),
+        ];
 
   const cautions = [
     ...input.cautions,
@@ -221,15 +272,27 @@ export function buildBenchPack(input: BenchPackInput): { ok: true; value: BenchP
   return {
     ok: true,
     value: {
-      input, title: `Bench pack · job ${input.job.number}${b.kind === 'redesign' ? ` · redesign revision ${b.revision}` : ' · rewind to the original'}`,
-      summary, plan, groups, poleConnectionText: poleConnectionText(plan), circuits, leadPlan: leads, leadCounts, leadText,
+      input,
+      title: `Bench pack · job ${input.job.number}${b.kind === 'redesign' ? ` · redesign revision ${b.revision}` : ' · rewind to the original'}`,
+      summary,
+      plan,
+      groups,
+      poleConnectionText: poleConnectionText(plan),
+      circuits,
+      leadPlan: leads,
+      leadCounts,
+      leadText,
       wire: {
         rows: wireRows,
         allowanceText: `Copper weight of the winding plus ${pct} for leads, jumpers and waste (${input.wireAllowance === 0.1 ? 'shop practice' : 'this shop’s setting'}).`,
         totalText: `Total: ${kgLb(draw.value.copperKg)} in the winding, draw ${kgLb(draw.value.drawKg)}.`,
       },
-      coilDims: dims.value, coilRows, coilNote,
-      insulation: input.insulation, cautions, approval,
+      coilDims: dims.value,
+      coilRows,
+      coilNote,
+      insulation: input.insulation,
+      cautions,
+      approval,
     },
   };
 }

@@ -21,7 +21,11 @@ export type BenchSettings = z.output<typeof benchSettingsSchema>;
 /** Options of one bench pack, from the query string. */
 export const benchPackQuerySchema = z.object({
   marking: z.enum(LEAD_CONVENTIONS).optional().catch(undefined),
-  leads: z.coerce.number().pipe(z.union([z.literal(3), z.literal(6), z.literal(12)])).optional().catch(undefined),
+  leads: z.coerce
+    .number()
+    .pipe(z.union([z.literal(3), z.literal(6), z.literal(12)]))
+    .optional()
+    .catch(undefined),
   paper: z.enum(PAPER_SIZES).optional().catch(undefined),
   rev: z.coerce.number().int().positive().max(100_000).optional().catch(undefined),
   /** 'original': the as-found winding (a rewind to the original), even when a redesign exists. */

@@ -72,7 +72,11 @@ export function connectionDiagram(plan: ConnectionPlan, leads: LeadPlan): Diagra
             text(x + boxW + 2, cy - 4, forward ? 'F' : 'S', 10, 'start', true);
             text(x + boxW / 2, y + 4 + 13, `${groupLabel(st.group)} · pole ${st.group.pole}`, 10.5, 'middle', true);
             const ax = 10;
-            shapes.push(forward ? { kind: 'arrow', x1: x + ax, y: y + 27, x2: x + boxW - ax } : { kind: 'arrow', x1: x + boxW - ax, y: y + 27, x2: x + ax });
+            shapes.push(
+              forward
+                ? { kind: 'arrow', x1: x + ax, y: y + 27, x2: x + boxW - ax }
+                : { kind: 'arrow', x1: x + boxW - ax, y: y + 27, x2: x + ax },
+            );
             text(x + boxW / 2, y + 4 + 38, forward ? 'forward' : 'reversed', 9);
           });
           const last = rowSteps.length - 1;
@@ -108,7 +112,8 @@ export function connectionDiagram(plan: ConnectionPlan, leads: LeadPlan): Diagra
       shapes.push({ kind: 'line', x1: RIGHT, y1: finY, x2: DIAGRAM_WIDTH - 40, y2: finY, width: 2.4 });
       shapes.push({ kind: 'circle', cx: DIAGRAM_WIDTH - 40, cy: finY, r: 5, filled: section.finishLead !== null });
       text(DIAGRAM_WIDTH - 30, finY + 4, section.finishLead ?? '', 13, 'start', true);
-      if (section.finishLead === null) text(DIAGRAM_WIDTH - 40, finY + 20, leads.connection === 'star' ? 'to star point' : 'inside', 9, 'middle');
+      if (section.finishLead === null)
+        text(DIAGRAM_WIDTH - 40, finY + 20, leads.connection === 'star' ? 'to star point' : 'inside', 9, 'middle');
       y += 6;
     }
     shapes.push({ kind: 'line', x1: 8, y1: y, x2: DIAGRAM_WIDTH - 8, y2: y, width: 0.6, dashed: true });
@@ -117,7 +122,14 @@ export function connectionDiagram(plan: ConnectionPlan, leads: LeadPlan): Diagra
 
   // Terminal joints.
   y += 10;
-  text(8, y + 12, `${leads.connection === 'star' ? 'Star (Y)' : 'Delta (Δ)'} — ${leads.leads} leads — ${leads.standard}`, 13, 'start', true);
+  text(
+    8,
+    y + 12,
+    `${leads.connection === 'star' ? 'Star (Y)' : 'Delta (Δ)'} — ${leads.leads} leads — ${leads.standard}`,
+    13,
+    'start',
+    true,
+  );
   y += 44;
   for (const line of leads.lines) {
     joint(shapes, y, line.line, line.leads, 'line');

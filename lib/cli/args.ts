@@ -31,12 +31,28 @@ export type CalcCommand =
 export type ArgsResult = { ok: true; value: CalcCommand } | { ok: false; message: string };
 
 const OPTIONS = {
-  slots: { type: 'string' }, poles: { type: 'string' }, span: { type: 'string' }, spans: { type: 'string' },
-  layers: { type: 'string' }, style: { type: 'string' }, turns: { type: 'string' }, coiling: { type: 'string' },
-  paths: { type: 'string' }, connection: { type: 'string' }, frequency: { type: 'string' }, orders: { type: 'string' },
-  voltage: { type: 'string' }, 'to-voltage': { type: 'string' }, 'to-frequency': { type: 'string' }, 'to-connection': { type: 'string' },
-  'to-turns': { type: 'string' }, 'to-span': { type: 'string' }, 'to-paths': { type: 'string' }, 'to-poles': { type: 'string' },
-  json: { type: 'boolean' }, help: { type: 'boolean', short: 'h' },
+  slots: { type: 'string' },
+  poles: { type: 'string' },
+  span: { type: 'string' },
+  spans: { type: 'string' },
+  layers: { type: 'string' },
+  style: { type: 'string' },
+  turns: { type: 'string' },
+  coiling: { type: 'string' },
+  paths: { type: 'string' },
+  connection: { type: 'string' },
+  frequency: { type: 'string' },
+  orders: { type: 'string' },
+  voltage: { type: 'string' },
+  'to-voltage': { type: 'string' },
+  'to-frequency': { type: 'string' },
+  'to-connection': { type: 'string' },
+  'to-turns': { type: 'string' },
+  'to-span': { type: 'string' },
+  'to-paths': { type: 'string' },
+  'to-poles': { type: 'string' },
+  json: { type: 'boolean' },
+  help: { type: 'boolean', short: 'h' },
 } as const;
 
 class ArgError extends Error {}
@@ -45,7 +61,8 @@ function numberList(name: string, raw: string): number[] {
   const values = raw.split(',').map((s) => s.trim());
   return values.map((s) => {
     const n = Number(s);
-    if (s === '' || !Number.isFinite(n)) throw new ArgError(`--${name} must be a number or a comma-separated list of numbers, not "${raw}".`);
+    if (s === '' || !Number.isFinite(n))
+      throw new ArgError(`--${name} must be a number or a comma-separated list of numbers, not "${raw}".`);
     return n;
   });
 }
@@ -83,12 +100,20 @@ function windingCommand(v: Values, orders: number, json: boolean): CalcCommand {
   const turnsPerCoil = turnsList.length === 1 && spans.length > 1 ? spans.map(() => turnsList[0] ?? 10) : turnsList;
   const coiling = v.coiling === undefined ? undefined : choice('coiling', v.coiling, ['whole', 'half'] as const, 'half');
   return {
-    kind: 'winding', orders, json,
+    kind: 'winding',
+    orders,
+    json,
     input: {
       winding: {
-        slots, poles, layers: layersN, style, spans, turnsPerCoil,
+        slots,
+        poles,
+        layers: layersN,
+        style,
+        spans,
+        turnsPerCoil,
         ...(coiling ? { singleLayerCoiling: coiling } : {}),
-        parallelPaths: one('paths', v.paths, 1), connection: choice('connection', v.connection, ['star', 'delta'] as const, 'star'),
+        parallelPaths: one('paths', v.paths, 1),
+        connection: choice('connection', v.connection, ['star', 'delta'] as const, 'star'),
       },
       supply: { lineVoltageV: 400, frequencyHz: one('frequency', v.frequency, 50) },
       options: { maxOrder: Math.max(orders, 49) },
@@ -103,7 +128,10 @@ function rescaleCommand(v: Values, json: boolean): CalcCommand {
   const w = base.input.winding;
   const spans = v['to-span'] === undefined ? w.spans : numberList('to-span', v['to-span']);
   const turns = v['to-turns'] === undefined ? w.turnsPerCoil : numberList('to-turns', v['to-turns']);
-  const old: ScalingCase = { winding: w, supply: { lineVoltageV: one('voltage', v.voltage), frequencyHz: one('frequency', v.frequency, 50) } };
+  const old: ScalingCase = {
+    winding: w,
+    supply: { lineVoltageV: one('voltage', v.voltage), frequencyHz: one('frequency', v.frequency, 50) },
+  };
   const next: ScalingCase = {
     winding: {
       ...w,
@@ -113,7 +141,10 @@ function rescaleCommand(v: Values, json: boolean): CalcCommand {
       parallelPaths: one('to-paths', v['to-paths'], w.parallelPaths),
       connection: choice('to-connection', v['to-connection'], ['star', 'delta'] as const, w.connection),
     },
-    supply: { lineVoltageV: one('to-voltage', v['to-voltage'], old.supply.lineVoltageV), frequencyHz: one('to-frequency', v['to-frequency'], old.supply.frequencyHz) },
+    supply: {
+      lineVoltageV: one('to-voltage', v['to-voltage'], old.supply.lineVoltageV),
+      frequencyHz: one('to-frequency', v['to-frequency'], old.supply.frequencyHz),
+    },
   };
   return { kind: 'rescale', old, next, json };
 }
@@ -126,7 +157,8 @@ export function parseCalcArgs(argv: readonly string[]): ArgsResult {
     const [command, ...rest] = positionals;
     const json = v.json ?? false;
     const orders = one('orders', v.orders, 25);
-    if (!Number.isInteger(orders) || orders < 1 || orders > 99) throw new ArgError(`--orders must be a whole number from 1 to 99, not "${v.orders}".`);
+    if (!Number.isInteger(orders) || orders < 1 || orders > 99)
+      throw new ArgError(`--orders must be a whole number from 1 to 99, not "${v.orders}".`);
     if (command === 'winding') {
       if (rest.length > 0) throw new ArgError(`Unexpected argument "${rest[0]}".`);
       return { ok: true, value: windingCommand(v, orders, json) };
@@ -141,10 +173,14 @@ export function parseCalcArgs(argv: readonly string[]): ArgsResult {
       if (extra.length > 0) throw new ArgError(`Unexpected argument "${extra[0]}".`);
       return { ok: true, value: { kind: 'sheet', file, orders, json } };
     }
-    throw new ArgError(command ? `Unknown command "${command}" (use winding, sheet or rescale).` : 'Give a command: winding, sheet or rescale (--help for usage).');
+    throw new ArgError(
+      command
+        ? `Unknown command "${command}" (use winding, sheet or rescale).`
+        : 'Give a command: winding, sheet or rescale (--help for usage).',
+    );
   } catch (e) {
     // parseArgs throws TypeErrors with Node error codes for unknown options and missing values.
-    const message = e instanceof Error ? e.message.split('\n')[0] ?? e.message : String(e);
+    const message = e instanceof Error ? (e.message.split('\n')[0] ?? e.message) : String(e);
     return { ok: false, message };
   }
 }

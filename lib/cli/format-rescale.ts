@@ -21,7 +21,11 @@ export function formatRescale(old: ScalingCase, next: ScalingCase, r: SupplyScal
   ];
   const keepTurns = next.winding.turnsPerCoil.map((n) => fixed(n * r.fluxRatio, 2)).join('/');
   const verdict =
-    r.verdict === 'ok' ? 'within the limits' : r.verdict === 'over-fluxed' ? 'OVER-FLUXED: more turns are needed' : 'under-fluxed: fewer turns would do';
+    r.verdict === 'ok'
+      ? 'within the limits'
+      : r.verdict === 'over-fluxed'
+        ? 'OVER-FLUXED: more turns are needed'
+        : 'under-fluxed: fewer turns would do';
   return [
     `From: ${describe(old)}`,
     `To:   ${describe(next)}`,

@@ -12,9 +12,14 @@ const range = (d: FluxDensity): string =>
 function fluxLines(s: SheetAnalysis): string[] {
   const f = s.winding.flux;
   if (!f) return [];
-  const rows = ([['gap average', f.gapAverage], ['gap peak', f.gapPeak], ['tooth max', f.toothMax], ['yoke', f.yoke]] as const).map(([name, d]) => [
-    name, fixed(d.tesla, 4), fixed(d.kilolinesPerIn2, 2), range(d), d.verdict,
-  ]);
+  const rows = (
+    [
+      ['gap average', f.gapAverage],
+      ['gap peak', f.gapPeak],
+      ['tooth max', f.toothMax],
+      ['yoke', f.yoke],
+    ] as const
+  ).map(([name, d]) => [name, fixed(d.tesla, 4), fixed(d.kilolinesPerIn2, 2), range(d), d.verdict]);
   return [
     '',
     `Flux      Φ ${fixed(f.fluxPerPoleWb * 1000, 4)} mWb per pole; V_ph ${fixed(f.phaseVoltageV, 1)} V, E ${fixed(f.emfV, 1)} V; series turns per phase ${fixed(s.winding.seriesTurnsPerPhase, 2)}, k_w1 ${fixed(s.winding.windingFactor, 4)}`,
@@ -27,20 +32,34 @@ function fluxLines(s: SheetAnalysis): string[] {
 function copperLines(s: SheetAnalysis): string[] {
   const lines = [
     '',
-    'Wire      ' + s.wires.map((w) => `${w.count} × ${w.standard === 'awg' ? `AWG ${w.size}` : `${w.size} mm`} (bare ${fixed(w.bareMm, 4)} mm, over enamel ≈ ${fixed(w.overallMm, 4)} mm)`).join(' + '),
+    'Wire      ' +
+      s.wires
+        .map(
+          (w) =>
+            `${w.count} × ${w.standard === 'awg' ? `AWG ${w.size}` : `${w.size} mm`} (bare ${fixed(w.bareMm, 4)} mm, over enamel ≈ ${fixed(w.overallMm, 4)} mm)`,
+        )
+        .join(' + '),
     `          copper per turn ${fixed(s.conductorAreaPerTurnMm2, 4)} mm² = ${fixed(s.circularMilsPerTurn, 0)} CM; synchronous speed ${fixed(s.synchronousRpm, 1)} rpm`,
   ];
   const r = s.resistance;
   if (r) {
-    lines.push(`Resistance predicted at 20 °C: phase ${fixed(r.predictedPhaseOhm20, 4)} Ω, line-to-line ${fixed(r.predictedLineToLineOhm20, 4)} Ω`);
+    lines.push(
+      `Resistance predicted at 20 °C: phase ${fixed(r.predictedPhaseOhm20, 4)} Ω, line-to-line ${fixed(r.predictedLineToLineOhm20, 4)} Ω`,
+    );
     if (r.measured)
-      lines.push(`          measured, corrected to 20 °C: phase ${fixed(r.measured.phaseOhm20, 4)} Ω (${r.measured.differencePercent >= 0 ? '+' : ''}${fixed(r.measured.differencePercent, 2)} % against predicted); unbalance ${fixed(r.measured.unbalance.value * 100, 2)} % — ${r.measured.unbalance.pass ? 'pass' : 'FAIL'} (${r.measured.unbalance.rule})`);
+      lines.push(
+        `          measured, corrected to 20 °C: phase ${fixed(r.measured.phaseOhm20, 4)} Ω (${r.measured.differencePercent >= 0 ? '+' : ''}${fixed(r.measured.differencePercent, 2)} % against predicted); unbalance ${fixed(r.measured.unbalance.value * 100, 2)} % — ${r.measured.unbalance.pass ? 'pass' : 'FAIL'} (${r.measured.unbalance.rule})`,
+      );
   }
   const j = s.currentDensity;
   if (j)
-    lines.push(`Current   phase ${fixed(j.phaseCurrentA, 2)} A, path ${fixed(j.pathCurrentA, 2)} A; J ${fixed(j.ampsPerMm2, 2)} A/mm² = ${fixed(j.circularMilsPerAmp, 0)} CM/A; typical ${j.typical.map((t) => `${t.minAPerMm2}–${t.maxAPerMm2} A/mm² (${t.source})`).join('; ')}`);
+    lines.push(
+      `Current   phase ${fixed(j.phaseCurrentA, 2)} A, path ${fixed(j.pathCurrentA, 2)} A; J ${fixed(j.ampsPerMm2, 2)} A/mm² = ${fixed(j.circularMilsPerAmp, 0)} CM/A; typical ${j.typical.map((t) => `${t.minAPerMm2}–${t.maxAPerMm2} A/mm² (${t.source})`).join('; ')}`,
+    );
   const f = s.slotFill;
-  lines.push(`Slot fill ${fixed(f.conductorsPerSlot, 0)} conductors per slot in ${fixed(f.grossSlotAreaMm2, 1)} mm² gross: bare copper / gross ${fixed(f.bareCopperOverGross * 100, 1)} %, insulated wire / gross ${fixed(f.insulatedOverGross * 100, 1)} % (hand insertion ≤ ${f.handInsertionLimit.low * 100}–${f.handInsertionLimit.high * 100} % of the net area [common practice, from memory])`);
+  lines.push(
+    `Slot fill ${fixed(f.conductorsPerSlot, 0)} conductors per slot in ${fixed(f.grossSlotAreaMm2, 1)} mm² gross: bare copper / gross ${fixed(f.bareCopperOverGross * 100, 1)} %, insulated wire / gross ${fixed(f.insulatedOverGross * 100, 1)} % (hand insertion ≤ ${f.handInsertionLimit.low * 100}–${f.handInsertionLimit.high * 100} % of the net area [common practice, from memory])`,
+  );
   return lines;
 }
 
@@ -48,7 +67,9 @@ const SEVERITY_WORD: Record<SheetFinding['severity'], string> = { problem: 'Prob
 
 /** The findings exactly as the live analysis shows them: what was found, then what to check. */
 const findingLines = (findings: readonly SheetFinding[]): string[] =>
-  findings.length ? ['', 'Findings', ...findings.flatMap((f) => [`${SEVERITY_WORD[f.severity]}: ${f.message}`, `  What to check: ${f.check}`])] : ['', 'Findings: none.'];
+  findings.length
+    ? ['', 'Findings', ...findings.flatMap((f) => [`${SEVERITY_WORD[f.severity]}: ${f.message}`, `  What to check: ${f.check}`])]
+    : ['', 'Findings: none.'];
 
 /** The whole sheet: winding report, flux densities, wire, resistance, current density, slot fill, findings. */
 export function formatSheet(spec: WindingSpec, s: SheetAnalysis, findings: readonly SheetFinding[], orders: number): string {

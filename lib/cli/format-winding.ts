@@ -30,11 +30,23 @@ export function formatWinding(spec: WindingSpec, a: WindingAnalysis, orders: num
     .filter((f) => f.order <= orders)
     .map((f) => {
       const c = closed.get(f.order);
-      return [orderLabel(f.order, f.mechanicalOrder), fixed(c?.kd === undefined ? undefined : Math.abs(c.kd), 4), fixed(c?.kp === undefined ? undefined : Math.abs(c.kp), 4), fixed(c ? Math.abs(c.kw) : undefined, 4), fixed(f.kw, 4)];
+      return [
+        orderLabel(f.order, f.mechanicalOrder),
+        fixed(c?.kd === undefined ? undefined : Math.abs(c.kd), 4),
+        fixed(c?.kp === undefined ? undefined : Math.abs(c.kp), 4),
+        fixed(c ? Math.abs(c.kw) : undefined, 4),
+        fixed(f.kw, 4),
+      ];
     });
   const mmfRows = a.mmf.harmonics
     .filter((h) => h.order <= orders)
-    .map((h) => [orderLabel(h.order, h.mechanicalOrder), fixed(h.relativeAmplitude, 4), h.direction, h.direction === 'cancelled' ? '—' : fixed(h.speedFraction, 4), h.direction === 'cancelled' ? '—' : fixed(h.speedRpm, 1)]);
+    .map((h) => [
+      orderLabel(h.order, h.mechanicalOrder),
+      fixed(h.relativeAmplitude, 4),
+      h.direction,
+      h.direction === 'cancelled' ? '—' : fixed(h.speedFraction, 4),
+      h.direction === 'cancelled' ? '—' : fixed(h.speedRpm, 1),
+    ]);
   return [
     `Winding   ${describe(spec, a)}`,
     `q         ${q}; pole pitch ${fixed(a.polePitchSlots, 3)} slots; slot angle ${fixed(a.slotAngleDeg, 3)}° electrical`,

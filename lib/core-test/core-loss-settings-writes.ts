@@ -7,7 +7,8 @@ import { DomainError } from '@/lib/errors/domain-errors';
 import type { CoreLossSettingsForm } from '@/lib/core-test/core-test-schema';
 import { CORE_LOSS_SETTINGS_ID } from './core-loss-settings';
 
-export const CORE_SETTINGS_STALE = 'Someone else saved the core-loss settings while you were editing. Your values are still in the form: review the current ones, then save again.';
+export const CORE_SETTINGS_STALE =
+  'Someone else saved the core-loss settings while you were editing. Your values are still in the form: review the current ones, then save again.';
 
 const columns = (s: CoreLossSettingsForm, userId: string) => ({
   testFluxDensityT: s.testFluxDensityT,
@@ -25,7 +26,10 @@ export async function saveCoreLossSettings(userId: string, input: CoreLossSettin
         await tx.coreLossSettings.create({ data: { id: CORE_LOSS_SETTINGS_ID, ...columns(input, userId) } });
         return { version: 1 };
       }
-      const r = await tx.coreLossSettings.updateMany({ where: { id: CORE_LOSS_SETTINGS_ID, version: input.version }, data: { ...columns(input, userId), version: { increment: 1 } } });
+      const r = await tx.coreLossSettings.updateMany({
+        where: { id: CORE_LOSS_SETTINGS_ID, version: input.version },
+        data: { ...columns(input, userId), version: { increment: 1 } },
+      });
       if (r.count === 0) throw new DomainError('stale', CORE_SETTINGS_STALE);
       return { version: input.version + 1 };
     });

@@ -37,7 +37,12 @@ export async function getCoreLossSettings(): Promise<CoreLossSettings> {
   const s = await db().coreLossSettings.findUnique({ where: { id: CORE_LOSS_SETTINGS_ID } });
   if (!s) return DEFAULT_CORE_LOSS_SETTINGS;
   return {
-    testFluxDensityT: s.testFluxDensityT, fieldStrengthAPerM: s.fieldStrengthAPerM, coreLossRiseLimit: s.coreLossRiseLimit,
-    hotSpotRiseLimitK: s.hotSpotRiseLimitK, copperLossRiseLimit: s.copperLossRiseLimit, version: s.version, updatedAt: s.updatedAt,
+    testFluxDensityT: s.testFluxDensityT,
+    fieldStrengthAPerM: s.fieldStrengthAPerM,
+    coreLossRiseLimit: s.coreLossRiseLimit,
+    hotSpotRiseLimitK: s.hotSpotRiseLimitK,
+    copperLossRiseLimit: s.copperLossRiseLimit,
+    version: s.version,
+    updatedAt: s.updatedAt,
   };
 }

@@ -5,9 +5,15 @@ import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 
 export function coreRingFromSheet(core: WindingSheet['core']): CoreRing {
   return {
-    outsideDiameterM: mmToM(core.outsideDiameterMm), boreM: mmToM(core.boreMm), slotDepthM: mmToM(core.slotDepthMm),
-    coreLengthM: mmToM(core.coreLengthMm), stackingFactor: core.stackingFactor,
-    ventDucts: core.ventDucts ?? 0, ventDuctWidthM: mmToM(core.ventDuctWidthMm ?? 0),
-    slots: core.slots, slotWidthTopM: mmToM(core.slotWidthTopMm), slotWidthBottomM: mmToM(core.slotWidthBottomMm),
+    outsideDiameterM: mmToM(core.outsideDiameterMm),
+    boreM: mmToM(core.boreMm),
+    slotDepthM: mmToM(core.slotDepthMm),
+    coreLengthM: mmToM(core.coreLengthMm),
+    stackingFactor: core.stackingFactor,
+    ventDucts: core.ventDucts ?? 0,
+    ventDuctWidthM: mmToM(core.ventDuctWidthMm ?? 0),
+    slots: core.slots,
+    slotWidthTopM: mmToM(core.slotWidthTopMm),
+    slotWidthBottomM: mmToM(core.slotWidthBottomMm),
   };
 }

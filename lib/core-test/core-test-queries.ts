@@ -6,7 +6,10 @@ import { coreTestDataSchema, type CoreTestData, type CoreTestStageValue } from '
 
 /** What the core-test screen needs of a job: status and customer. */
 export async function getJobForCoreTest(number: number) {
-  return db().job.findUnique({ where: { number }, select: { id: true, number: true, status: true, heldFrom: true, customer: { select: { company: true } } } });
+  return db().job.findUnique({
+    where: { number },
+    select: { id: true, number: true, status: true, heldFrom: true, customer: { select: { company: true } } },
+  });
 }
 
 export interface StoredCoreTest {
@@ -30,7 +33,16 @@ export async function listCoreTests(jobId: string): Promise<StoredCoreTest[]> {
     const parsed = coreTestDataSchema.safeParse(row.data);
     // Saved data was validated; a failure means the schema changed without a data migration.
     if (!parsed.success) throw new Error(`Stored core-loss test ${row.id} no longer matches the schema: ${parsed.error.message}`);
-    return { id: row.id, jobId: row.jobId, stage: row.stage, version: row.version, testedAt: row.testedAt, testedBy: row.testedBy, updatedAt: row.updatedAt, data: parsed.data };
+    return {
+      id: row.id,
+      jobId: row.jobId,
+      stage: row.stage,
+      version: row.version,
+      testedAt: row.testedAt,
+      testedBy: row.testedBy,
+      updatedAt: row.updatedAt,
+      data: parsed.data,
+    };
   });
 }
 

@@ -17,7 +17,9 @@ import { coreRingFromSheet } from './core-ring-from-sheet';
 import { latestByStage, type StoredCoreTest } from './core-test-queries';
 
 export const STAGE_KEYS: Record<CoreTestStageValue, CoreStage> = {
-  BEFORE_STRIPPING: 'before-stripping', AFTER_STRIPPING: 'after-stripping', AFTER_REPAIRS: 'after-repairs',
+  BEFORE_STRIPPING: 'before-stripping',
+  AFTER_STRIPPING: 'after-stripping',
+  AFTER_REPAIRS: 'after-repairs',
 };
 
 /** The supply a plan starts from until the shop types its own: a common single-phase shop supply [common practice]. */
@@ -43,11 +45,19 @@ export interface CoreTestReport {
 /**
  * @param ratedBackIronT back-iron density at rated voltage from the as-found analysis (docs/engineering/flux-density.md), if known
  */
-export function coreTestReport(sheet: WindingSheet | null, tests: readonly StoredCoreTest[], settings: CoreLossSettings, ratedBackIronT: number | null): CoreTestReport {
+export function coreTestReport(
+  sheet: WindingSheet | null,
+  tests: readonly StoredCoreTest[],
+  settings: CoreLossSettings,
+  ratedBackIronT: number | null,
+): CoreTestReport {
   const planned = sheet
     ? loopTestPlan({
-        ring: coreRingFromSheet(sheet.core), testFluxDensityT: settings.testFluxDensityT, frequencyHz: sheet.supply.frequencyHz,
-        supplyVoltageV: DEFAULT_PLANNING_SUPPLY_V, fieldStrengthAPerM: settings.fieldStrengthAPerM,
+        ring: coreRingFromSheet(sheet.core),
+        testFluxDensityT: settings.testFluxDensityT,
+        frequencyHz: sheet.supply.frequencyHz,
+        supplyVoltageV: DEFAULT_PLANNING_SUPPLY_V,
+        fieldStrengthAPerM: settings.fieldStrengthAPerM,
       })
     : null;
   const plan = planned?.ok ? planned.value : null;
@@ -55,9 +65,17 @@ export function coreTestReport(sheet: WindingSheet | null, tests: readonly Store
   const figures: TestFigures[] = tests.map((test) => {
     if (!plan) return { test, result: null, problem: 'Save the as-found sheet’s core to work out W/kg.' };
     const d = test.data;
-    const loss = specificLoss({ voltageV: d.voltageV, currentA: d.currentA, watts: d.watts, frequencyHz: d.frequencyHz, turns: d.loopTurns }, plan.section.areaM2, plan.backIronMassKg, settings.testFluxDensityT);
+    const loss = specificLoss(
+      { voltageV: d.voltageV, currentA: d.currentA, watts: d.watts, frequencyHz: d.frequencyHz, turns: d.loopTurns },
+      plan.section.areaM2,
+      plan.backIronMassKg,
+      settings.testFluxDensityT,
+    );
     if (!loss.ok) return { test, result: null, problem: loss.error.message };
-    const hotSpots = judgeHotSpots(d.hotSpots.map((h) => ({ slot: h.slot, axialPositionM: h.axialPositionMm / 1000, riseK: h.riseK })), settings.hotSpotRiseLimitK);
+    const hotSpots = judgeHotSpots(
+      d.hotSpots.map((h) => ({ slot: h.slot, axialPositionM: h.axialPositionMm / 1000, riseK: h.riseK })),
+      settings.hotSpotRiseLimitK,
+    );
     return { test, result: { stage: STAGE_KEYS[test.stage], frequencyHz: d.frequencyHz, loss: loss.value, hotSpots }, problem: null };
   });
   const latest = latestByStage(tests);
@@ -77,7 +95,13 @@ export function coreTestReport(sheet: WindingSheet | null, tests: readonly Store
     } else if (ratedBackIronT === null) {
       lossChangeNote = 'No core-loss change is included: the back-iron flux density at rated voltage is not known from the sheet.';
     } else {
-      lossChangeAtRatingW = coreLossChangeAtRatingW(before.loss.wattsPerKgAtReference, after.loss.wattsPerKgAtReference, plan.backIronMassKg, ratedBackIronT, settings.testFluxDensityT);
+      lossChangeAtRatingW = coreLossChangeAtRatingW(
+        before.loss.wattsPerKgAtReference,
+        after.loss.wattsPerKgAtReference,
+        plan.backIronMassKg,
+        ratedBackIronT,
+        settings.testFluxDensityT,
+      );
       lossChangeNote = `Core-loss change from the loop tests (back iron only), brought from ${settings.testFluxDensityT.toFixed(2)} T to the rated back-iron density ${ratedBackIronT.toFixed(3)} T by the square of the density ratio.`;
     }
   }

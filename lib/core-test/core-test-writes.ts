@@ -53,7 +53,8 @@ export async function saveCoreTest(userId: string, input: CoreTestForm): Promise
   return db().$transaction(async (tx) => {
     const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true, heldFrom: true } });
     if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
-    if (isRecordLocked('coreTests', job.status, job.heldFrom)) throw new DomainError('frozen', CORE_TEST_MESSAGES.closed(STATUS_LABELS[job.status]));
+    if (isRecordLocked('coreTests', job.status, job.heldFrom))
+      throw new DomainError('frozen', CORE_TEST_MESSAGES.closed(STATUS_LABELS[job.status]));
     const tester = await tx.user.findUnique({ where: { id: input.testedById }, select: { active: true } });
     if (!tester?.active) throw new DomainError('invalid', MESSAGES.invalid, { testedById: [CORE_TEST_MESSAGES.unknownTester] });
 

@@ -42,7 +42,12 @@ const holder = globalThis as typeof globalThis & { __coilwrightDb?: DbHandle };
 function open(config: DbConfig): DbHandle {
   if (config.engine === 'postgres') {
     const prisma = new PrismaClient({
-      adapter: new PrismaPg({ connectionString: config.url, max: env().COILWRIGHT_DB_POOL_SIZE, connectionTimeoutMillis: 8_000, idleTimeoutMillis: 30_000 }),
+      adapter: new PrismaPg({
+        connectionString: config.url,
+        max: env().COILWRIGHT_DB_POOL_SIZE,
+        connectionTimeoutMillis: 8_000,
+        idleTimeoutMillis: 30_000,
+      }),
       transactionOptions: TRANSACTION_OPTIONS,
     });
     return { config, prisma, openRunner: () => postgresRunner(config.url), close: () => prisma.$disconnect() };

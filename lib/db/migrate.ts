@@ -64,10 +64,11 @@ export async function applyMigrations(db: SqlRunner, dir = migrationsDir()): Pro
         continue;
       }
       const id = randomUUID();
-      await db.query(
-        'INSERT INTO "_prisma_migrations" (id, checksum, migration_name, started_at) VALUES ($1, $2, $3, now())',
-        [id, checksum, name],
-      );
+      await db.query('INSERT INTO "_prisma_migrations" (id, checksum, migration_name, started_at) VALUES ($1, $2, $3, now())', [
+        id,
+        checksum,
+        name,
+      ]);
       try {
         await db.exec(`BEGIN;\n${sql.toString('utf8')}\n;COMMIT;`);
       } catch (err) {
@@ -75,10 +76,7 @@ export async function applyMigrations(db: SqlRunner, dir = migrationsDir()): Pro
         await db.query('UPDATE "_prisma_migrations" SET logs = $2 WHERE id = $1', [id, String(err)]);
         throw new MigrationError(`Migration ${name} failed: ${String(err)}`);
       }
-      await db.query(
-        'UPDATE "_prisma_migrations" SET finished_at = now(), applied_steps_count = 1 WHERE id = $1',
-        [id],
-      );
+      await db.query('UPDATE "_prisma_migrations" SET finished_at = now(), applied_steps_count = 1 WHERE id = $1', [id]);
       done.push(name);
     }
     return done;

@@ -9,7 +9,11 @@ import { analyseWinding, isAllFinite, type AnalyseWindingInput, type WindingAnal
 import { currentDensityChecked, TYPICAL_CURRENT_DENSITY, type CurrentDensity, type CurrentDensityRange } from './current-density';
 import type { FluxLimits } from './flux';
 import {
-  compareResistance, correctResistanceOhm, lineToLineFromPhaseOhm, phaseFromLineToLineOhm, phaseResistance,
+  compareResistance,
+  correctResistanceOhm,
+  lineToLineFromPhaseOhm,
+  phaseFromLineToLineOhm,
+  phaseResistance,
   resistanceUnbalanceVerdict,
 } from './resistance';
 import { fail, ok, type EngineResult } from './result';
@@ -24,16 +28,28 @@ export function windingInputFromSheet(sheet: WindingSheet): AnalyseWindingInput 
   const { core, winding, supply } = sheet;
   return {
     winding: {
-      slots: core.slots, poles: supply.poles, layers: winding.layers, style: winding.style,
+      slots: core.slots,
+      poles: supply.poles,
+      layers: winding.layers,
+      style: winding.style,
       ...(winding.singleLayerCoiling ? { singleLayerCoiling: winding.singleLayerCoiling } : {}),
-      spans: winding.spans, turnsPerCoil: winding.turnsPerCoil, parallelPaths: winding.parallelPaths,
-      connection: winding.connection, ...(winding.slotTable ? { slotTable: winding.slotTable } : {}),
+      spans: winding.spans,
+      turnsPerCoil: winding.turnsPerCoil,
+      parallelPaths: winding.parallelPaths,
+      connection: winding.connection,
+      ...(winding.slotTable ? { slotTable: winding.slotTable } : {}),
     },
     supply: { lineVoltageV: supply.lineVoltageV, frequencyHz: supply.frequencyHz },
     core: {
-      boreM: mmToM(core.boreMm), coreLengthM: mmToM(core.coreLengthMm), outsideDiameterM: mmToM(core.outsideDiameterMm),
-      slots: core.slots, slotDepthM: mmToM(core.slotDepthMm), toothWidthM: mmToM(core.toothWidthMm),
-      stackingFactor: core.stackingFactor, ventDucts: core.ventDucts ?? 0, ventDuctWidthM: mmToM(core.ventDuctWidthMm ?? 0),
+      boreM: mmToM(core.boreMm),
+      coreLengthM: mmToM(core.coreLengthMm),
+      outsideDiameterM: mmToM(core.outsideDiameterMm),
+      slots: core.slots,
+      slotDepthM: mmToM(core.slotDepthMm),
+      toothWidthM: mmToM(core.toothWidthMm),
+      stackingFactor: core.stackingFactor,
+      ventDucts: core.ventDucts ?? 0,
+      ventDuctWidthM: mmToM(core.ventDuctWidthMm ?? 0),
     },
   };
 }
@@ -90,7 +106,14 @@ function wireRows(sheet: WindingSheet): EngineResult<WireRow[]> {
     const overall = wireOverallDiameterMm({ standard: w.standard, size: w.size, enamelGrade: w.enamelGrade });
     if (!found.ok) return fail(found.error.code, found.error.message, found.error.hint, `wires.${i}.size`);
     if (!overall.ok) return fail(overall.error.code, overall.error.message, overall.error.hint, `wires.${i}.size`);
-    rows.push({ standard: w.standard, size: found.value.size, count: w.count, bareMm: found.value.bareMm, overallMm: overall.value, areaMm2: found.value.areaMm2 });
+    rows.push({
+      standard: w.standard,
+      size: found.value.size,
+      count: w.count,
+      bareMm: found.value.bareMm,
+      overallMm: overall.value,
+      areaMm2: found.value.areaMm2,
+    });
   }
   return ok(rows);
 }
@@ -101,8 +124,12 @@ function resistanceOf(sheet: WindingSheet, w: WindingAnalysis, areaMm2: number):
   const coils = w.layout.sides.length / 2 / 3;
   const turnsPerPhase = w.seriesTurnsPerPhase * sheet.winding.parallelPaths;
   const predicted = phaseResistance({
-    coilsPerPhase: coils, turnsPerCoil: turnsPerPhase / coils, meanTurnLengthM: mmToM(mlt),
-    parallelPaths: sheet.winding.parallelPaths, strands: [{ areaMm2, count: 1 }], temperatureC: 20,
+    coilsPerPhase: coils,
+    turnsPerCoil: turnsPerPhase / coils,
+    meanTurnLengthM: mmToM(mlt),
+    parallelPaths: sheet.winding.parallelPaths,
+    strands: [{ areaMm2, count: 1 }],
+    temperatureC: 20,
   });
   if (!predicted.ok) return fail(predicted.error.code, predicted.error.message, predicted.error.hint, 'winding.meanTurnLengthMm');
   const r = sheet.resistance;
@@ -115,13 +142,20 @@ function resistanceOf(sheet: WindingSheet, w: WindingAnalysis, areaMm2: number):
     const phaseOhm20 = correctResistanceOhm(phase, r.temperatureC, 20);
     measured = { phaseOhm20, differencePercent: compareResistance(predicted.value, phaseOhm20), unbalance: unbalance.value };
   }
-  return ok({ predictedPhaseOhm20: predicted.value, predictedLineToLineOhm20: lineToLineFromPhaseOhm(predicted.value, sheet.winding.connection), measured });
+  return ok({
+    predictedPhaseOhm20: predicted.value,
+    predictedLineToLineOhm20: lineToLineFromPhaseOhm(predicted.value, sheet.winding.connection),
+    measured,
+  });
 }
 
 /** Analyses a parsed sheet. Errors carry field paths into the sheet (e.g. `wires.0.size`). */
 export function analyseSheet(sheet: WindingSheet, options?: { limits?: FluxLimits; maxOrder?: number }): EngineResult<SheetAnalysis> {
   const input = windingInputFromSheet(sheet);
-  const analysed = analyseWinding({ ...input, options: { ...(options?.limits ? { limits: options.limits } : {}), ...(options?.maxOrder ? { maxOrder: options.maxOrder } : {}) } });
+  const analysed = analyseWinding({
+    ...input,
+    options: { ...(options?.limits ? { limits: options.limits } : {}), ...(options?.maxOrder ? { maxOrder: options.maxOrder } : {}) },
+  });
   if (!analysed.ok) return analysed;
   const w = analysed.value;
   const wires = wireRows(sheet);
@@ -133,7 +167,12 @@ export function analyseSheet(sheet: WindingSheet, options?: { limits?: FluxLimit
 
   let currentDensity: SheetAnalysis['currentDensity'] = null;
   if (sheet.supply.ratedCurrentA !== undefined) {
-    const j = currentDensityChecked({ lineCurrentA: sheet.supply.ratedCurrentA, connection: sheet.winding.connection, parallelPaths: sheet.winding.parallelPaths, conductorAreaPerTurnMm2: areaMm2 });
+    const j = currentDensityChecked({
+      lineCurrentA: sheet.supply.ratedCurrentA,
+      connection: sheet.winding.connection,
+      parallelPaths: sheet.winding.parallelPaths,
+      conductorAreaPerTurnMm2: areaMm2,
+    });
     if (!j.ok) return fail(j.error.code, j.error.message, j.error.hint, 'supply.ratedCurrentA');
     currentDensity = { ...j.value, typical: [TYPICAL_CURRENT_DENSITY.inductionStator, TYPICAL_CURRENT_DENSITY.totallyEnclosed] };
   }
@@ -141,12 +180,17 @@ export function analyseSheet(sheet: WindingSheet, options?: { limits?: FluxLimit
   const perSlot = new Map<number, number>();
   for (const s of w.layout.sides) perSlot.set(s.slot, (perSlot.get(s.slot) ?? 0) + s.turns);
   const conductorsPerSlot = Math.max(0, ...perSlot.values());
-  const gross = grossSlotAreaMm2({ depthMm: sheet.core.slotDepthMm, topWidthMm: sheet.core.slotWidthTopMm, bottomWidthMm: sheet.core.slotWidthBottomMm });
+  const gross = grossSlotAreaMm2({
+    depthMm: sheet.core.slotDepthMm,
+    topWidthMm: sheet.core.slotWidthTopMm,
+    bottomWidthMm: sheet.core.slotWidthBottomMm,
+  });
   if (!gross.ok) return fail(gross.error.code, gross.error.message, gross.error.hint, 'core.slotDepthMm');
   const fill = slotFill({
     conductorsPerSlot,
     strands: wires.value.map((r) => ({ bareDiameterMm: r.bareMm, overallDiameterMm: r.overallMm, count: r.count })),
-    grossSlotAreaMm2: gross.value, netSlotAreaMm2: gross.value,
+    grossSlotAreaMm2: gross.value,
+    netSlotAreaMm2: gross.value,
   });
 
   const analysis: SheetAnalysis = {
@@ -158,11 +202,18 @@ export function analyseSheet(sheet: WindingSheet, options?: { limits?: FluxLimit
     resistance: resistance.value,
     currentDensity,
     slotFill: {
-      conductorsPerSlot, grossSlotAreaMm2: gross.value, bareCopperOverGross: fill.bareCopperOverGross,
-      insulatedOverGross: fill.insulatedOverNet, handInsertionLimit: { ...HAND_INSERTION_FILL_LIMIT },
+      conductorsPerSlot,
+      grossSlotAreaMm2: gross.value,
+      bareCopperOverGross: fill.bareCopperOverGross,
+      insulatedOverGross: fill.insulatedOverNet,
+      handInsertionLimit: { ...HAND_INSERTION_FILL_LIMIT },
     },
   };
   return isAllFinite(analysis)
     ? ok(analysis)
-    : fail('non-finite-result', 'Part of the sheet analysis did not come out as a finite number.', 'Check the slot, wire and resistance data for zero or missing values.');
+    : fail(
+        'non-finite-result',
+        'Part of the sheet analysis did not come out as a finite number.',
+        'Check the slot, wire and resistance data for zero or missing values.',
+      );
 }

@@ -3,7 +3,13 @@
  * factors per phase to order 49 with the closed-form cross-check, balance, parallel paths, MMF spectrum
  * and waveform, series turns, flux per pole and flux densities.
  */
-import { closedFormFactors, concentricPitchFactor, distributionFactor, slotsPerPolePerPhase, type SlotsPerPolePerPhase } from './closed-form';
+import {
+  closedFormFactors,
+  concentricPitchFactor,
+  distributionFactor,
+  slotsPerPolePerPhase,
+  type SlotsPerPolePerPhase,
+} from './closed-form';
 import { fluxAnalysis, seriesTurnsPerPhase, type CoreGeometry, type FluxAnalysis, type FluxLimits } from './flux';
 import { mmfSpectrum, mmfWaveform, type MmfPoint, type MmfSpectrum } from './mmf-spectrum';
 import { allowedParallelPaths, type ParallelPathAnalysis } from './parallel-paths';
@@ -92,7 +98,12 @@ export function analyseWinding(input: AnalyseWindingInput): EngineResult<Winding
   const spec = input.winding;
   const maxOrder = input.options?.maxOrder ?? 49;
   if (!(Number.isInteger(maxOrder) && maxOrder >= 1 && maxOrder <= 99))
-    return fail('invalid-input', `Highest order ${maxOrder} must be a whole number from 1 to 99.`, 'Use 49 unless you need more.', 'options.maxOrder');
+    return fail(
+      'invalid-input',
+      `Highest order ${maxOrder} must be a whole number from 1 to 99.`,
+      'Use 49 unless you need more.',
+      'options.maxOrder',
+    );
   if (!(Number.isFinite(input.supply.frequencyHz) && input.supply.frequencyHz > 0))
     return fail('invalid-input', 'The frequency must be more than zero.', 'Enter 50 or 60 Hz.', 'supply.frequencyHz');
   const built = windingLayout(spec);
@@ -100,7 +111,12 @@ export function analyseWinding(input: AnalyseWindingInput): EngineResult<Winding
   const layout = built.value;
   const a = spec.parallelPaths;
   if (!(Number.isInteger(a) && a >= 1 && a <= layout.sides.length))
-    return fail('invalid-input', `Parallel paths must be a whole number from 1 up, not ${a}.`, 'Count the circuits per phase.', 'winding.parallelPaths');
+    return fail(
+      'invalid-input',
+      `Parallel paths must be a whole number from 1 up, not ${a}.`,
+      'Count the circuits per phase.',
+      'winding.parallelPaths',
+    );
   if (spec.connection !== 'star' && spec.connection !== 'delta')
     return fail('invalid-input', 'Connection must be star or delta.', 'Star (Y) or delta (Δ).', 'winding.connection');
 
@@ -124,18 +140,34 @@ export function analyseWinding(input: AnalyseWindingInput): EngineResult<Winding
   let flux: FluxAnalysis | null = null;
   if (input.core) {
     if (input.core.slots !== spec.slots)
-      return fail('invalid-input', `The core has ${input.core.slots} slots but the winding ${spec.slots}.`, 'Use one slot count.', 'core.slots');
+      return fail(
+        'invalid-input',
+        `The core has ${input.core.slots} slots but the winding ${spec.slots}.`,
+        'Use one slot count.',
+        'core.slots',
+      );
     const r = fluxAnalysis({
-      core: input.core, poles: spec.poles, lineVoltageV: input.supply.lineVoltageV, frequencyHz: input.supply.frequencyHz,
-      connection: spec.connection, seriesTurnsPerPhase: nPh, windingFactor,
+      core: input.core,
+      poles: spec.poles,
+      lineVoltageV: input.supply.lineVoltageV,
+      frequencyHz: input.supply.frequencyHz,
+      connection: spec.connection,
+      seriesTurnsPerPhase: nPh,
+      windingFactor,
       ...(input.options?.emfFraction !== undefined ? { emfFraction: input.options.emfFraction } : {}),
       ...(input.options?.limits ? { limits: input.options.limits } : {}),
     });
     if (!r.ok) return r;
     flux = r.value;
-    for (const [name, d] of [['Gap (peak)', flux.gapPeak], ['Tooth', flux.toothMax], ['Yoke', flux.yoke]] as const)
+    for (const [name, d] of [
+      ['Gap (peak)', flux.gapPeak],
+      ['Tooth', flux.toothMax],
+      ['Yoke', flux.yoke],
+    ] as const)
       if (d.verdict === 'high' || d.verdict === 'above-conservative')
-        warnings.push(`${name} flux density ${d.tesla.toFixed(3)} T is ${d.verdict === 'high' ? 'above the typical range' : 'above the conservative limit'}.`);
+        warnings.push(
+          `${name} flux density ${d.tesla.toFixed(3)} T is ${d.verdict === 'high' ? 'above the typical range' : 'above the conservative limit'}.`,
+        );
   }
 
   const analysis: WindingAnalysis = {
@@ -157,7 +189,11 @@ export function analyseWinding(input: AnalyseWindingInput): EngineResult<Winding
   };
   return isAllFinite(analysis)
     ? ok(analysis)
-    : fail('non-finite-result', 'Part of the winding analysis did not come out as a finite number.', 'Check the inputs for zero or missing values.');
+    : fail(
+        'non-finite-result',
+        'Part of the winding analysis did not come out as a finite number.',
+        'Check the inputs for zero or missing values.',
+      );
 }
 
 /** The engine's promise, checked on whole results: no NaN or Infinity anywhere in `value`. */

@@ -23,8 +23,7 @@ export const ENAMEL_GRADE_FACTOR: Readonly<Record<EnamelGrade, number>> = { 1: 0
 
 const { small, large } = GRADE2_ANCHORS;
 /** Exponent x of Δ = c·d^x, fitted through both anchors: x − 1 = ln(f_large/f_small)/ln(d_large/d_small). */
-export const GRADE2_EXPONENT =
-  1 + Math.log(large.increaseFraction / small.increaseFraction) / Math.log(large.bareMm / small.bareMm);
+export const GRADE2_EXPONENT = 1 + Math.log(large.increaseFraction / small.increaseFraction) / Math.log(large.bareMm / small.bareMm);
 /** Coefficient c (mm^(1−x)) of Δ = c·d^x, so that Δ(0.5 mm) = 8 % of 0.5 mm. */
 export const GRADE2_COEFFICIENT = (small.increaseFraction * small.bareMm) / small.bareMm ** GRADE2_EXPONENT;
 

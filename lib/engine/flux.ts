@@ -162,23 +162,48 @@ const positive = (v: number): boolean => Number.isFinite(v) && v > 0;
 function checkFluxInput(i: FluxInput): EngineResult<null> {
   const c = i.core;
   const need: [number, string, string][] = [
-    [c.boreM, 'core.boreMm', 'bore'], [c.coreLengthM, 'core.coreLengthMm', 'core length'],
-    [c.outsideDiameterM, 'core.outsideDiameterMm', 'core outside diameter'], [c.slots, 'core.slots', 'slot count'],
-    [c.slotDepthM, 'core.slotDepthMm', 'slot depth'], [c.toothWidthM, 'core.toothWidthMm', 'tooth width'],
-    [i.poles, 'supply.poles', 'pole count'], [i.lineVoltageV, 'supply.lineVoltageV', 'line voltage'],
-    [i.frequencyHz, 'supply.frequencyHz', 'frequency'], [i.seriesTurnsPerPhase, 'winding.turnsPerCoil', 'series turns per phase'],
+    [c.boreM, 'core.boreMm', 'bore'],
+    [c.coreLengthM, 'core.coreLengthMm', 'core length'],
+    [c.outsideDiameterM, 'core.outsideDiameterMm', 'core outside diameter'],
+    [c.slots, 'core.slots', 'slot count'],
+    [c.slotDepthM, 'core.slotDepthMm', 'slot depth'],
+    [c.toothWidthM, 'core.toothWidthMm', 'tooth width'],
+    [i.poles, 'supply.poles', 'pole count'],
+    [i.lineVoltageV, 'supply.lineVoltageV', 'line voltage'],
+    [i.frequencyHz, 'supply.frequencyHz', 'frequency'],
+    [i.seriesTurnsPerPhase, 'winding.turnsPerCoil', 'series turns per phase'],
     [i.windingFactor, 'winding.spans', 'winding factor'],
   ];
   for (const [v, field, what] of need)
     if (!positive(v)) return fail('invalid-input', `The ${what} must be more than zero (got ${v}).`, `Enter the ${what}.`, field);
   if (!(c.stackingFactor > 0 && c.stackingFactor <= 1))
-    return fail('invalid-input', `Stacking factor must be above 0 and at most 1 (got ${c.stackingFactor}).`, 'Typical laminations stack at 0.93–0.97.', 'core.stackingFactor');
+    return fail(
+      'invalid-input',
+      `Stacking factor must be above 0 and at most 1 (got ${c.stackingFactor}).`,
+      'Typical laminations stack at 0.93–0.97.',
+      'core.stackingFactor',
+    );
   if (i.emfFraction !== undefined && !(i.emfFraction > 0 && i.emfFraction <= 1.2))
-    return fail('invalid-input', `EMF fraction ${i.emfFraction} is out of range.`, 'Use 1 for E = V_ph, or 0.95–0.98 for the air-gap EMF at full load.', 'emfFraction');
+    return fail(
+      'invalid-input',
+      `EMF fraction ${i.emfFraction} is out of range.`,
+      'Use 1 for E = V_ph, or 0.95–0.98 for the air-gap EMF at full load.',
+      'emfFraction',
+    );
   if (!(netIronLengthM(c) > 0))
-    return fail('invalid-input', 'The vent ducts take up the whole core length.', 'Check the number and width of the vent ducts.', 'core.ventDucts');
+    return fail(
+      'invalid-input',
+      'The vent ducts take up the whole core length.',
+      'Check the number and width of the vent ducts.',
+      'core.ventDucts',
+    );
   if (!((c.outsideDiameterM - c.boreM) / 2 - c.slotDepthM > 0))
-    return fail('invalid-input', 'No back iron is left: (outside diameter − bore)/2 − slot depth is not above zero.', 'Check the bore, outside diameter and slot depth.', 'core.slotDepthMm');
+    return fail(
+      'invalid-input',
+      'No back iron is left: (outside diameter − bore)/2 − slot depth is not above zero.',
+      'Check the bore, outside diameter and slot depth.',
+      'core.slotDepthMm',
+    );
   return ok(null);
 }
 
@@ -192,17 +217,26 @@ export function fluxAnalysis(input: FluxInput): EngineResult<FluxAnalysis> {
   const phi = fluxPerPoleWb(emfV, input.frequencyHz, input.seriesTurnsPerPhase, input.windingFactor);
   const d = fluxDensities(input.core, input.poles, phi);
   const density = (kind: FluxDensity['kind'], tesla: number, limit: FluxLimit): FluxDensity => ({
-    kind, tesla, kilolinesPerIn2: teslaToKilolinesPerIn2(tesla), verdict: judgeFlux(tesla, limit), limit,
+    kind,
+    tesla,
+    kilolinesPerIn2: teslaToKilolinesPerIn2(tesla),
+    verdict: judgeFlux(tesla, limit),
+    limit,
   });
   const values = [phi, d.gapAverageT, d.gapPeakT, d.toothMaxT, d.yokeT];
   if (!values.every(Number.isFinite))
     return fail('non-finite-result', 'The flux calculation did not give a finite result.', 'Check the core dimensions and the supply.');
-  const remarks = input.emfFraction === undefined || input.emfFraction === 1
-    // The 0.95–0.98 figure is [common practice]; printed as shop practice.
-    ? ['E taken equal to V_ph; the air-gap EMF is about 0.95–0.98·V_ph at full load (shop practice), which ratios ignore.']
-    : [];
+  const remarks =
+    input.emfFraction === undefined || input.emfFraction === 1
+      ? // The 0.95–0.98 figure is [common practice]; printed as shop practice.
+        ['E taken equal to V_ph; the air-gap EMF is about 0.95–0.98·V_ph at full load (shop practice), which ratios ignore.']
+      : [];
   return ok({
-    phaseVoltageV, emfV, fluxPerPoleWb: phi, slotPitchM: d.slotPitchM, yokeDepthM: d.yokeDepthM,
+    phaseVoltageV,
+    emfV,
+    fluxPerPoleWb: phi,
+    slotPitchM: d.slotPitchM,
+    yokeDepthM: d.yokeDepthM,
     gapAverage: density('average', d.gapAverageT, limits.gapAverage),
     gapPeak: density('peak', d.gapPeakT, limits.gapPeak),
     toothMax: density('max', d.toothMaxT, limits.tooth),

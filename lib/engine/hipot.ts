@@ -74,21 +74,27 @@ export function hipotTestVoltage(input: HipotInput): EngineResult<HipotLevels> {
     newAc = IEC_MINIMUM_AC_V;
   }
   const fraction =
-    input.case === 'new' ? 1 :
-    input.case === 'repeat' ? REPEAT_FRACTION :
-    input.practice === 'nema' ? RECONDITIONED_FRACTION_NEMA : RECONDITIONED_FRACTION_IEC;
+    input.case === 'new'
+      ? 1
+      : input.case === 'repeat'
+        ? REPEAT_FRACTION
+        : input.practice === 'nema'
+          ? RECONDITIONED_FRACTION_NEMA
+          : RECONDITIONED_FRACTION_IEC;
   const acV = roundVolts(newAc * fraction);
   const dcV = roundVolts(newAc * fraction * DC_TO_AC_RATIO);
   if (!Number.isFinite(dcV)) {
     return fail('non-finite-result', 'The test voltage is out of range.', 'Check the rated voltage.', 'ratedVoltageV');
   }
   const caseText =
-    input.case === 'new' ? 'new winding' :
-    input.case === 'repeat' ? 'repeat test, 80 % of the new-winding level' :
-    // Both reconditioned fractions are [from memory] (AR100, IEC 60034-1); see docs/engineering/final-tests.md.
-    input.practice === 'nema'
-      ? 'reconditioned winding, 65 % of the new-winding level'
-      : 'partial rewind or reconditioned winding, 75 % of the new-winding level';
+    input.case === 'new'
+      ? 'new winding'
+      : input.case === 'repeat'
+        ? 'repeat test, 80 % of the new-winding level'
+        : // Both reconditioned fractions are [from memory] (AR100, IEC 60034-1); see docs/engineering/final-tests.md.
+          input.practice === 'nema'
+          ? 'reconditioned winding, 65 % of the new-winding level'
+          : 'partial rewind or reconditioned winding, 75 % of the new-winding level';
   return ok({
     acV,
     dcV,

@@ -58,10 +58,13 @@ export function irTestVoltageDc(ratedLineVoltageV: number): IrTestVoltage {
   const v = ratedLineVoltageV;
   if (v < 1000) return { minV: 500, maxV: 500, rule: 'IEEE 43: 500 V DC for windings rated below 1000 V' };
   const band: [number, number, string] =
-    v <= 2500 ? [500, 1000, '1000–2500 V'] :
-    v <= 5000 ? [1000, 2500, '2501–5000 V'] :
-    v <= 12000 ? [2500, 5000, '5001–12 000 V'] :
-    [5000, 10000, 'above 12 000 V'];
+    v <= 2500
+      ? [500, 1000, '1000–2500 V']
+      : v <= 5000
+        ? [1000, 2500, '2501–5000 V']
+        : v <= 12000
+          ? [2500, 5000, '5001–12 000 V']
+          : [5000, 10000, 'above 12 000 V'];
   return {
     minV: band[0],
     maxV: band[1],
@@ -89,7 +92,8 @@ export function insulationResistanceVerdict(input: {
   }
   const value = irCorrectedTo40C(input.ir1MinMOhm, input.temperatureC);
   const limit = minimumIr1MinMOhm(input.category, input.ratedLineVoltageV);
-  if (!Number.isFinite(value)) return fail('non-finite-result', 'The corrected IR is out of range.', 'Check the temperature.', 'temperatureC');
+  if (!Number.isFinite(value))
+    return fail('non-finite-result', 'The corrected IR is out of range.', 'Check the temperature.', 'temperatureC');
   return ok({
     pass: value >= limit,
     value,

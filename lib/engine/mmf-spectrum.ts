@@ -92,7 +92,8 @@ export function mmfSpectrum(table: SlotTable, supply: { frequencyHz: number }, m
     const nu = n / p;
     const forward = relativeTo(f1, waveSum(star, n, lag, -1) / n);
     const backward = relativeTo(f1, waveSum(star, n, lag, 1) / n);
-    const direction: MmfDirection = forward > 0 && backward > 0 ? 'both' : forward > 0 ? 'forward' : backward > 0 ? 'backward' : 'cancelled';
+    const direction: MmfDirection =
+      forward > 0 && backward > 0 ? 'both' : forward > 0 ? 'forward' : backward > 0 ? 'backward' : 'cancelled';
     const speedFraction = direction === 'cancelled' ? 0 : (forward >= backward ? 1 : -1) / nu;
     harmonics.push({
       order: nu,

@@ -6,9 +6,7 @@ import { fail, finiteOr, ok, type EngineResult } from './result';
 import type { ThermalClass } from './winding-sheet';
 
 /** NEMA locked-rotor code letters (MG 1 10.37.2); I, O and Q are not used. */
-export type CodeLetter =
-  | 'A' | 'B' | 'C' | 'D' | 'E' | 'F' | 'G' | 'H' | 'J' | 'K'
-  | 'L' | 'M' | 'N' | 'P' | 'R' | 'S' | 'T' | 'U' | 'V';
+export type CodeLetter = 'A' | 'B' | 'C' | 'D' | 'E' | 'F' | 'G' | 'H' | 'J' | 'K' | 'L' | 'M' | 'N' | 'P' | 'R' | 'S' | 'T' | 'U' | 'V';
 
 /** A code letter's locked-rotor kVA/hp range. */
 export interface KvaPerHpRange {
@@ -23,8 +21,25 @@ export interface KvaPerHpRange {
  * V 22.4 and up; each range includes its lower bound and stops short of the upper one.
  */
 export const CODE_LETTER_UPPER_BOUNDS: Readonly<Record<CodeLetter, number | null>> = {
-  A: 3.15, B: 3.55, C: 4.0, D: 4.5, E: 5.0, F: 5.6, G: 6.3, H: 7.1, J: 8.0, K: 9.0,
-  L: 10.0, M: 11.2, N: 12.5, P: 14.0, R: 16.0, S: 18.0, T: 20.0, U: 22.4, V: null,
+  A: 3.15,
+  B: 3.55,
+  C: 4.0,
+  D: 4.5,
+  E: 5.0,
+  F: 5.6,
+  G: 6.3,
+  H: 7.1,
+  J: 8.0,
+  K: 9.0,
+  L: 10.0,
+  M: 11.2,
+  N: 12.5,
+  P: 14.0,
+  R: 16.0,
+  S: 18.0,
+  T: 20.0,
+  U: 22.4,
+  V: null,
 };
 
 /** Code letters in ascending kVA/hp order. */

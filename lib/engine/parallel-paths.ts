@@ -58,14 +58,17 @@ function unitKey(unit: CoilSide[], shift: number, sign: number, slots: number): 
     const kb = shiftedSideKey(b, shift, sign, slots);
     return ka < kb ? ka * SIDE_KEYS + kb : kb * SIDE_KEYS + ka;
   }
-  return unit.map((s) => shiftedSideKey(s, shift, sign, slots)).sort((x, y) => x - y).reduce((acc, k) => acc * SIDE_KEYS + k, 0);
+  return unit
+    .map((s) => shiftedSideKey(s, shift, sign, slots))
+    .sort((x, y) => x - y)
+    .reduce((acc, k) => acc * SIDE_KEYS + k, 0);
 }
 
 /** Smallest valid shift of one phase's units, its polarity factor σ, and the number of sections S/k. */
 function phaseSymmetry(units: CoilSide[][], slots: number, polePairs: number): { shift: number; sign: number } {
   const present = new Set(units.map((u) => unitKey(u, 0, 1, slots)));
   for (const k of divisors(slots)) {
-    if (k === slots || ((2 * k * polePairs) % slots) !== 0) continue;
+    if (k === slots || (2 * k * polePairs) % slots !== 0) continue;
     for (const sign of [1, -1]) if (units.every((u) => present.has(unitKey(u, k, sign, slots)))) return { shift: k, sign };
   }
   return { shift: slots, sign: 1 };
@@ -77,7 +80,12 @@ function phaseSymmetry(units: CoilSide[][], slots: number, polePairs: number): {
  * (σ·e^{j·k·p·360°/S})^i = ±1 and is connected reversed when that is −1; returns each unit's section and
  * its phasor at the working order with that reversal applied.
  */
-function sectionedPhasors(units: CoilSide[][], slots: number, polePairs: number, sym: { shift: number; sign: number }): { section: number[]; phasor: Phasor[] } {
+function sectionedPhasors(
+  units: CoilSide[][],
+  slots: number,
+  polePairs: number,
+  sym: { shift: number; sign: number },
+): { section: number[]; phasor: Phasor[] } {
   const n = slots / sym.shift;
   const rho = ((2 * sym.shift * polePairs) / slots) % 2 === 0 ? 1 : -1;
   const index = new Map(units.map((u, i) => [unitKey(u, 0, 1, slots), i]));
@@ -129,7 +137,10 @@ export function allowedParallelPaths(table: SlotTable): ParallelPathAnalysis {
   let sections = 0;
   const perPhase = new Map<Phase, { section: number[]; phasor: Phasor[] }>();
   for (const ph of PHASES) {
-    const units = unitsOf(table.sides.filter((s) => s.phase === ph), byCoil);
+    const units = unitsOf(
+      table.sides.filter((s) => s.phase === ph),
+      byCoil,
+    );
     const sym = phaseSymmetry(units, table.slots, table.poles / 2);
     perPhase.set(ph, sectionedPhasors(units, table.slots, table.poles / 2, sym));
     sections = sections === 0 ? table.slots / sym.shift : gcdInt(sections, table.slots / sym.shift);
@@ -155,7 +166,9 @@ export function allowedParallelPaths(table: SlotTable): ParallelPathAnalysis {
     sections,
     basis: byCoil ? 'coils' : 'coil-sides',
     checks,
-    ...(byCoil ? {} : { note: 'The slot table has no coil numbers: paths were judged side by side. Check that each path takes whole coils.' }),
+    ...(byCoil
+      ? {}
+      : { note: 'The slot table has no coil numbers: paths were judged side by side. Check that each path takes whole coils.' }),
   };
 }
 

@@ -61,5 +61,14 @@ export function phaseBalance(phasors: Record<Phase, Phasor>, tolerance: BalanceT
     reasons.push(`Phase EMFs differ by ${(magnitudeSpread * 100).toFixed(2)} % (allowed ${(tolerance.magnitude * 100).toFixed(2)} %).`);
   if (angleErrorDeg > tolerance.angleDeg)
     reasons.push(`Phases are ${angleErrorDeg.toFixed(2)}° away from 120° spacing (allowed ${tolerance.angleDeg}°).`);
-  return { magnitudes, anglesDeg, sequence, magnitudeSpread, angleErrorDeg, verdict: reasons.length === 0 ? 'balanced' : 'unbalanced', reasons, tolerance };
+  return {
+    magnitudes,
+    anglesDeg,
+    sequence,
+    magnitudeSpread,
+    angleErrorDeg,
+    verdict: reasons.length === 0 ? 'balanced' : 'unbalanced',
+    reasons,
+    tolerance,
+  };
 }

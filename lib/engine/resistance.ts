@@ -136,12 +136,16 @@ export function resistanceUnbalanceVerdict(readings: readonly number[], kind: Wi
   }
   const value = resistanceUnbalance(readings).unbalanceFraction;
   const limit = unbalanceLimitFraction(kind);
-  return finiteOr(value, (v) => ({
-    pass: v <= limit,
-    value: v,
-    limit,
-    rule: `ANSI/EASA AR100-2020: (max − min)/average ≤ ${limit * 100} % for ${kind}-wound windings`,
-  }), 'Resistance unbalance');
+  return finiteOr(
+    value,
+    (v) => ({
+      pass: v <= limit,
+      value: v,
+      limit,
+      rule: `ANSI/EASA AR100-2020: (max − min)/average ≤ ${limit * 100} % for ${kind}-wound windings`,
+    }),
+    'Resistance unbalance',
+  );
 }
 
 /** Predicted against measured: (measured − predicted)/predicted × 100, in percent (positive: measured higher). */

@@ -27,12 +27,10 @@ export type EngineResult<T> = { ok: true; value: T } | { ok: false; error: Engin
 
 export const ok = <T>(value: T): EngineResult<T> => ({ ok: true, value });
 
-export const fail = (
-  code: EngineErrorCode,
-  message: string,
-  hint: string,
-  field?: string,
-): EngineResult<never> => ({ ok: false, error: { code, message, hint, ...(field ? { field } : {}) } });
+export const fail = (code: EngineErrorCode, message: string, hint: string, field?: string): EngineResult<never> => ({
+  ok: false,
+  error: { code, message, hint, ...(field ? { field } : {}) },
+});
 
 /** Guards the engine's promise that no NaN or Infinity leaves it. */
 export function finiteOr<T>(value: number, make: (v: number) => T, what: string): EngineResult<T> {

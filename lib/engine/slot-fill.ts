@@ -33,7 +33,11 @@ const invalid = (field: string, message: string): EngineResult<never> =>
 
 function checkShape(s: SlotShape): EngineResult<never> | null {
   const { depthMm, topWidthMm, bottomWidthMm } = s;
-  for (const [field, v] of [['depthMm', depthMm], ['topWidthMm', topWidthMm], ['bottomWidthMm', bottomWidthMm]] as const) {
+  for (const [field, v] of [
+    ['depthMm', depthMm],
+    ['topWidthMm', topWidthMm],
+    ['bottomWidthMm', bottomWidthMm],
+  ] as const) {
     if (!(v > 0) || !Number.isFinite(v)) return invalid(field, `${field} must be a positive number.`);
   }
   if (s.roundBottom && bottomWidthMm / 2 > depthMm) {
@@ -69,7 +73,11 @@ export function netSlotAreaMm2(s: SlotShape, ins: SlotInsulation): EngineResult<
   const t = ins.linerThicknessMm;
   const w = ins.wedgeDepthMm;
   const sep = ins.separatorThicknessMm ?? 0;
-  for (const [field, v] of [['linerThicknessMm', t], ['wedgeDepthMm', w], ['separatorThicknessMm', sep]] as const) {
+  for (const [field, v] of [
+    ['linerThicknessMm', t],
+    ['wedgeDepthMm', w],
+    ['separatorThicknessMm', sep],
+  ] as const) {
     if (!(v >= 0) || !Number.isFinite(v)) return invalid(field, `${field} must be zero or a positive number.`);
   }
   const h = straightDepthMm(s);

@@ -82,20 +82,42 @@ export interface SupplyScaling extends FluxRatio {
 function basisOf(c: ScalingCase, which: 'old' | 'new'): EngineResult<FluxBasis> {
   const { lineVoltageV, frequencyHz } = c.supply;
   if (!(Number.isFinite(lineVoltageV) && lineVoltageV > 0))
-    return fail('invalid-input', `The ${which} line voltage must be more than zero.`, 'Enter the supply voltage.', `${which}.supply.lineVoltageV`);
+    return fail(
+      'invalid-input',
+      `The ${which} line voltage must be more than zero.`,
+      'Enter the supply voltage.',
+      `${which}.supply.lineVoltageV`,
+    );
   if (!(Number.isFinite(frequencyHz) && frequencyHz > 0))
     return fail('invalid-input', `The ${which} frequency must be more than zero.`, 'Enter 50 or 60 Hz.', `${which}.supply.frequencyHz`);
   const layout = windingLayout(c.winding);
   if (!layout.ok) return fail(layout.error.code, layout.error.message, layout.error.hint, `${which}.${layout.error.field ?? 'winding'}`);
   const a = c.winding.parallelPaths;
   if (!(Number.isInteger(a) && a >= 1 && a <= layout.value.sides.length / 6))
-    return fail('invalid-input', `The ${which} parallel path count must be a whole number from 1 to the coils per phase.`, 'Count the circuits per phase.', `${which}.winding.parallelPaths`);
+    return fail(
+      'invalid-input',
+      `The ${which} parallel path count must be a whole number from 1 to the coils per phase.`,
+      'Count the circuits per phase.',
+      `${which}.winding.parallelPaths`,
+    );
   const star = new SlotStar(layout.value);
   const p = layout.value.poles / 2;
   const windingFactor = (star.factor('A', p) + star.factor('B', p) + star.factor('C', p)) / 3;
   if (!(windingFactor > 0))
-    return fail('unbalanced-layout', `The ${which} winding has no EMF at the working order.`, 'Check the spans and the slot table.', `${which}.winding.spans`);
-  return ok({ lineVoltageV, frequencyHz, connection: c.winding.connection, seriesTurnsPerPhase: seriesTurnsPerPhase(layout.value, a), windingFactor, poles: c.winding.poles });
+    return fail(
+      'unbalanced-layout',
+      `The ${which} winding has no EMF at the working order.`,
+      'Check the spans and the slot table.',
+      `${which}.winding.spans`,
+    );
+  return ok({
+    lineVoltageV,
+    frequencyHz,
+    connection: c.winding.connection,
+    seriesTurnsPerPhase: seriesTurnsPerPhase(layout.value, a),
+    windingFactor,
+    poles: c.winding.poles,
+  });
 }
 
 /**
@@ -104,7 +126,12 @@ function basisOf(c: ScalingCase, which: 'old' | 'new'): EngineResult<FluxBasis> 
  */
 export function supplyScaling(old: ScalingCase, next: ScalingCase, tolerance?: RatioTolerance): EngineResult<SupplyScaling> {
   if (old.winding.slots !== next.winding.slots)
-    return fail('not-applicable', 'The new winding has a different slot count: that is a different core.', 'Compare windings on the same core.', 'new.core.slots');
+    return fail(
+      'not-applicable',
+      'The new winding has a different slot count: that is a different core.',
+      'Compare windings on the same core.',
+      'new.core.slots',
+    );
   const a = basisOf(old, 'old');
   if (!a.ok) return a;
   const b = basisOf(next, 'new');

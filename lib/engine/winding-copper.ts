@@ -32,8 +32,18 @@ export interface WindingCopper {
 
 export function windingCopper(input: WindingCopperInput): EngineResult<WindingCopper> {
   const { seriesTurnsPerPhase, parallelPaths, meanTurnLengthMm, wires } = input;
-  for (const [field, v] of [['seriesTurnsPerPhase', seriesTurnsPerPhase], ['parallelPaths', parallelPaths], ['meanTurnLengthMm', meanTurnLengthMm]] as const) {
-    if (!(v > 0) || !Number.isFinite(v)) return fail('invalid-input', `${field} must be a positive number.`, 'Fill in the winding data (turns, circuits and mean turn length).', field);
+  for (const [field, v] of [
+    ['seriesTurnsPerPhase', seriesTurnsPerPhase],
+    ['parallelPaths', parallelPaths],
+    ['meanTurnLengthMm', meanTurnLengthMm],
+  ] as const) {
+    if (!(v > 0) || !Number.isFinite(v))
+      return fail(
+        'invalid-input',
+        `${field} must be a positive number.`,
+        'Fill in the winding data (turns, circuits and mean turn length).',
+        field,
+      );
   }
   if (wires.length === 0 || wires.some((w) => !(w.count > 0) || !(w.areaMm2 > 0) || !Number.isFinite(w.areaMm2)))
     return fail('invalid-input', 'Every wire in hand needs a positive count and area.', 'Check the wires in hand.', 'wires');

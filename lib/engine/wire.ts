@@ -94,9 +94,7 @@ function awgRow(n: number): AwgTableRow {
   };
 }
 
-const AWG_ROWS: readonly AwgTableRow[] = Array.from({ length: AWG_MAX_N - AWG_MIN_N + 1 }, (_, i) =>
-  awgRow(AWG_MIN_N + i),
-);
+const AWG_ROWS: readonly AwgTableRow[] = Array.from({ length: AWG_MAX_N - AWG_MIN_N + 1 }, (_, i) => awgRow(AWG_MIN_N + i));
 
 const METRIC_ROWS: readonly MetricTableRow[] = METRIC_NOMINAL_SIZES.map(({ diameterMm, series }) => ({
   standard: 'metric',
@@ -197,9 +195,5 @@ export function nearestMetricForDiameterMm(diameterMm: number): EngineResult<Nea
 export function awgResistanceOhmPer1000ft(gauge: string | number): EngineResult<number> {
   const found = findWire({ standard: 'awg', size: String(gauge) });
   if (!found.ok) return found;
-  return finiteOr(
-    (COPPER_RESISTIVITY_20C_OHM_MM2_PER_M * 1000 * M_PER_FOOT) / found.value.areaMm2,
-    (r) => r,
-    'Resistance per 1000 ft',
-  );
+  return finiteOr((COPPER_RESISTIVITY_20C_OHM_MM2_PER_M * 1000 * M_PER_FOOT) / found.value.areaMm2, (r) => r, 'Resistance per 1000 ft');
 }

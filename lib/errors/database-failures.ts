@@ -5,9 +5,41 @@
  * wrong". Matched on Prisma's and node-postgres's codes and messages, which are stable across versions.
  */
 const BUSY_CODES = new Set(['P2024', 'P2028', 'P2034']); // pool timeout, transaction API (start timeout, expired), write conflict
-const DOWN_CODES = new Set(['P1001', 'P1002', 'P1017', 'ECONNREFUSED', 'ECONNRESET', 'EPIPE', 'ETIMEDOUT', '57P01', '57P02', '57P03', '08006', '08003', '08001']);
-const BUSY_TEXT = ['unable to start a transaction in the given time', 'transaction already closed', 'expired transaction', 'timed out fetching a new connection', 'timeout exceeded when trying to connect', 'could not serialize access'];
-const DOWN_TEXT = ['connection terminated', 'terminating connection due to administrator command', 'the database system is starting up', 'the database system is shutting down', "can't reach database server", 'connection refused', 'server closed the connection', 'client has encountered a connection error', 'econnrefused', 'econnreset'];
+const DOWN_CODES = new Set([
+  'P1001',
+  'P1002',
+  'P1017',
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'EPIPE',
+  'ETIMEDOUT',
+  '57P01',
+  '57P02',
+  '57P03',
+  '08006',
+  '08003',
+  '08001',
+]);
+const BUSY_TEXT = [
+  'unable to start a transaction in the given time',
+  'transaction already closed',
+  'expired transaction',
+  'timed out fetching a new connection',
+  'timeout exceeded when trying to connect',
+  'could not serialize access',
+];
+const DOWN_TEXT = [
+  'connection terminated',
+  'terminating connection due to administrator command',
+  'the database system is starting up',
+  'the database system is shutting down',
+  "can't reach database server",
+  'connection refused',
+  'server closed the connection',
+  'client has encountered a connection error',
+  'econnrefused',
+  'econnreset',
+];
 
 function codesAndText(err: unknown, depth = 0): { codes: string[]; text: string } {
   if (!err || typeof err !== 'object' || depth > 4) return { codes: [], text: typeof err === 'string' ? err.toLowerCase() : '' };

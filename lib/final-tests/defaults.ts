@@ -4,11 +4,7 @@
  * record's basis and instruments. The winder can change every default; the hints say where each came from.
  */
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
-import {
-  INSULATION_CLASSES,
-  type TestDataInput,
-  type TestDataValues,
-} from '@/lib/final-tests/test-record-schema';
+import { INSULATION_CLASSES, type TestDataInput, type TestDataValues } from '@/lib/final-tests/test-record-schema';
 import { DEFAULT_VIBRATION_LIMIT_MM_S } from './verdicts';
 import { ratingSourceText, type AsRepairedRating } from './test-rating';
 
@@ -41,7 +37,10 @@ export const FORM_WOUND_FROM_V = 1000;
  * random-wound or below 1 kV → 5 MΩ, else form-wound 100 MΩ. Hipot practice: NEMA for 60 Hz motors, IEC
  * for 50 Hz [our choice; the shop's own practice governs].
  */
-export function basisDefaults(motor: MotorBasis, sheet: WindingSheet | null): { basis: TestDataInput['basis']; practice: 'nema' | 'iec'; sources: BasisSources } {
+export function basisDefaults(
+  motor: MotorBasis,
+  sheet: WindingSheet | null,
+): { basis: TestDataInput['basis']; practice: 'nema' | 'iec'; sources: BasisSources } {
   const r = motor.rating;
   const volts = r.ratedVoltageV ?? sheet?.supply.lineVoltageV;
   const plateClass = asClass(motor.insulationClass);
@@ -50,7 +49,7 @@ export function basisDefaults(motor: MotorBasis, sheet: WindingSheet | null): { 
   const windingKind = volts !== undefined && volts >= FORM_WOUND_FROM_V ? 'form' : 'random';
   const hz = r.frequencyHz ?? sheet?.supply.frequencyHz;
   const practice = hz === 50 ? 'iec' : 'nema';
-  const blankIfNone = <T,>(v: T | undefined): T | '' => (v === undefined ? '' : v);
+  const blankIfNone = <T>(v: T | undefined): T | '' => (v === undefined ? '' : v);
   return {
     basis: {
       ratedVoltageV: volts ?? '',
@@ -68,7 +67,12 @@ export function basisDefaults(motor: MotorBasis, sheet: WindingSheet | null): { 
     },
     practice,
     sources: {
-      ratedVoltageV: r.ratedVoltageV !== undefined ? ratingSourceText(r) : volts !== undefined ? 'from the as-found sheet' : 'not on the nameplate: enter it',
+      ratedVoltageV:
+        r.ratedVoltageV !== undefined
+          ? ratingSourceText(r)
+          : volts !== undefined
+            ? 'from the as-found sheet'
+            : 'not on the nameplate: enter it',
       rating: ratingSourceText(r),
       insulationClass: plateClass ? 'from the nameplate' : sheetClass ? 'from the as-found sheet' : 'not recorded: pick it',
       windingKind: `${sheet ? 'round wire on the as-found sheet, ' : ''}${windingKind === 'random' ? 'below' : 'at or above'} ${FORM_WOUND_FROM_V} V`,
@@ -77,7 +81,7 @@ export function basisDefaults(motor: MotorBasis, sheet: WindingSheet | null): { 
   };
 }
 
-const empty3 = <T,>(v: T): [T, T, T] => [v, v, v];
+const empty3 = <T>(v: T): [T, T, T] => [v, v, v];
 
 /**
  * Values for a new record's form. A retest starts from the previous record's basis, hipot practice and
@@ -88,7 +92,14 @@ export function newRecordDefaults(motor: MotorBasis, sheet: WindingSheet | null,
   return {
     // A retest keeps the previous class and winding kind, but the rating is always the current one (a
     // redesign approved since the last record changes what the motor is judged for).
-    basis: previous ? { ...basis, insulationClass: previous.basis.insulationClass, windingKind: previous.basis.windingKind, irCategory: previous.basis.irCategory } : basis,
+    basis: previous
+      ? {
+          ...basis,
+          insulationClass: previous.basis.insulationClass,
+          windingKind: previous.basis.windingKind,
+          irCategory: previous.basis.irCategory,
+        }
+      : basis,
     ir: { testVoltageV: '', temperatureC: '', ir1MinMOhm: '', ir10MinMOhm: '', instrumentSerial: previous?.ir.instrumentSerial ?? '' },
     hipot: {
       case: previous ? 'repeat' : 'new',
@@ -100,7 +111,11 @@ export function newRecordDefaults(motor: MotorBasis, sheet: WindingSheet | null,
       result: '',
       instrumentSerial: previous?.hipot.instrumentSerial ?? '',
     },
-    surge: { testVoltageV: '', phases: empty3({ result: '', notes: '' }).map((p) => ({ ...p })) as TestDataInput['surge']['phases'], instrumentSerial: previous?.surge.instrumentSerial ?? '' },
+    surge: {
+      testVoltageV: '',
+      phases: empty3({ result: '', notes: '' }).map((p) => ({ ...p })) as TestDataInput['surge']['phases'],
+      instrumentSerial: previous?.surge.instrumentSerial ?? '',
+    },
     resistance: {
       between: previous?.resistance.between ?? sheet?.resistance?.between ?? 'line-to-line',
       readings: empty3(''),
@@ -126,25 +141,55 @@ export function newRecordDefaults(motor: MotorBasis, sheet: WindingSheet | null,
 
 /** A saved record as form values: numbers stay numbers, absent values become empty inputs. */
 export function recordToFormData(d: TestDataValues): TestDataInput {
-  const e = <T,>(v: T | undefined): T | '' => (v === undefined ? '' : v);
+  const e = <T>(v: T | undefined): T | '' => (v === undefined ? '' : v);
   return {
     basis: {
-      ...d.basis, ratedOutputKw: e(d.basis.ratedOutputKw), frequencyHz: e(d.basis.frequencyHz), poles: e(d.basis.poles),
-      ratedCurrentA: e(d.basis.ratedCurrentA), ratedSpeedRpm: e(d.basis.ratedSpeedRpm), connection: e(d.basis.connection),
+      ...d.basis,
+      ratedOutputKw: e(d.basis.ratedOutputKw),
+      frequencyHz: e(d.basis.frequencyHz),
+      poles: e(d.basis.poles),
+      ratedCurrentA: e(d.basis.ratedCurrentA),
+      ratedSpeedRpm: e(d.basis.ratedSpeedRpm),
+      connection: e(d.basis.connection),
     },
-    ir: { testVoltageV: e(d.ir.testVoltageV), temperatureC: e(d.ir.temperatureC), ir1MinMOhm: e(d.ir.ir1MinMOhm), ir10MinMOhm: e(d.ir.ir10MinMOhm), instrumentSerial: e(d.ir.instrumentSerial) },
-    hipot: { ...d.hipot, appliedV: e(d.hipot.appliedV), durationS: e(d.hipot.durationS), leakageMa: e(d.hipot.leakageMa), result: e(d.hipot.result), instrumentSerial: e(d.hipot.instrumentSerial) },
+    ir: {
+      testVoltageV: e(d.ir.testVoltageV),
+      temperatureC: e(d.ir.temperatureC),
+      ir1MinMOhm: e(d.ir.ir1MinMOhm),
+      ir10MinMOhm: e(d.ir.ir10MinMOhm),
+      instrumentSerial: e(d.ir.instrumentSerial),
+    },
+    hipot: {
+      ...d.hipot,
+      appliedV: e(d.hipot.appliedV),
+      durationS: e(d.hipot.durationS),
+      leakageMa: e(d.hipot.leakageMa),
+      result: e(d.hipot.result),
+      instrumentSerial: e(d.hipot.instrumentSerial),
+    },
     surge: {
       testVoltageV: e(d.surge.testVoltageV),
       phases: d.surge.phases.map((p) => ({ result: e(p.result), notes: e(p.notes) })) as TestDataInput['surge']['phases'],
       instrumentSerial: e(d.surge.instrumentSerial),
     },
-    resistance: { ...d.resistance, readings: d.resistance.readings.map(e) as TestDataInput['resistance']['readings'], temperatureC: e(d.resistance.temperatureC), instrumentSerial: e(d.resistance.instrumentSerial) },
+    resistance: {
+      ...d.resistance,
+      readings: d.resistance.readings.map(e) as TestDataInput['resistance']['readings'],
+      temperatureC: e(d.resistance.temperatureC),
+      instrumentSerial: e(d.resistance.instrumentSerial),
+    },
     run: {
       ...d.run,
-      voltageV: e(d.run.voltageV), currentsA: d.run.currentsA.map(e) as TestDataInput['run']['currentsA'], speedRpm: e(d.run.speedRpm),
-      vibrationMmS: e(d.run.vibrationMmS), vibrationLimitMmS: e(d.run.vibrationLimitMmS), bearingDeC: e(d.run.bearingDeC), bearingOdeC: e(d.run.bearingOdeC),
-      result: e(d.run.result), notes: e(d.run.notes), instrumentSerial: e(d.run.instrumentSerial),
+      voltageV: e(d.run.voltageV),
+      currentsA: d.run.currentsA.map(e) as TestDataInput['run']['currentsA'],
+      speedRpm: e(d.run.speedRpm),
+      vibrationMmS: e(d.run.vibrationMmS),
+      vibrationLimitMmS: e(d.run.vibrationLimitMmS),
+      bearingDeC: e(d.run.bearingDeC),
+      bearingOdeC: e(d.run.bearingOdeC),
+      result: e(d.run.result),
+      notes: e(d.run.notes),
+      instrumentSerial: e(d.run.instrumentSerial),
     },
     notes: e(d.notes),
   };

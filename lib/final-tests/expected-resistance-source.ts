@@ -17,6 +17,10 @@ export async function expectedResistanceFor(jobId: string, sheet: StoredSheet | 
   const analysis = analyseSheet(sheet.sheet);
   const resistance = analysis.ok ? analysis.value.resistance : null;
   return resistance
-    ? { source: `as-found data sheet, revision ${sheet.revision}`, phaseOhm20: resistance.predictedPhaseOhm20, connection: sheet.sheet.winding.connection }
+    ? {
+        source: `as-found data sheet, revision ${sheet.revision}`,
+        phaseOhm20: resistance.predictedPhaseOhm20,
+        connection: sheet.sheet.winding.connection,
+      }
     : null;
 }

@@ -40,5 +40,7 @@ export function compareFinalResistance(
   const expectedOhm = final.between === 'phase' ? phaseAtT : lineToLineFromPhaseOhm(phaseAtT, expected.connection);
   const finalAverageOhm = readings.reduce((a, b) => a + b, 0) / readings.length;
   const differencePercent = ((finalAverageOhm - expectedOhm) / expectedOhm) * 100;
-  return Number.isFinite(differencePercent) ? { expectedOhm, finalAverageOhm, differencePercent, temperatureC: final.temperatureC, between: final.between } : null;
+  return Number.isFinite(differencePercent)
+    ? { expectedOhm, finalAverageOhm, differencePercent, temperatureC: final.temperatureC, between: final.between }
+    : null;
 }

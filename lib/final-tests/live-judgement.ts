@@ -58,7 +58,7 @@ export function lenientTestData(values: unknown): TestDataValues | null {
   const v = isObj(values) ? values : {};
   const basis = testBasisSchema.safeParse(v.basis);
   if (!basis.success) return null;
-  const or = <T,>(x: T | null, fallback: () => T): T => x ?? fallback();
+  const or = <T>(x: T | null, fallback: () => T): T => x ?? fallback();
   return {
     basis: basis.data,
     ir: or(parseLeniently(irSectionSchema, v.ir), () => irSectionSchema.parse({})),

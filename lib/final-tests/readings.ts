@@ -31,8 +31,10 @@ export const PRACTICE_TEXT = { nema: 'NEMA MG 1 / ANSI/EASA AR100', iec: 'IEC 60
  */
 export function ratingSentence(b: TestDataValues['basis']): string {
   const rating = [v(b.ratedVoltageV, 0, 'V'), b.frequencyHz === undefined ? null : v(b.frequencyHz, 0, 'Hz')].filter(Boolean).join(' ');
-  if (b.ratingSource === 'redesign' && b.redesignRevision !== undefined) return `judged for the as-repaired rating ${rating}, redesign revision ${b.redesignRevision}`;
-  if (b.ratingSource === 'entered') return `judged for the rating entered on this test record, ${rating}, which differs from the nameplate as received`;
+  if (b.ratingSource === 'redesign' && b.redesignRevision !== undefined)
+    return `judged for the as-repaired rating ${rating}, redesign revision ${b.redesignRevision}`;
+  if (b.ratingSource === 'entered')
+    return `judged for the rating entered on this test record, ${rating}, which differs from the nameplate as received`;
   return `judged for the nameplate rating ${rating}`;
 }
 
@@ -49,7 +51,9 @@ export function readingSections(d: TestDataValues, j: TestJudgement): ReadingSec
         ...(d.basis.frequencyHz === undefined ? [] : [{ label: 'Frequency', value: v(d.basis.frequencyHz, 0, 'Hz') }]),
         ...(d.basis.connection ? [{ label: 'Connection', value: d.basis.connection }] : []),
         ...(d.basis.ratedCurrentA === undefined ? [] : [{ label: 'Rated current', value: v(d.basis.ratedCurrentA, 1, 'A') }]),
-        ...(d.basis.ratedSpeedRpm === undefined ? [] : [{ label: 'Rated speed', value: `${v(d.basis.ratedSpeedRpm, 0, 'rpm')}${d.basis.poles ? ` (${d.basis.poles} poles)` : ''}` }]),
+        ...(d.basis.ratedSpeedRpm === undefined
+          ? []
+          : [{ label: 'Rated speed', value: `${v(d.basis.ratedSpeedRpm, 0, 'rpm')}${d.basis.poles ? ` (${d.basis.poles} poles)` : ''}` }]),
         { label: 'Insulation class', value: d.basis.insulationClass },
         { label: 'Winding', value: d.basis.windingKind === 'random' ? 'random-wound' : 'form-wound' },
         { label: 'IEEE 43 minimum', value: d.basis.irCategory },
@@ -74,9 +78,21 @@ export function readingSections(d: TestDataValues, j: TestJudgement): ReadingSec
       rows: [
         { label: 'Case', value: `${CASE_TEXT[d.hipot.case]}, ${PRACTICE_TEXT[d.hipot.practice]}` },
         { label: 'Proposed', value: levels ? `${levels.acV} V AC or ${levels.dcV} V DC` : '—' },
-        { label: 'Applied', value: d.hipot.appliedV === undefined ? '—' : `${d.hipot.appliedV} V ${d.hipot.kind.toUpperCase()} for ${v(d.hipot.durationS, 0, 's')}` },
-        { label: 'Leakage current', value: d.hipot.leakageMa === undefined ? '—' : `${leakageText(d.hipot.leakageMa)} (recorded, not judged)` },
-        { label: 'Winding held', value: d.hipot.result === 'pass' ? 'yes, no breakdown' : d.hipot.result === 'fail' ? '⚠ no: breakdown' : '—' },
+        {
+          label: 'Applied',
+          value:
+            d.hipot.appliedV === undefined
+              ? '—'
+              : `${d.hipot.appliedV} V ${d.hipot.kind.toUpperCase()} for ${v(d.hipot.durationS, 0, 's')}`,
+        },
+        {
+          label: 'Leakage current',
+          value: d.hipot.leakageMa === undefined ? '—' : `${leakageText(d.hipot.leakageMa)} (recorded, not judged)`,
+        },
+        {
+          label: 'Winding held',
+          value: d.hipot.result === 'pass' ? 'yes, no breakdown' : d.hipot.result === 'fail' ? '⚠ no: breakdown' : '—',
+        },
         ...(d.hipot.reducedReason ? [{ label: 'Reduced-level test', value: d.hipot.reducedReason }] : []),
         { label: 'Hipot tester', value: d.hipot.instrumentSerial ?? '—' },
       ],
@@ -86,7 +102,10 @@ export function readingSections(d: TestDataValues, j: TestJudgement): ReadingSec
       title: SECTION_TITLES.surge,
       rows: [
         { label: 'Test voltage', value: v(d.surge.testVoltageV, 0, 'V peak') },
-        ...d.surge.phases.map((p, i) => ({ label: `Phase ${PHASE_NAMES[i]}`, value: `${result(p.result)}${p.notes ? ` — ${p.notes}` : ''}` })),
+        ...d.surge.phases.map((p, i) => ({
+          label: `Phase ${PHASE_NAMES[i]}`,
+          value: `${result(p.result)}${p.notes ? ` — ${p.notes}` : ''}`,
+        })),
         { label: 'Surge tester', value: d.surge.instrumentSerial ?? '—' },
       ],
     },
@@ -96,7 +115,10 @@ export function readingSections(d: TestDataValues, j: TestJudgement): ReadingSec
       rows: [
         ...d.resistance.readings.map((r, i) => ({
           label: pairs[i] ?? `Reading ${i + 1}`,
-          value: r === undefined ? '—' : `${ohmText(r)} → ${ohmText(j.derived.correctedOhm?.[i])} at ${v(d.resistance.referenceTemperatureC, 1, '°C')}`,
+          value:
+            r === undefined
+              ? '—'
+              : `${ohmText(r)} → ${ohmText(j.derived.correctedOhm?.[i])} at ${v(d.resistance.referenceTemperatureC, 1, '°C')}`,
         })),
         { label: 'Winding temperature', value: temperatureText(d.resistance.temperatureC) },
         { label: 'Unbalance', value: percentText(j.derived.unbalanceFraction) },
@@ -108,7 +130,10 @@ export function readingSections(d: TestDataValues, j: TestJudgement): ReadingSec
       title: SECTION_TITLES.run,
       rows: [
         { label: 'Supply voltage', value: v(d.run.voltageV, 0, 'V') },
-        { label: 'Current A / B / C', value: d.run.currentsA.every((c) => c === undefined) ? '—' : d.run.currentsA.map((c) => v(c, 2, 'A')).join(' / ') },
+        {
+          label: 'Current A / B / C',
+          value: d.run.currentsA.every((c) => c === undefined) ? '—' : d.run.currentsA.map((c) => v(c, 2, 'A')).join(' / '),
+        },
         { label: 'Speed', value: v(d.run.speedRpm, 0, 'rpm') },
         { label: 'Vibration', value: velocityText(d.run.vibrationMmS) },
         { label: 'Bearing, drive end', value: temperatureText(d.run.bearingDeC) },

@@ -33,18 +33,34 @@ function bindRating(input: TestRecordForm, rating: AsRepairedRating): TestRecord
   if (rating.source === 'redesign' && rating.redesignRevision !== undefined) {
     const problems: Record<string, string[]> = {};
     if (rating.ratedVoltageV !== undefined && b.ratedVoltageV !== rating.ratedVoltageV) {
-      problems['data.basis.ratedVoltageV'] = [TEST_MESSAGES.ratingMismatch(`${b.ratedVoltageV} V`, `${rating.ratedVoltageV} V`, rating.redesignRevision)];
+      problems['data.basis.ratedVoltageV'] = [
+        TEST_MESSAGES.ratingMismatch(`${b.ratedVoltageV} V`, `${rating.ratedVoltageV} V`, rating.redesignRevision),
+      ];
     }
     if (rating.frequencyHz !== undefined && b.frequencyHz !== undefined && b.frequencyHz !== rating.frequencyHz) {
-      problems['data.basis.frequencyHz'] = [TEST_MESSAGES.ratingMismatch(`${b.frequencyHz} Hz`, `${rating.frequencyHz} Hz`, rating.redesignRevision)];
+      problems['data.basis.frequencyHz'] = [
+        TEST_MESSAGES.ratingMismatch(`${b.frequencyHz} Hz`, `${rating.frequencyHz} Hz`, rating.redesignRevision),
+      ];
     }
     if (Object.keys(problems).length) throw new DomainError('invalid', MESSAGES.invalid, problems);
-    return { ...input, data: { ...input.data, basis: { ...b, frequencyHz: b.frequencyHz ?? rating.frequencyHz, ratingSource: 'redesign', redesignRevision: rating.redesignRevision } } };
+    return {
+      ...input,
+      data: {
+        ...input.data,
+        basis: {
+          ...b,
+          frequencyHz: b.frequencyHz ?? rating.frequencyHz,
+          ratingSource: 'redesign',
+          redesignRevision: rating.redesignRevision,
+        },
+      },
+    };
   }
   // Without a redesign the plate governs; a basis that differs from it is printed as entered, not as the plate.
   const { redesignRevision: _dropped, ...rest } = b;
-  const differs = (rating.ratedVoltageV !== undefined && b.ratedVoltageV !== rating.ratedVoltageV)
-    || (rating.frequencyHz !== undefined && b.frequencyHz !== undefined && b.frequencyHz !== rating.frequencyHz);
+  const differs =
+    (rating.ratedVoltageV !== undefined && b.ratedVoltageV !== rating.ratedVoltageV) ||
+    (rating.frequencyHz !== undefined && b.frequencyHz !== undefined && b.frequencyHz !== rating.frequencyHz);
   return { ...input, data: { ...input.data, basis: { ...rest, ratingSource: differs ? 'entered' : 'nameplate' } } };
 }
 
@@ -83,10 +99,15 @@ export async function saveTestRecord(userId: string, raw: TestRecordForm): Promi
     return await db().$transaction(async (tx) => {
       const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true, heldFrom: true } });
       if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
-      if (isRecordLocked('finalTests', job.status, job.heldFrom)) throw new DomainError('frozen', TEST_MESSAGES.closed(STATUS_LABELS[job.status]));
+      if (isRecordLocked('finalTests', job.status, job.heldFrom))
+        throw new DomainError('frozen', TEST_MESSAGES.closed(STATUS_LABELS[job.status]));
       const tester = await tx.user.findUnique({ where: { id: input.testedById }, select: { active: true } });
       if (!tester?.active) throw new DomainError('invalid', MESSAGES.invalid, { testedById: [TEST_MESSAGES.unknownTester] });
-      const latest = await tx.testRecord.findFirst({ where: { jobId: input.jobId }, orderBy: { sequence: 'desc' }, select: { id: true, sequence: true } });
+      const latest = await tx.testRecord.findFirst({
+        where: { jobId: input.jobId },
+        orderBy: { sequence: 'desc' },
+        select: { id: true, sequence: true },
+      });
 
       let saved: SavedTestRecord;
       if (input.recordId) {

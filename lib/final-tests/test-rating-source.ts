@@ -11,7 +11,14 @@ export async function jobAsRepairedRating(jobId: string): Promise<AsRepairedRati
   if (!job) return null;
   const m = job.motor;
   return asRepairedRating(
-    { ratedVoltageV: m.ratedVoltageV, frequencyHz: m.frequencyHz, speedRpm: m.speedRpm, currentA: m.currentA, outputKw: m.outputKw, connection: m.connection },
+    {
+      ratedVoltageV: m.ratedVoltageV,
+      frequencyHz: m.frequencyHz,
+      speedRpm: m.speedRpm,
+      currentA: m.currentA,
+      outputKw: m.outputKw,
+      connection: m.connection,
+    },
     redesign ? { revision: redesign.revision, nameplate: redesign.nameplate } : null,
   );
 }

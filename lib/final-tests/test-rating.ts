@@ -40,7 +40,7 @@ export interface AsRepairedRating {
   connection?: string;
 }
 
-const given = <T,>(v: T | null | undefined): T | undefined => (v === null ? undefined : v);
+const given = <T>(v: T | null | undefined): T | undefined => (v === null ? undefined : v);
 
 export function asRepairedRating(plate: NameplateRating, redesign: RedesignRating | null): AsRepairedRating {
   if (redesign) {

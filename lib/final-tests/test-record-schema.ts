@@ -124,8 +124,10 @@ function completeness(d: TestData, ctx: z.RefinementCtx): void {
     if (ir.temperatureC === undefined) need(['ir', 'temperatureC'], 'Give the winding temperature: IR is corrected to 40 °C.');
     if (ir.testVoltageV === undefined) need(['ir', 'testVoltageV'], 'Give the megohmmeter test voltage.');
   }
-  if (ir.ir10MinMOhm !== undefined && ir.ir1MinMOhm === undefined) need(['ir', 'ir1MinMOhm'], 'Give the 1-minute reading too: PI = IR 10 min / IR 1 min.');
-  if (ir.ir1MinMOhm === 0 && ir.ir10MinMOhm !== undefined) need(['ir', 'ir1MinMOhm'], 'A 1-minute reading of 0 MΩ cannot give a PI: the winding is grounded.');
+  if (ir.ir10MinMOhm !== undefined && ir.ir1MinMOhm === undefined)
+    need(['ir', 'ir1MinMOhm'], 'Give the 1-minute reading too: PI = IR 10 min / IR 1 min.');
+  if (ir.ir1MinMOhm === 0 && ir.ir10MinMOhm !== undefined)
+    need(['ir', 'ir1MinMOhm'], 'A 1-minute reading of 0 MΩ cannot give a PI: the winding is grounded.');
   if (hipot.result !== undefined && hipot.appliedV === undefined) need(['hipot', 'appliedV'], 'Give the voltage applied.');
   if (hipot.appliedV !== undefined && hipot.result === undefined) need(['hipot', 'result'], 'Say whether the winding held the voltage.');
   const given = resistance.readings.filter((r) => r !== undefined).length;
@@ -133,14 +135,18 @@ function completeness(d: TestData, ctx: z.RefinementCtx): void {
     resistance.readings.forEach((r, i) => {
       if (r === undefined) need(['resistance', 'readings', i], 'Give all three readings.');
     });
-    if (resistance.temperatureC === undefined) need(['resistance', 'temperatureC'], 'Give the winding temperature the readings were taken at.');
+    if (resistance.temperatureC === undefined)
+      need(['resistance', 'temperatureC'], 'Give the winding temperature the readings were taken at.');
   }
   if (hipot.appliedV !== undefined && hipot.durationS === undefined) need(['hipot', 'durationS'], 'Give how long the voltage was held.');
   // An induction motor cannot run above synchronous speed on its own supply: a higher reading is a
   // misread (or a driven/inverter run, which the notes must say).
   const sync = synchronousRpm(d.basis.frequencyHz, d.basis.poles);
   if (run.speedRpm !== undefined && sync !== undefined && run.speedRpm > sync && !run.notes) {
-    need(['run', 'speedRpm'], `Speed ${run.speedRpm} rpm is above the synchronous ${sync} rpm of a ${d.basis.poles}-pole motor at ${d.basis.frequencyHz} Hz: an induction motor cannot run faster on its own supply. Check the reading, or say why in the run notes.`);
+    need(
+      ['run', 'speedRpm'],
+      `Speed ${run.speedRpm} rpm is above the synchronous ${sync} rpm of a ${d.basis.poles}-pole motor at ${d.basis.frequencyHz} Hz: an induction motor cannot run faster on its own supply. Check the reading, or say why in the run notes.`,
+    );
   }
   const measured = [run.voltageV, run.speedRpm, run.vibrationMmS, ...run.currentsA].some((v) => v !== undefined);
   if (measured && run.result === undefined) need(['run', 'result'], 'Say whether the motor passed the run test.');
@@ -196,6 +202,12 @@ export type TestRecordForm = z.output<typeof testRecordFormSchema>;
 
 /** Every instrument serial named in a record, trimmed and without repeats (copied to a column for tracing). */
 export function instrumentSerials(d: TestDataValues): string[] {
-  const all = [d.ir.instrumentSerial, d.hipot.instrumentSerial, d.surge.instrumentSerial, d.resistance.instrumentSerial, d.run.instrumentSerial];
+  const all = [
+    d.ir.instrumentSerial,
+    d.hipot.instrumentSerial,
+    d.surge.instrumentSerial,
+    d.resistance.instrumentSerial,
+    d.run.instrumentSerial,
+  ];
   return [...new Set(all.filter((s): s is string => !!s))];
 }

@@ -107,17 +107,29 @@ function judgeIr(d: TestDataValues, derived: TestJudgement['derived']): SectionJ
   derived.irTestVoltage = irTestVoltageDc(basis.ratedVoltageV);
   if (ir.ir1MinMOhm !== undefined && ir.temperatureC !== undefined) {
     derived.ir40MOhm = irCorrectedTo40C(ir.ir1MinMOhm, ir.temperatureC);
-    const v = insulationResistanceVerdict({ ir1MinMOhm: ir.ir1MinMOhm, temperatureC: ir.temperatureC, category: basis.irCategory, ratedLineVoltageV: basis.ratedVoltageV });
+    const v = insulationResistanceVerdict({
+      ir1MinMOhm: ir.ir1MinMOhm,
+      temperatureC: ir.temperatureC,
+      category: basis.irCategory,
+      ratedLineVoltageV: basis.ratedVoltageV,
+    });
     checks.push(v.ok ? fromVerdict('ir', 'IR 1 min at 40 °C', v.value) : missing('ir', 'IR 1 min at 40 °C', v.error.message));
   } else checks.push(missing('ir', 'IR 1 min at 40 °C'));
   if (ir.ir1MinMOhm !== undefined && ir.ir10MinMOhm !== undefined && ir.temperatureC !== undefined && ir.ir1MinMOhm > 0) {
-    const v = polarizationIndexVerdict({ ir1MinMOhm: ir.ir1MinMOhm, ir10MinMOhm: ir.ir10MinMOhm, temperatureC: ir.temperatureC, insulationClass: basis.insulationClass });
+    const v = polarizationIndexVerdict({
+      ir1MinMOhm: ir.ir1MinMOhm,
+      ir10MinMOhm: ir.ir10MinMOhm,
+      temperatureC: ir.temperatureC,
+      insulationClass: basis.insulationClass,
+    });
     if (v.ok) derived.polarizationIndex = v.value.value;
     checks.push(v.ok ? fromVerdict('pi', 'Polarization index', v.value) : missing('pi', 'Polarization index', v.error.message));
   } else checks.push(missing('pi', 'Polarization index'));
   const tv = derived.irTestVoltage;
   if (ir.testVoltageV !== undefined && (ir.testVoltageV < tv.minV || ir.testVoltageV > tv.maxV)) {
-    warnings.push(`Test voltage ${ir.testVoltageV} V DC is outside the recommended ${tv.minV === tv.maxV ? `${tv.minV} V` : `${tv.minV}–${tv.maxV} V`} (${tv.rule}).`);
+    warnings.push(
+      `Test voltage ${ir.testVoltageV} V DC is outside the recommended ${tv.minV === tv.maxV ? `${tv.minV} V` : `${tv.minV}–${tv.maxV} V`} (${tv.rule}).`,
+    );
   }
   return { key: 'ir', title: SECTION_TITLES.ir, status: sectionStatus(checks), checks, warnings };
 }
@@ -147,22 +159,44 @@ function judgeHipot(d: TestDataValues, irStatus: SectionStatus, derived: TestJud
       held: hipot.result === undefined ? undefined : hipot.result === 'pass',
       reducedReason: hipot.reducedReason,
     });
-    const what = hipot.appliedV === undefined ? '' : `${hipot.appliedV} V ${hipot.kind.toUpperCase()}${hipot.durationS === undefined ? '' : ` for ${hipot.durationS} s`} against the proposed ${proposed} V ${hipot.kind.toUpperCase()} for ${HIPOT_DURATION_S} s`;
+    const what =
+      hipot.appliedV === undefined
+        ? ''
+        : `${hipot.appliedV} V ${hipot.kind.toUpperCase()}${hipot.durationS === undefined ? '' : ` for ${hipot.durationS} s`} against the proposed ${proposed} V ${hipot.kind.toUpperCase()} for ${HIPOT_DURATION_S} s`;
     if (j.outcome === 'missing') checks.push(missing('hipot', label, HIPOT_RULE_TEXT));
     else if (j.outcome === 'pass') checks.push({ key: 'hipot', label, status: 'pass', rule: `${what}. ${HIPOT_RULE_TEXT}` });
     else if (j.outcome === 'reduced') {
-      checks.push({ key: 'hipot', label: `Reduced-level test (${hipot.reducedReason})`, status: 'reduced', rule: `${what}: ${j.reasons.join('; ')}. Not the standard's test, so not a pass.` });
+      checks.push({
+        key: 'hipot',
+        label: `Reduced-level test (${hipot.reducedReason})`,
+        status: 'reduced',
+        rule: `${what}: ${j.reasons.join('; ')}. Not the standard's test, so not a pass.`,
+      });
     } else {
       const advice = hipot.result === 'fail' ? '' : ' If the level or time was reduced on purpose, give the reason.';
-      checks.push({ key: 'hipot', label: hipot.result === 'fail' ? 'Winding broke down' : label, status: 'fail', rule: `${what}${what ? ': ' : ''}${j.reasons.join('; ')}.${advice}` });
+      checks.push({
+        key: 'hipot',
+        label: hipot.result === 'fail' ? 'Winding broke down' : label,
+        status: 'fail',
+        rule: `${what}${what ? ': ' : ''}${j.reasons.join('; ')}.${advice}`,
+      });
     }
     if (j.overLevel && hipot.appliedV !== undefined) {
-      warnings.push(`Applied ${hipot.appliedV} V ${hipot.kind.toUpperCase()} is more than ${HIPOT_OVER_LEVEL_WARNING * 100} % above the proposed ${proposed} V: the winding was stressed beyond the rule; say why in the notes.`);
+      warnings.push(
+        `Applied ${hipot.appliedV} V ${hipot.kind.toUpperCase()} is more than ${HIPOT_OVER_LEVEL_WARNING * 100} % above the proposed ${proposed} V: the winding was stressed beyond the rule; say why in the notes.`,
+      );
     }
   }
-  checks.push(hipot.leakageMa === undefined
-    ? { key: 'leakage', label: 'Leakage current', status: 'recorded', rule: 'Not recorded; no limit applies.' }
-    : { key: 'leakage', label: 'Leakage current', status: 'recorded', rule: 'Recorded, not judged: no published limit applies to it alone.' });
+  checks.push(
+    hipot.leakageMa === undefined
+      ? { key: 'leakage', label: 'Leakage current', status: 'recorded', rule: 'Not recorded; no limit applies.' }
+      : {
+          key: 'leakage',
+          label: 'Leakage current',
+          status: 'recorded',
+          rule: 'Recorded, not judged: no published limit applies to it alone.',
+        },
+  );
   if (hipot.result !== undefined && irStatus !== 'pass') {
     warnings.push('Hipot recorded without a satisfactory IR and PI: hipot only after satisfactory IR/PI on a clean, dry winding.');
   }
@@ -195,7 +229,9 @@ function judgeResistance(d: TestDataValues, derived: TestJudgement['derived']): 
     derived.correctedOhm = readings.map((r) => correctResistanceOhm(r, from, resistance.referenceTemperatureC));
     const v = resistanceUnbalanceVerdict(derived.correctedOhm, basis.windingKind);
     if (v.ok) derived.unbalanceFraction = v.value.value;
-    check = v.ok ? fromVerdict('unbalance', 'Resistance unbalance', v.value) : missing('unbalance', 'Resistance unbalance', v.error.message);
+    check = v.ok
+      ? fromVerdict('unbalance', 'Resistance unbalance', v.value)
+      : missing('unbalance', 'Resistance unbalance', v.error.message);
   }
   return { key: 'resistance', title: SECTION_TITLES.resistance, status: sectionStatus([check]), checks: [check], warnings: [] };
 }
@@ -206,31 +242,47 @@ function judgeRun(d: TestDataValues): SectionJudgement {
   const limit = run.vibrationLimitMmS;
   if (run.vibrationMmS === undefined) checks.push(missing('vibration', 'Vibration'));
   else if (limit !== undefined) {
-    checks.push(fromVerdict('vibration', 'Vibration', {
-      pass: run.vibrationMmS <= limit,
-      value: run.vibrationMmS,
-      limit,
-      // The 0.15 in/s default is recalled [from memory: NEMA MG 1 Part 7]; the sheet names the standard.
-      rule: `Vibration ≤ ${limit} mm/s (${limit === DEFAULT_VIBRATION_LIMIT_MM_S ? 'NEMA MG 1 Part 7, 0.15 in/s, standard machines' : 'limit set on this record'})`,
-    }));
-  } else checks.push({ key: 'vibration', label: 'Vibration', status: 'recorded', rule: 'Recorded, not judged: no vibration limit set on this record.' });
+    checks.push(
+      fromVerdict('vibration', 'Vibration', {
+        pass: run.vibrationMmS <= limit,
+        value: run.vibrationMmS,
+        limit,
+        // The 0.15 in/s default is recalled [from memory: NEMA MG 1 Part 7]; the sheet names the standard.
+        rule: `Vibration ≤ ${limit} mm/s (${limit === DEFAULT_VIBRATION_LIMIT_MM_S ? 'NEMA MG 1 Part 7, 0.15 in/s, standard machines' : 'limit set on this record'})`,
+      }),
+    );
+  } else
+    checks.push({
+      key: 'vibration',
+      label: 'Vibration',
+      status: 'recorded',
+      rule: 'Recorded, not judged: no vibration limit set on this record.',
+    });
   // No-load current and speed against the rating the motor leaves with [common practice]: an uncoupled
   // motor draws less than its full-load current and runs between its rated and synchronous speeds.
   const currents = run.currentsA.filter((c): c is number => c !== undefined);
   if (basis.ratedCurrentA !== undefined && currents.length > 0) {
     const highest = Math.max(...currents);
-    checks.push(fromVerdict('current', 'No-load current below rated current', {
-      pass: highest <= basis.ratedCurrentA, value: highest, limit: basis.ratedCurrentA,
-      rule: 'Uncoupled, the highest phase current stays below the rated full-load current (shop practice).',
-    }));
+    checks.push(
+      fromVerdict('current', 'No-load current below rated current', {
+        pass: highest <= basis.ratedCurrentA,
+        value: highest,
+        limit: basis.ratedCurrentA,
+        rule: 'Uncoupled, the highest phase current stays below the rated full-load current (shop practice).',
+      }),
+    );
   }
   const sync = synchronousRpm(basis.frequencyHz, basis.poles);
   if (run.speedRpm !== undefined && sync !== undefined) {
     const low = basis.ratedSpeedRpm ?? 0;
-    checks.push(fromVerdict('speed', 'No-load speed', {
-      pass: run.speedRpm >= low && run.speedRpm <= sync, value: run.speedRpm, limit: sync,
-      rule: `Uncoupled, between the rated ${basis.ratedSpeedRpm === undefined ? '—' : `${basis.ratedSpeedRpm} rpm`} and the synchronous ${sync} rpm (${basis.poles} poles at ${basis.frequencyHz} Hz).`,
-    }));
+    checks.push(
+      fromVerdict('speed', 'No-load speed', {
+        pass: run.speedRpm >= low && run.speedRpm <= sync,
+        value: run.speedRpm,
+        limit: sync,
+        rule: `Uncoupled, between the rated ${basis.ratedSpeedRpm === undefined ? '—' : `${basis.ratedSpeedRpm} rpm`} and the synchronous ${sync} rpm (${basis.poles} poles at ${basis.frequencyHz} Hz).`,
+      }),
+    );
   }
   return { key: 'run', title: SECTION_TITLES.run, status: sectionStatus(checks), checks, warnings: [] };
 }
@@ -239,13 +291,9 @@ function judgeRun(d: TestDataValues): SectionJudgement {
 export function judgeTestRecord(d: TestDataValues): TestJudgement {
   const derived: TestJudgement['derived'] = {};
   const ir = judgeIr(d, derived);
-  const sections = [
-    ir,
-    judgeHipot(d, ir.status, derived),
-    judgeSurge(d, PHASE_NAMES),
-    judgeResistance(d, derived),
-    judgeRun(d),
-  ];
-  const qualifiers = sections.flatMap((s) => s.checks.filter((c) => c.status === 'reduced').map((c) => `${s.title}: ${c.label.charAt(0).toLowerCase()}${c.label.slice(1)}`));
+  const sections = [ir, judgeHipot(d, ir.status, derived), judgeSurge(d, PHASE_NAMES), judgeResistance(d, derived), judgeRun(d)];
+  const qualifiers = sections.flatMap((s) =>
+    s.checks.filter((c) => c.status === 'reduced').map((c) => `${s.title}: ${c.label.charAt(0).toLowerCase()}${c.label.slice(1)}`),
+  );
   return { sections, overall: overallVerdict(sections.map((s) => s.status)), qualifiers, derived };
 }

@@ -72,21 +72,38 @@ export interface JobSheetData {
   revisionDate: string;
 }
 
-export const SIGNATURE_LINES = ['Tested by (name, initials)', 'Checked by (qualified person)', 'Released by', 'Received by (customer)'] as const;
+export const SIGNATURE_LINES = [
+  'Tested by (name, initials)',
+  'Checked by (qualified person)',
+  'Released by',
+  'Received by (customer)',
+] as const;
 
-const mmIn = (mm: number | undefined, digits = 1) => (mm === undefined ? '—' : `${fmt.num(mm, digits, 'mm')} (${mmToInches(mm).toFixed(3)} in)`);
+const mmIn = (mm: number | undefined, digits = 1) =>
+  mm === undefined ? '—' : `${fmt.num(mm, digits, 'mm')} (${mmToInches(mm).toFixed(3)} in)`;
 const dash = (v: string | null | undefined) => (v && v.trim() ? v : '—');
 
 function asFoundRows(s: WindingSheet): Row[] {
   const w = s.winding;
   const spans = spansLabel(w.spans);
-  const wires = s.wires.map((x) => `${x.count} × ${x.standard === 'awg' ? `AWG ${x.size}` : `${x.size} mm`} (grade ${x.enamelGrade})`).join(' + ');
+  const wires = s.wires
+    .map((x) => `${x.count} × ${x.standard === 'awg' ? `AWG ${x.size}` : `${x.size} mm`} (grade ${x.enamelGrade})`)
+    .join(' + ');
   const rows: Row[] = [
-    { label: 'Core', value: `${s.core.slots} slots · bore ${mmIn(s.core.boreMm)} · length ${mmIn(s.core.coreLengthMm)} · OD ${mmIn(s.core.outsideDiameterMm)}` },
-    { label: 'Winding', value: `${layoutLabel(w)} · span ${spans} · ${w.turnsPerCoil.join(', ')} turns per coil · ${w.parallelPaths} path(s) · ${w.connection}` },
+    {
+      label: 'Core',
+      value: `${s.core.slots} slots · bore ${mmIn(s.core.boreMm)} · length ${mmIn(s.core.coreLengthMm)} · OD ${mmIn(s.core.outsideDiameterMm)}`,
+    },
+    {
+      label: 'Winding',
+      value: `${layoutLabel(w)} · span ${spans} · ${w.turnsPerCoil.join(', ')} turns per coil · ${w.parallelPaths} path(s) · ${w.connection}`,
+    },
     { label: 'Wire', value: wires },
     { label: 'Insulation', value: `class ${s.insulation.thermalClass}${s.insulation.varnish ? ` · ${s.insulation.varnish}` : ''}` },
-    { label: 'Supply', value: `${fmt.num(s.supply.lineVoltageV, 0, 'V')} · ${fmt.num(s.supply.frequencyHz, 0, 'Hz')} · ${s.supply.poles} poles` },
+    {
+      label: 'Supply',
+      value: `${fmt.num(s.supply.lineVoltageV, 0, 'V')} · ${fmt.num(s.supply.frequencyHz, 0, 'Hz')} · ${s.supply.poles} poles`,
+    },
   ];
   if (w.meanTurnLengthMm !== undefined) rows.push({ label: 'Mean turn', value: mmIn(w.meanTurnLengthMm, 0) });
   if (s.resistance) {
@@ -143,7 +160,10 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
     const j = judgeTestRecord(current.data);
     tests = {
       sequence: current.sequence,
-      basis: (readingSections(current.data, j).find((r) => r.key === 'basis')?.rows ?? []).filter((r) => r.label !== 'Rating').map((r) => `${r.label} ${r.value}`).join('; '),
+      basis: (readingSections(current.data, j).find((r) => r.key === 'basis')?.rows ?? [])
+        .filter((r) => r.label !== 'Rating')
+        .map((r) => `${r.label} ${r.value}`)
+        .join('; '),
       judgedFor: ratingSentence(current.data.basis),
       testedAt: fmt.dateTime(current.testedAt),
       testedBy: current.testedBy?.name ?? '—',
@@ -186,7 +206,10 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
       { label: 'Motor', value: `${m.manufacturer} ${m.model ?? ''}`.trim() },
       { label: 'Serial / frame', value: `${dash(m.serial)} / ${dash(m.frame)}` },
       { label: 'Output', value: fmt.power(m.outputKw) },
-      { label: 'Voltage', value: `${fmt.num(m.ratedVoltageV, 0, 'V')}${m.connection ? ` · ${CONNECTION_LABELS[m.connection as keyof typeof CONNECTION_LABELS] ?? m.connection}` : ''}` },
+      {
+        label: 'Voltage',
+        value: `${fmt.num(m.ratedVoltageV, 0, 'V')}${m.connection ? ` · ${CONNECTION_LABELS[m.connection as keyof typeof CONNECTION_LABELS] ?? m.connection}` : ''}`,
+      },
       { label: 'Current', value: fmt.num(m.currentA, 1, 'A') },
       { label: 'Supply', value: `${m.phases} phase · ${fmt.num(m.frequencyHz, 0, 'Hz')}` },
       { label: 'Speed', value: fmt.num(m.speedRpm, 0, 'rpm') },
@@ -194,7 +217,13 @@ export async function loadJobSheet(number: number): Promise<JobSheetData | null>
       { label: 'Enclosure', value: dash(m.enclosure) },
       { label: 'Bearings', value: `DE ${dash(m.bearingDriveEnd)} · ODE ${dash(m.bearingOppositeEnd)}` },
     ],
-    statementOfWork: statementOfWork(job.status, job.heldFrom, redesign ? { revision: redesign.revision, approvedBy: redesign.approvedBy, approvedAt } : null, sheet !== null, kept?.reason ?? null),
+    statementOfWork: statementOfWork(
+      job.status,
+      job.heldFrom,
+      redesign ? { revision: redesign.revision, approvedBy: redesign.approvedBy, approvedAt } : null,
+      sheet !== null,
+      kept?.reason ?? null,
+    ),
     asRepaired: redesign ? redesign.proposedNameplate : null,
     decisions: decisions.map((d) => ({
       label: d.kind === 'ready-override' ? 'Released to Ready without a passing test' : 'Original winding kept',

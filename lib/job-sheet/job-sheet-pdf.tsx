@@ -34,11 +34,38 @@ const ink = '#1d2430';
 const HEADING_KEEP = 90;
 const s = StyleSheet.create({
   page: { fontFamily: 'DejaVu', fontSize: 8.5, color: ink, paddingTop: 54, paddingBottom: 44, paddingHorizontal: 36, lineHeight: 1.3 },
-  header: { position: 'absolute', top: 20, left: 36, right: 36, flexDirection: 'row', justifyContent: 'space-between', borderBottomWidth: 1, borderBottomColor: ink, paddingBottom: 4 },
-  footer: { position: 'absolute', bottom: 18, left: 36, right: 36, flexDirection: 'row', justifyContent: 'space-between', fontSize: 7, color: '#5a6473' },
+  header: {
+    position: 'absolute',
+    top: 20,
+    left: 36,
+    right: 36,
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    borderBottomWidth: 1,
+    borderBottomColor: ink,
+    paddingBottom: 4,
+  },
+  footer: {
+    position: 'absolute',
+    bottom: 18,
+    left: 36,
+    right: 36,
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    fontSize: 7,
+    color: '#5a6473',
+  },
   shop: { fontSize: 12, fontWeight: 'bold' },
   title: { fontSize: 15, fontWeight: 'bold', marginBottom: 6 },
-  h2: { fontSize: 10.5, fontWeight: 'bold', marginTop: 10, marginBottom: 4, borderBottomWidth: 0.5, borderBottomColor: '#999', paddingBottom: 2 },
+  h2: {
+    fontSize: 10.5,
+    fontWeight: 'bold',
+    marginTop: 10,
+    marginBottom: 4,
+    borderBottomWidth: 0.5,
+    borderBottomColor: '#999',
+    paddingBottom: 2,
+  },
   h3: { fontSize: 9, fontWeight: 'bold', marginTop: 6, marginBottom: 2 },
   cols: { flexDirection: 'row', gap: 14 },
   col: { flex: 1 },
@@ -77,19 +104,27 @@ function Rows({ rows }: { rows: Row[] }) {
 function Tests({ t }: { t: NonNullable<JobSheetData['tests']> }) {
   return (
     <View>
-      <Text>Record #{t.sequence} · tested {t.testedAt} by {t.testedBy} · instruments {t.instruments}</Text>
+      <Text>
+        Record #{t.sequence} · tested {t.testedAt} by {t.testedBy} · instruments {t.instruments}
+      </Text>
       <Text style={s.overall}>Overall verdict: {overallText(t.verdict, t.qualifiers)}</Text>
       {t.sections.map((sec) => {
         const readings = t.readings.find((r) => r.key === sec.key);
         return (
           <View key={sec.key} style={[s.verdict, sec.status === 'fail' ? s.fail : sec.status === 'pass' ? s.pass : {}]} wrap={false}>
-            <Text style={s.h3}>{sec.title}: {statusText(sec.status)}</Text>
+            <Text style={s.h3}>
+              {sec.title}: {statusText(sec.status)}
+            </Text>
             {sec.checks.map((c) => (
               <Text key={c.key} style={c.status === 'fail' ? s.bold : {}}>
-                {statusText(c.status)} {c.label}{c.verdict ? ` · ${checkValueText(c)}` : ''}{(c.verdict?.rule ?? c.rule) ? ` — ${c.verdict?.rule ?? c.rule}` : ''}
+                {statusText(c.status)} {c.label}
+                {c.verdict ? ` · ${checkValueText(c)}` : ''}
+                {(c.verdict?.rule ?? c.rule) ? ` — ${c.verdict?.rule ?? c.rule}` : ''}
               </Text>
             ))}
-            {sec.warnings.map((w) => <Text key={w}>⚠ Check: {w}</Text>)}
+            {sec.warnings.map((w) => (
+              <Text key={w}>⚠ Check: {w}</Text>
+            ))}
             {readings && <Rows rows={readings.rows} />}
           </View>
         );
@@ -108,7 +143,9 @@ export function JobSheetDocument({ d }: { d: JobSheetData }) {
       <Page size="A4" style={s.page}>
         <View style={s.header} fixed>
           <Text style={s.shop}>{d.shop.name}</Text>
-          <Text>Job {d.job.number} · Issue {d.revision} · {d.revisionDate}</Text>
+          <Text>
+            Job {d.job.number} · Issue {d.revision} · {d.revisionDate}
+          </Text>
         </View>
         <View style={s.footer} fixed>
           <Text>{[d.shop.address, d.shop.phone].filter(Boolean).join(' · ') || 'Motor repair job sheet'}</Text>
@@ -117,32 +154,66 @@ export function JobSheetDocument({ d }: { d: JobSheetData }) {
 
         <Text style={s.title}>Motor repair job sheet · job {d.job.number}</Text>
         <View style={s.cols}>
-          <View style={s.col}><Text style={s.h2} minPresenceAhead={HEADING_KEEP}>Job</Text><Rows rows={d.job.rows} /></View>
-          <View style={s.col}><Text style={s.h2} minPresenceAhead={HEADING_KEEP}>Customer</Text><Rows rows={d.customer} /></View>
+          <View style={s.col}>
+            <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>
+              Job
+            </Text>
+            <Rows rows={d.job.rows} />
+          </View>
+          <View style={s.col}>
+            <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>
+              Customer
+            </Text>
+            <Rows rows={d.customer} />
+          </View>
         </View>
         <View style={s.cols}>
-          <View style={s.col}><Text style={s.h2} minPresenceAhead={HEADING_KEEP}>Nameplate as received</Text><Rows rows={d.nameplate} /></View>
           <View style={s.col}>
-            <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>As-found winding</Text>
+            <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>
+              Nameplate as received
+            </Text>
+            <Rows rows={d.nameplate} />
+          </View>
+          <View style={s.col}>
+            <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>
+              As-found winding
+            </Text>
             {d.asFound ? (
               <>
-                <Text style={s.muted}>From the as-found data sheet, revision {d.asFound.revision}, {d.asFound.updatedAt}</Text>
+                <Text style={s.muted}>
+                  From the as-found data sheet, revision {d.asFound.revision}, {d.asFound.updatedAt}
+                </Text>
                 <Rows rows={d.asFound.rows} />
               </>
-            ) : <Text>No as-found winding data was recorded.</Text>}
+            ) : (
+              <Text>No as-found winding data was recorded.</Text>
+            )}
           </View>
         </View>
 
-        <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>Winding as repaired</Text>
+        <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>
+          Winding as repaired
+        </Text>
         <Text style={s.bold}>{d.statementOfWork}</Text>
         {d.redesign ? (
           <View style={s.redesign}>
-            <Text style={s.bold}>⚠ REDESIGNED WINDING: differs from the original. Approved redesign revision {d.redesign.revision}, by {d.redesign.approvedBy} on {d.redesign.approvedAt}.</Text>
+            <Text style={s.bold}>
+              ⚠ REDESIGNED WINDING: differs from the original. Approved redesign revision {d.redesign.revision}, by {d.redesign.approvedBy}{' '}
+              on {d.redesign.approvedAt}.
+            </Text>
             {d.redesign.note && <Text>Note: {d.redesign.note}</Text>}
             <View style={[s.table, { marginTop: 4 }]}>
-              <View style={s.trow}><Text style={[s.tcell, s.bold]}>Item</Text><Text style={[s.tcell, s.bold]}>Original</Text><Text style={[s.tcell, s.bold]}>Redesigned</Text></View>
+              <View style={s.trow}>
+                <Text style={[s.tcell, s.bold]}>Item</Text>
+                <Text style={[s.tcell, s.bold]}>Original</Text>
+                <Text style={[s.tcell, s.bold]}>Redesigned</Text>
+              </View>
               {d.redesign.changes.map((c) => (
-                <View key={c.label} style={s.trow} wrap={false}><Text style={s.tcell}>{c.label}</Text><Text style={s.tcell}>{c.original}</Text><Text style={s.tcell}>{c.redesigned}</Text></View>
+                <View key={c.label} style={s.trow} wrap={false}>
+                  <Text style={s.tcell}>{c.label}</Text>
+                  <Text style={s.tcell}>{c.original}</Text>
+                  <Text style={s.tcell}>{c.redesigned}</Text>
+                </View>
               ))}
             </View>
           </View>
@@ -160,22 +231,31 @@ export function JobSheetDocument({ d }: { d: JobSheetData }) {
           </View>
         )}
 
-        <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>Final tests</Text>
+        <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>
+          Final tests
+        </Text>
         {d.tests && <Text style={s.bold}>Verdicts {d.tests.judgedFor}.</Text>}
         {d.tests && <Text style={s.muted}>Basis: {d.tests.basis}.</Text>}
         {d.tests ? <Tests t={d.tests} /> : <Text>No final tests have been recorded yet.</Text>}
         <LossesPdf losses={d.losses} />
 
         <View wrap={false}>
-          <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>Signatures</Text>
+          <Text style={s.h2} minPresenceAhead={HEADING_KEEP}>
+            Signatures
+          </Text>
           <View style={s.sign}>
             {d.signatures.map((label) => (
-              <View key={label} style={s.signBox}><Text>{label}</Text><Text style={s.muted}>Date:</Text></View>
+              <View key={label} style={s.signBox}>
+                <Text>{label}</Text>
+                <Text style={s.muted}>Date:</Text>
+              </View>
             ))}
           </View>
         </View>
 
-        <Text style={s.h2} break>Safety notices</Text>
+        <Text style={s.h2} break>
+          Safety notices
+        </Text>
         {d.notices.map((n) => (
           <View key={n.id} style={s.notice} wrap={false}>
             <Text style={s.bold}>⚠ {n.title}</Text>

@@ -52,7 +52,8 @@ export async function jobSheetPdf(number: number): Promise<JobSheetPdf | null> {
   if (job.status === 'SHIPPED') {
     await snapshotShippedJobSheet(job.id);
     const snap = await db().jobSheetSnapshot.findUnique({ where: { jobId: job.id } });
-    if (snap) return { pdf: new Uint8Array(snap.pdf), filename: jobSheetFilename(number, snap.revision), snapshot: true, revision: snap.revision };
+    if (snap)
+      return { pdf: new Uint8Array(snap.pdf), filename: jobSheetFilename(number, snap.revision), snapshot: true, revision: snap.revision };
   }
   const data = await loadJobSheet(number);
   if (!data) return null;

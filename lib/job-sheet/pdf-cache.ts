@@ -17,7 +17,9 @@ const inFlight = new Map<string, Promise<Uint8Array>>();
 let bytes = 0;
 
 export function jobSheetKey(data: JobSheetData): string {
-  return createHash('sha256').update(JSON.stringify([data, displaySettings()])).digest('hex');
+  return createHash('sha256')
+    .update(JSON.stringify([data, displaySettings()]))
+    .digest('hex');
 }
 
 function remember(key: string, pdf: Uint8Array): void {

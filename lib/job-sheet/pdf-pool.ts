@@ -28,8 +28,16 @@ export class PdfBusyError extends Error {
   }
 }
 
-interface Slot { worker: Worker; busy: boolean; idleTimer?: ReturnType<typeof setTimeout> }
-interface Waiting { job: Omit<PdfJob, 'id'>; resolve: (pdf: Uint8Array) => void; reject: (err: Error) => void }
+interface Slot {
+  worker: Worker;
+  busy: boolean;
+  idleTimer?: ReturnType<typeof setTimeout>;
+}
+interface Waiting {
+  job: Omit<PdfJob, 'id'>;
+  resolve: (pdf: Uint8Array) => void;
+  reject: (err: Error) => void;
+}
 
 const slots: Slot[] = [];
 const queue: Waiting[] = [];

@@ -7,7 +7,11 @@ import { setDisplaySettings, type DisplaySettings } from '@/lib/presentation/for
 import type { JobSheetData } from './job-sheet-data';
 import { renderJobSheetPdf } from './job-sheet-pdf';
 
-export interface PdfJob { id: number; data: JobSheetData; display: DisplaySettings }
+export interface PdfJob {
+  id: number;
+  data: JobSheetData;
+  display: DisplaySettings;
+}
 export type PdfReply = { id: number; pdf: Uint8Array } | { id: number; error: string };
 
 const port = parentPort;

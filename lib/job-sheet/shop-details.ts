@@ -13,5 +13,9 @@ export interface ShopDetails {
 export const UNNAMED_SHOP = 'Electric motor repair';
 
 export function shopDetails(e: Env = env()): ShopDetails {
-  return { name: e.COILWRIGHT_SHOP_NAME ?? UNNAMED_SHOP, address: e.COILWRIGHT_SHOP_ADDRESS ?? null, phone: e.COILWRIGHT_SHOP_PHONE ?? null };
+  return {
+    name: e.COILWRIGHT_SHOP_NAME ?? UNNAMED_SHOP,
+    address: e.COILWRIGHT_SHOP_ADDRESS ?? null,
+    phone: e.COILWRIGHT_SHOP_PHONE ?? null,
+  };
 }

@@ -40,7 +40,8 @@ export function checkPhotos(photos: PhotoUpload[]): Record<string, string> {
 
 export async function addPhotos(jobId: string, userId: string, kind: AttachmentKind, photos: PhotoUpload[]): Promise<number> {
   const problems = checkPhotos(photos);
-  if (Object.keys(problems).length) throw new DomainError('invalid', Object.values(problems).join(' '), { photos: Object.values(problems) });
+  if (Object.keys(problems).length)
+    throw new DomainError('invalid', Object.values(problems).join(' '), { photos: Object.values(problems) });
   if (photos.length === 0) return 0;
   return db().$transaction(async (tx) => {
     const job = await tx.job.findUnique({ where: { id: jobId }, select: { id: true } });
@@ -58,14 +59,21 @@ export async function addPhotos(jobId: string, userId: string, kind: AttachmentK
         },
       });
     }
-    await recordJobEvent(tx, { jobId, userId, kind: 'PHOTO', message: `Added ${photos.length} ${kind.toLowerCase()} photo${photos.length > 1 ? 's' : ''}.` });
+    await recordJobEvent(tx, {
+      jobId,
+      userId,
+      kind: 'PHOTO',
+      message: `Added ${photos.length} ${kind.toLowerCase()} photo${photos.length > 1 ? 's' : ''}.`,
+    });
     return photos.length;
   });
 }
 
 // An empty file input submits a nameless zero-byte part: that is "no photo", not an empty photo.
 export async function photosFromFormData(form: FormData, field = 'photos'): Promise<PhotoUpload[]> {
-  const files = form.getAll(field).filter((f): f is File => typeof f === 'object' && f !== null && 'arrayBuffer' in f && (f.size > 0 || f.name !== ''));
+  const files = form
+    .getAll(field)
+    .filter((f): f is File => typeof f === 'object' && f !== null && 'arrayBuffer' in f && (f.size > 0 || f.name !== ''));
   return Promise.all(files.map(async (f) => ({ filename: f.name || 'photo', bytes: new Uint8Array(await f.arrayBuffer()) })));
 }
 

@@ -52,7 +52,8 @@ export function cursorOf(spec: SortSpec, row: Record<Field, unknown>): BoardCurs
 export function jumpCursor(spec: SortSpec, dir: Dir, from: string | undefined): BoardCursor | undefined {
   if (!from) return undefined;
   const before = dir === 'asc' ? 0 : 2 ** 31 - 1;
-  if (spec.kind === 'number') return /^#?\d{1,9}$/.test(from) ? { number: Number(from.replace('#', '')) + (dir === 'asc' ? -1 : 1), value: null } : undefined;
+  if (spec.kind === 'number')
+    return /^#?\d{1,9}$/.test(from) ? { number: Number(from.replace('#', '')) + (dir === 'asc' ? -1 : 1), value: null } : undefined;
   if (spec.kind === 'date') {
     if (!/^\d{4}-\d{2}-\d{2}$/.test(from) || Number.isNaN(Date.parse(from))) return undefined;
     // Going down, "from 2026-12-01" includes that whole day.

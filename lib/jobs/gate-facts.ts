@@ -25,7 +25,9 @@ export async function loadGateDecisions(tx: Reader, jobId: string): Promise<Gate
   });
   return events.flatMap((e) => {
     const d = decisionData.safeParse(e.data);
-    return d.success ? [{ kind: d.data.decision, reason: d.data.reason, recordSequence: d.data.recordSequence, by: e.user?.name ?? '—', at: e.at }] : [];
+    return d.success
+      ? [{ kind: d.data.decision, reason: d.data.reason, recordSequence: d.data.recordSequence, by: e.user?.name ?? '—', at: e.at }]
+      : [];
   });
 }
 

@@ -67,7 +67,13 @@ export async function uploadJobPhotos(form: FormData): Promise<ActionResult<{ ad
   const schema = z.object({ jobId: z.uuid(), kind: z.enum(['NAMEPLATE', 'DAMAGE', 'OTHER']) });
   return guardedAction('job.attach', 'add photos', schema, async (user, input) => {
     const photos = isForm(form) ? await photosFromFormData(form) : [];
-    if (photos.length === 0) return { ok: false, code: 'invalid', message: 'Choose at least one photo to add.', fieldErrors: { photos: ['Choose at least one photo to add.'] } };
+    if (photos.length === 0)
+      return {
+        ok: false,
+        code: 'invalid',
+        message: 'Choose at least one photo to add.',
+        fieldErrors: { photos: ['Choose at least one photo to add.'] },
+      };
     const added = await addPhotos(input.jobId, user.id, input.kind, photos);
     return success({ added }, `${added} photo${added === 1 ? '' : 's'} added.`);
   })(isForm(form) ? { jobId: form.get('jobId'), kind: form.get('kind') } : form);
@@ -85,11 +91,25 @@ export async function lookupSerial(raw: unknown) {
         customer: m.customer,
         jobs: m.jobs.map((j) => ({ number: j.number, receivedAt: j.receivedAt.toISOString() })),
         nameplate: {
-          frame: m.frame, outputKw: m.outputKw, voltages: m.voltages, ratedVoltageV: m.ratedVoltageV, connection: m.connection,
-          currentA: m.currentA, frequencyHz: m.frequencyHz, speedRpm: m.speedRpm, phases: m.phases, serviceFactor: m.serviceFactor,
-          insulationClass: m.insulationClass, duty: m.duty, enclosure: m.enclosure, efficiencyPercent: m.efficiencyPercent,
-          powerFactor: m.powerFactor, codeLetter: m.codeLetter, designLetter: m.designLetter,
-          bearingDriveEnd: m.bearingDriveEnd, bearingOppositeEnd: m.bearingOppositeEnd,
+          frame: m.frame,
+          outputKw: m.outputKw,
+          voltages: m.voltages,
+          ratedVoltageV: m.ratedVoltageV,
+          connection: m.connection,
+          currentA: m.currentA,
+          frequencyHz: m.frequencyHz,
+          speedRpm: m.speedRpm,
+          phases: m.phases,
+          serviceFactor: m.serviceFactor,
+          insulationClass: m.insulationClass,
+          duty: m.duty,
+          enclosure: m.enclosure,
+          efficiencyPercent: m.efficiencyPercent,
+          powerFactor: m.powerFactor,
+          codeLetter: m.codeLetter,
+          designLetter: m.designLetter,
+          bearingDriveEnd: m.bearingDriveEnd,
+          bearingOppositeEnd: m.bearingOppositeEnd,
         },
       })),
     );

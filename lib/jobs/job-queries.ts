@@ -5,7 +5,18 @@
 import { db, type Prisma } from '@/lib/db/client';
 import { isoDayInZone } from '@/lib/presentation/format';
 import { encodeBoardCursor, PAGE_SIZE, type BoardCursor, type BoardQuery } from '@/lib/jobs/job-schema';
-import { asStatuses, cursorOf, jumpCursor, keyDirection, reverse, segmentOrder, segments, segmentWhere, SORT_SPECS, type Dir } from './board-keyset';
+import {
+  asStatuses,
+  cursorOf,
+  jumpCursor,
+  keyDirection,
+  reverse,
+  segmentOrder,
+  segments,
+  segmentWhere,
+  SORT_SPECS,
+  type Dir,
+} from './board-keyset';
 import { CLOSED_STATUSES } from './status-flow';
 
 /** Today in the shop's time zone, as the midnight-UTC calendar date promised dates are stored in. */
@@ -59,7 +70,9 @@ const BOARD_SELECT = {
   version: true,
   customerId: true,
   customerName: true,
-  motor: { select: { manufacturer: true, model: true, serial: true, outputKw: true, ratedVoltageV: true, speedRpm: true, frequencyHz: true } },
+  motor: {
+    select: { manufacturer: true, model: true, serial: true, outputKw: true, ratedVoltageV: true, speedRpm: true, frequencyHz: true },
+  },
   assignee: { select: { id: true, name: true } },
 } satisfies Prisma.JobSelect;
 
@@ -87,7 +100,12 @@ export async function listBoard(q: BoardQuery, now = new Date()) {
     return out;
   };
   const readSegment = (seg: 'value' | 'null', d: Dir, c: BoardCursor | undefined, take: number) =>
-    db().job.findMany({ where: { AND: [where, segmentWhere(spec, seg, d, c)] }, orderBy: segmentOrder(spec, seg, d), take, select: BOARD_SELECT });
+    db().job.findMany({
+      where: { AND: [where, segmentWhere(spec, seg, d, c)] },
+      orderBy: segmentOrder(spec, seg, d),
+      take,
+      select: BOARD_SELECT,
+    });
 
   let rows = await read(scanDir, cursor);
   let hasPrevious = !!cursor;
@@ -99,7 +117,7 @@ export async function listBoard(q: BoardQuery, now = new Date()) {
     hasNext = true;
     if (!hasPrevious) {
       // Back at the start: show a full first page rather than a short one.
-      rows = (await read(keyDir, undefined));
+      rows = await read(keyDir, undefined);
       hasNext = rows.length > PAGE_SIZE;
       rows = rows.slice(0, PAGE_SIZE);
     }
@@ -175,7 +193,10 @@ export async function findMotorsBySerial(serial: string) {
   if (s.length < 3) return [];
   return db().motor.findMany({
     where: { serial: { equals: s, mode: 'insensitive' } },
-    include: { customer: { select: { id: true, company: true } }, jobs: { select: { number: true, receivedAt: true }, orderBy: { receivedAt: 'desc' } } },
+    include: {
+      customer: { select: { id: true, company: true } },
+      jobs: { select: { number: true, receivedAt: true }, orderBy: { receivedAt: 'desc' } },
+    },
     take: 5,
   });
 }

@@ -52,7 +52,10 @@ export const statusMoveSchema = z.object({
 export const gateDecisionSchema = z.object({
   jobId: z.uuid(),
   decision: z.enum(['ready-override', 'keep-original-winding'], { error: 'Pick which decision this is.' }),
-  reason: requiredText('Reason', 1000).refine((s) => s.length >= 10, 'Write the reason in a sentence (at least 10 characters): it is printed on the job sheet.'),
+  reason: requiredText('Reason', 1000).refine(
+    (s) => s.length >= 10,
+    'Write the reason in a sentence (at least 10 characters): it is printed on the job sheet.',
+  ),
 });
 
 /** A shop job number as it appears in a URL (`/jobs/[number]/…`). */
@@ -91,7 +94,10 @@ export const boardQuerySchema = z.object({
   /** Empty: open jobs (or, for a search containing a digit, every status); 'ANY': every status. */
   status: oneOrMany(z.enum([...JOB_STATUSES, 'OPEN', 'ANY'])).catch([]),
   customerId: z.uuid().optional().catch(undefined),
-  assigneeId: z.union([z.uuid(), z.literal('none')]).optional().catch(undefined),
+  assigneeId: z
+    .union([z.uuid(), z.literal('none')])
+    .optional()
+    .catch(undefined),
   due: z.enum(DUE_FILTERS).default('any').catch('any'),
   q: noNul(z.string().trim().max(80)).optional().catch(undefined),
   sort: z.enum(BOARD_SORTS).default('promisedAt').catch('promisedAt'),

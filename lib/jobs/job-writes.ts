@@ -56,19 +56,29 @@ export async function createIntake(userId: string, input: Intake): Promise<{ job
                 address: input.customer.address ?? null,
                 notes: input.customer.notes ?? null,
                 ...(input.customer.contactName
-                  ? { contacts: { create: { name: input.customer.contactName, phone: input.customer.phone ?? null, email: input.customer.email ?? null } } }
+                  ? {
+                      contacts: {
+                        create: {
+                          name: input.customer.contactName,
+                          phone: input.customer.phone ?? null,
+                          email: input.customer.email ?? null,
+                        },
+                      },
+                    }
                   : {}),
               },
             })
           ).id;
-    if (!customerId) throw new DomainError('invalid', MESSAGES.invalid, { 'customer.customerId': ['That customer no longer exists; pick another.'] });
+    if (!customerId)
+      throw new DomainError('invalid', MESSAGES.invalid, { 'customer.customerId': ['That customer no longer exists; pick another.'] });
 
     const motorData = toMotorRecord(input.motor);
     let motorId: string;
     if (input.existingMotorId) {
       // A returning motor: keep its history, refresh the nameplate with what was read today.
       const updated = await tx.motor.updateMany({ where: { id: input.existingMotorId }, data: { ...motorData, customerId } });
-      if (updated.count === 0) throw new DomainError('invalid', MESSAGES.invalid, { existingMotorId: ['That motor record no longer exists.'] });
+      if (updated.count === 0)
+        throw new DomainError('invalid', MESSAGES.invalid, { existingMotorId: ['That motor record no longer exists.'] });
       motorId = input.existingMotorId;
     } else {
       motorId = (await tx.motor.create({ data: { ...motorData, customerId } })).id;
@@ -147,7 +157,14 @@ export async function updateJob(userId: string, input: JobEdit): Promise<{ versi
     });
     if (result.count === 0) await refuseStale(tx, input.jobId);
     const changed = EDITABLE.filter((k) => String(before[k] ?? '') !== String(data[k] ?? ''));
-    const people = new Map((await tx.user.findMany({ where: { id: { in: [before.assigneeId, data.assigneeId].filter((x): x is string => !!x) } }, select: { id: true, name: true } })).map((u) => [u.id, u.name]));
+    const people = new Map(
+      (
+        await tx.user.findMany({
+          where: { id: { in: [before.assigneeId, data.assigneeId].filter((x): x is string => !!x) } },
+          select: { id: true, name: true },
+        })
+      ).map((u) => [u.id, u.name]),
+    );
     await tx.jobEvent.create({
       data: {
         jobId: input.jobId,
@@ -226,13 +243,19 @@ export async function recordJobEvent(
  * or keeping the original winding although another supply was asked for). It goes on the timeline in
  * words and is printed on the job sheet; the gate reads it back from there.
  */
-export async function recordGateDecision(userId: string, input: { jobId: string; decision: GateDecisionKind; reason: string }): Promise<void> {
+export async function recordGateDecision(
+  userId: string,
+  input: { jobId: string; decision: GateDecisionKind; reason: string },
+): Promise<void> {
   await db().$transaction(async (tx) => {
     const job = await tx.job.findUnique({ where: { id: input.jobId }, select: { status: true } });
     if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
     const expected = input.decision === 'ready-override' ? 'TESTING' : 'CUSTOMER_APPROVED';
     if (job.status !== expected) {
-      throw new DomainError('conflict', `This decision is recorded while the job is in "${STATUS_LABELS[expected]}"; it is now in "${STATUS_LABELS[job.status]}".`);
+      throw new DomainError(
+        'conflict',
+        `This decision is recorded while the job is in "${STATUS_LABELS[expected]}"; it is now in "${STATUS_LABELS[job.status]}".`,
+      );
     }
     const facts = await loadGateFacts(tx, input.jobId);
     await tx.jobEvent.create({
@@ -241,7 +264,11 @@ export async function recordGateDecision(userId: string, input: { jobId: string;
         userId,
         kind: DECISION_EVENT_KIND,
         message: decisionMessage(input.decision, input.reason, facts.latestTest),
-        data: { decision: input.decision, reason: input.reason, recordSequence: input.decision === 'ready-override' ? facts.latestTest?.sequence ?? null : null },
+        data: {
+          decision: input.decision,
+          reason: input.reason,
+          recordSequence: input.decision === 'ready-override' ? (facts.latestTest?.sequence ?? null) : null,
+        },
       },
     });
   });

@@ -42,7 +42,8 @@ export const GATE_MESSAGES = {
     `Testing → Ready needs a final-test record whose overall verdict is PASS${latest ? ` (the newest, #${latest.sequence}, is ${latest.verdict === 'FAIL' ? 'FAIL' : 'not a full pass'})` : ' (none is recorded yet)'}, or an engineer's override with a written reason.`,
   winding: (why: string) =>
     `Winding cannot start: another supply was asked for (${why}). An engineer must approve a redesign revision, or record why the original winding is kept.`,
-  shipped: 'This job has no winding record (no as-found winding data and no approved redesign), so it cannot ship as repaired. Record the winding data, or return it unrepaired.',
+  shipped:
+    'This job has no winding record (no as-found winding data and no approved redesign), so it cannot ship as repaired. Record the winding data, or return it unrepaired.',
 } as const;
 
 /** The override that releases Ready must name the newest record; a later retest needs its own verdict or release. */

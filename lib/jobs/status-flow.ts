@@ -19,7 +19,16 @@ export const STATUS_LABELS: Record<JobStatus, string> = {
 };
 
 /** The main path, in order (on hold and returned unrepaired are side branches). */
-export const MAIN_PATH: JobStatus[] = ['RECEIVED', 'INSPECTION', 'QUOTE_SENT', 'CUSTOMER_APPROVED', 'WINDING', 'TESTING', 'READY', 'SHIPPED'];
+export const MAIN_PATH: JobStatus[] = [
+  'RECEIVED',
+  'INSPECTION',
+  'QUOTE_SENT',
+  'CUSTOMER_APPROVED',
+  'WINDING',
+  'TESTING',
+  'READY',
+  'SHIPPED',
+];
 export const CLOSED_STATUSES: JobStatus[] = ['SHIPPED', 'RETURNED_UNREPAIRED'];
 export const OPEN_STATUSES: JobStatus[] = MAIN_PATH.filter((s) => !CLOSED_STATUSES.includes(s)).concat('ON_HOLD');
 

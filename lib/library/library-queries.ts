@@ -63,13 +63,25 @@ export async function searchLibrary(s: LibrarySearch): Promise<{ rows: LibraryRo
     orderBy: { updatedAt: 'desc' },
     take: CANDIDATES + 1,
     select: {
-      id: true, revision: true, slots: true, poles: true, boreMm: true, coreLengthMm: true, lineVoltageV: true, frequencyHz: true,
-      outputKw: true, manufacturer: true, model: true, updatedAt: true, job: { select: { number: true } },
+      id: true,
+      revision: true,
+      slots: true,
+      poles: true,
+      boreMm: true,
+      coreLengthMm: true,
+      lineVoltageV: true,
+      frequencyHz: true,
+      outputKw: true,
+      manufacturer: true,
+      model: true,
+      updatedAt: true,
+      job: { select: { number: true } },
     },
   });
   const t = s.target ?? {};
   const distance = (r: { boreMm: number; coreLengthMm: number }): number =>
-    (t.boreMm !== undefined ? Math.abs(r.boreMm - t.boreMm) / t.boreMm : 0) + (t.coreLengthMm !== undefined ? Math.abs(r.coreLengthMm - t.coreLengthMm) / t.coreLengthMm / 4 : 0);
+    (t.boreMm !== undefined ? Math.abs(r.boreMm - t.boreMm) / t.boreMm : 0) +
+    (t.coreLengthMm !== undefined ? Math.abs(r.coreLengthMm - t.coreLengthMm) / t.coreLengthMm / 4 : 0);
   const ranked = found.slice(0, CANDIDATES).sort((a, b) => distance(a) - distance(b));
   return {
     rows: ranked.slice(0, LIBRARY_PAGE).map(({ job, ...r }) => ({ ...r, jobNumber: job.number })),
@@ -78,7 +90,9 @@ export async function searchLibrary(s: LibrarySearch): Promise<{ rows: LibraryRo
 }
 
 /** Full sheets for side-by-side comparison (at most 3), in the order asked. */
-export async function getLibrarySheets(ids: string[]): Promise<{ id: string; jobNumber: number; revision: number; manufacturer: string | null; model: string | null; sheet: WindingSheet }[]> {
+export async function getLibrarySheets(
+  ids: string[],
+): Promise<{ id: string; jobNumber: number; revision: number; manufacturer: string | null; model: string | null; sheet: WindingSheet }[]> {
   if (ids.length === 0) return [];
   const rows = await db().windingSheet.findMany({
     where: { id: { in: ids.slice(0, 3) } },
@@ -89,7 +103,15 @@ export async function getLibrarySheets(ids: string[]): Promise<{ id: string; job
     const r = rows.find((x) => x.id === id);
     if (!r) continue;
     const parsed = windingSheetSchema.safeParse(r.data);
-    if (parsed.success) out.push({ id: r.id, jobNumber: r.job.number, revision: r.revision, manufacturer: r.manufacturer, model: r.model, sheet: parsed.data });
+    if (parsed.success)
+      out.push({
+        id: r.id,
+        jobNumber: r.job.number,
+        revision: r.revision,
+        manufacturer: r.manufacturer,
+        model: r.model,
+        sheet: parsed.data,
+      });
   }
   return out;
 }

@@ -8,10 +8,12 @@ import { jobNumberSchema } from '../jobs/job-schema';
 import { noNul } from '@/lib/validation/safe-text';
 
 const optNum = (max: number, int = false) =>
-  z.preprocess(
-    (v) => (typeof v === 'string' && v.trim() !== '' ? Number(v.trim().replace(',', '.')) : undefined),
-    (int ? z.number().int() : z.number()).positive().max(max).optional(),
-  ).catch(undefined);
+  z
+    .preprocess(
+      (v) => (typeof v === 'string' && v.trim() !== '' ? Number(v.trim().replace(',', '.')) : undefined),
+      (int ? z.number().int() : z.number()).positive().max(max).optional(),
+    )
+    .catch(undefined);
 
 export const libraryQuerySchema = z.object({
   slots: optNum(600, true),

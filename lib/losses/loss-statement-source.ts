@@ -26,7 +26,10 @@ const none = (reason: string): LossStatementResult => ({ statement: null, reason
  */
 export async function lossStatementForJob(jobId: string, comparing?: RedesignReport): Promise<LossStatementResult> {
   const [job, sheet, settings] = await Promise.all([
-    db().job.findUnique({ where: { id: jobId }, select: { motor: { select: { efficiencyPercent: true, outputKw: true, currentA: true } } } }),
+    db().job.findUnique({
+      where: { id: jobId },
+      select: { motor: { select: { efficiencyPercent: true, outputKw: true, currentA: true } } },
+    }),
     getAsFoundSheet(jobId),
     getCoreLossSettings(),
   ]);
@@ -42,7 +45,12 @@ export async function lossStatementForJob(jobId: string, comparing?: RedesignRep
   const approved = comparing ? null : await getApprovedRedesign(jobId);
   const report = comparing ?? approved?.snapshot.report ?? null;
   const sheetSource = `as-found data sheet, revision ${sheet.revision}, predicted`;
-  let before: WindingForLoss = { source: sheetSource, phaseOhm20: predicted.predictedPhaseOhm20, connection: sheet.sheet.winding.connection, lineCurrentA: currentA };
+  let before: WindingForLoss = {
+    source: sheetSource,
+    phaseOhm20: predicted.predictedPhaseOhm20,
+    connection: sheet.sheet.winding.connection,
+    lineCurrentA: currentA,
+  };
   let after: WindingForLoss = { ...before, source: `${sheetSource}: rewound to the same data` };
   let outputKw = sheet.sheet.supply.ratedOutputKw ?? job.motor.outputKw ?? undefined;
   if (report) {
@@ -54,7 +62,12 @@ export async function lossStatementForJob(jobId: string, comparing?: RedesignRep
     if (r?.values.original && r.values.candidate) {
       before = { ...before, source: `${sheetSource} (as in the comparison)`, phaseOhm20: r.values.original };
       const afterCurrent = current?.values.candidate ?? (current?.ratio ? currentA * current.ratio : currentA);
-      after = { source: label, phaseOhm20: r.values.candidate, connection: report.candidate.winding.connection, lineCurrentA: afterCurrent };
+      after = {
+        source: label,
+        phaseOhm20: r.values.candidate,
+        connection: report.candidate.winding.connection,
+        lineCurrentA: afterCurrent,
+      };
       outputKw = power?.values.candidate ?? (power?.ratio && outputKw ? outputKw * power.ratio : outputKw);
     }
   }
@@ -67,15 +80,26 @@ export async function lossStatementForJob(jobId: string, comparing?: RedesignRep
     if (current && res && readings.length === 3 && res.temperatureC !== undefined) {
       const mean = readings.reduce((a, b) => a + b, 0) / 3;
       const phase = res.between === 'line-to-line' ? phaseFromLineToLineOhm(mean, after.connection as Connection) : mean;
-      measuredAfter = { ...after, source: `final tests #${current.sequence}, measured at ${res.temperatureC} °C`, phaseOhm20: correctResistanceOhm(phase, res.temperatureC, 20) };
+      measuredAfter = {
+        ...after,
+        source: `final tests #${current.sequence}, measured at ${res.temperatureC} °C`,
+        phaseOhm20: correctResistanceOhm(phase, res.temperatureC, 20),
+      };
     }
   }
 
   const core = coreTestReport(sheet.sheet, await listCoreTests(jobId), settings, analysis.value.winding.flux?.yoke.tesla ?? null);
   const statement = buildLossStatement({
-    thermalClass: sheet.sheet.insulation.thermalClass, before, after, measuredAfter, redesigned: report !== null,
-    outputKw, efficiencyPercent: job.motor.efficiencyPercent ?? undefined,
-    coreLossChangeW: core.lossChangeAtRatingW, coreLossNote: core.lossChangeNote, copperLossRiseLimit: settings.copperLossRiseLimit,
+    thermalClass: sheet.sheet.insulation.thermalClass,
+    before,
+    after,
+    measuredAfter,
+    redesigned: report !== null,
+    outputKw,
+    efficiencyPercent: job.motor.efficiencyPercent ?? undefined,
+    coreLossChangeW: core.lossChangeAtRatingW,
+    coreLossNote: core.lossChangeNote,
+    copperLossRiseLimit: settings.copperLossRiseLimit,
   });
   return statement ? { statement, reason: null } : none('The resistance or the rated current is not usable.');
 }

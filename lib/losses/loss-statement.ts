@@ -46,9 +46,10 @@ const signed = (v: number, unit: string, digits = 1): string => {
 };
 
 function sentence(l: RewindLosses, what: string): string {
-  const copper = Math.abs(l.copperChangeW) < 0.05
-    ? `${what} leaves the stator copper loss unchanged at ${w(l.after.copperLossW)}`
-    : `${what} changes the stator copper loss from ${w(l.before.copperLossW)} to ${w(l.after.copperLossW)} (${signed(l.copperChangeW, ' W')}, ${signed(l.copperChangeFraction * 100, ' %')})`;
+  const copper =
+    Math.abs(l.copperChangeW) < 0.05
+      ? `${what} leaves the stator copper loss unchanged at ${w(l.after.copperLossW)}`
+      : `${what} changes the stator copper loss from ${w(l.before.copperLossW)} to ${w(l.after.copperLossW)} (${signed(l.copperChangeW, ' W')}, ${signed(l.copperChangeFraction * 100, ' %')})`;
   const eff = l.efficiency
     ? `; efficiency ${(l.efficiency.efficiencyBefore * 100).toFixed(1)} % → ${(l.efficiency.efficiencyAfter * 100).toFixed(2)} % (${signed(l.efficiency.changePoints, ' points', 2)})`
     : '';
@@ -57,17 +58,26 @@ function sentence(l: RewindLosses, what: string): string {
 
 function windingRows(prefix: string, l: RewindLosses['before']): LossRow[] {
   return [
-    { label: `${prefix}: resistance`, value: `${ohm(l.phaseOhm20)} per phase at 20 °C → ${ohm(l.phaseOhmAtReference)} at the reference temperature (${l.source})` },
-    { label: `${prefix}: copper loss`, value: `3 × (${l.lineCurrentA.toFixed(2)} A${l.connection === 'delta' ? ' ÷ √3' : ''})² × ${ohm(l.phaseOhmAtReference)} = ${w(l.copperLossW)} (${l.connection})` },
+    {
+      label: `${prefix}: resistance`,
+      value: `${ohm(l.phaseOhm20)} per phase at 20 °C → ${ohm(l.phaseOhmAtReference)} at the reference temperature (${l.source})`,
+    },
+    {
+      label: `${prefix}: copper loss`,
+      value: `3 × (${l.lineCurrentA.toFixed(2)} A${l.connection === 'delta' ? ' ÷ √3' : ''})² × ${ohm(l.phaseOhmAtReference)} = ${w(l.copperLossW)} (${l.connection})`,
+    },
   ];
 }
 
 /** The statement, or null when a resistance or the rated current is missing. */
 export function buildLossStatement(i: LossStatementInput): LossStatement | null {
   const base: Omit<RewindLossInput, 'after'> = {
-    thermalClass: i.thermalClass, before: i.before, outputKw: i.outputKw,
+    thermalClass: i.thermalClass,
+    before: i.before,
+    outputKw: i.outputKw,
     efficiency: i.efficiencyPercent !== undefined ? i.efficiencyPercent / 100 : undefined,
-    coreLossChangeW: i.coreLossChangeW ?? undefined, limitFraction: i.copperLossRiseLimit,
+    coreLossChangeW: i.coreLossChangeW ?? undefined,
+    limitFraction: i.copperLossRiseLimit,
   };
   const predicted = rewindLosses({ ...base, after: i.after });
   if (!predicted) return null;
@@ -81,9 +91,15 @@ export function buildLossStatement(i: LossStatementInput): LossStatement | null 
     ...(measured ? windingRows('Measured after rewind', measured.after) : []),
   ];
   if (predicted.efficiency) {
-    rows.push({ label: 'Losses at rated output', value: `${i.outputKw?.toFixed(2)} kW × (1/${predicted.efficiency.efficiencyBefore.toFixed(3)} − 1) = ${w(predicted.efficiency.lossesBeforeW)} from the nameplate efficiency` });
+    rows.push({
+      label: 'Losses at rated output',
+      value: `${i.outputKw?.toFixed(2)} kW × (1/${predicted.efficiency.efficiencyBefore.toFixed(3)} − 1) = ${w(predicted.efficiency.lossesBeforeW)} from the nameplate efficiency`,
+    });
   }
-  rows.push({ label: 'Core loss change', value: i.coreLossChangeW === null ? i.coreLossNote : `${signed(i.coreLossChangeW, ' W', 2)}: ${i.coreLossNote}` });
+  rows.push({
+    label: 'Core loss change',
+    value: i.coreLossChangeW === null ? i.coreLossNote : `${signed(i.coreLossChangeW, ' W', 2)}: ${i.coreLossNote}`,
+  });
   const findings = [predicted.finding, measured?.finding].filter((f): f is string => typeof f === 'string');
   const assumptions = [
     'Copper loss P = 3·I_ph²·R_ph at rated current (= 1.5·I²·R line-to-line, as IEEE 112 and IEC 60034-2-1 write it), resistance brought from 20 °C with copper’s 234.5 °C constant.',
@@ -91,6 +107,9 @@ export function buildLossStatement(i: LossStatementInput): LossStatement | null 
       ? 'Efficiency from the nameplate figure at the same output, every other loss (friction and windage, rotor, stray load) unchanged; only the copper-loss change and the measured core-loss change are added.'
       : 'No nameplate efficiency is recorded, so only the change in watts is given.',
   ];
-  if (i.redesigned) assumptions.push('For a redesign to another voltage, frequency or speed the other losses change too: the efficiency figure is a guide, confirmed only by a load test.');
+  if (i.redesigned)
+    assumptions.push(
+      'For a redesign to another voltage, frequency or speed the other losses change too: the efficiency figure is a guide, confirmed only by a load test.',
+    );
   return { statement: parts.join(' '), rows, findings, assumptions };
 }

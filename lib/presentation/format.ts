@@ -62,14 +62,28 @@ export function dateTimeFormat(zone: string): Intl.DateTimeFormat {
   let f = partFormats.get(zone);
   if (!f) {
     f = new Intl.DateTimeFormat('en-GB', {
-      timeZone: zone, year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZoneName: 'short',
+      timeZone: zone,
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+      hourCycle: 'h23',
+      timeZoneName: 'short',
     });
     partFormats.set(zone, f);
   }
   return f;
 }
 
-interface Parts { year: string; month: string; day: string; hour: string; minute: string; zone: string }
+interface Parts {
+  year: string;
+  month: string;
+  day: string;
+  hour: string;
+  minute: string;
+  zone: string;
+}
 function partsIn(d: Date, zone: string): Parts {
   const p: Parts = { year: '', month: '', day: '', hour: '', minute: '', zone: '' };
   for (const x of dateTimeFormat(zone).formatToParts(d)) {
@@ -118,7 +132,8 @@ export function fromZonedLocal(local: string, zone = current.timeZone): Date {
 const n = (v: number, digits: number) => numberFormat(digits).format(v);
 
 export const fmt = {
-  num: (v: number | null | undefined, digits = 2, unit = ''): string => (v === null || v === undefined || !Number.isFinite(v) ? '—' : `${n(v, digits)}${unit ? ` ${unit}` : ''}`),
+  num: (v: number | null | undefined, digits = 2, unit = ''): string =>
+    v === null || v === undefined || !Number.isFinite(v) ? '—' : `${n(v, digits)}${unit ? ` ${unit}` : ''}`,
   int: (v: number): string => n(v, 0),
   power: (kw: number | null | undefined): string => (kw == null ? '—' : `${n(kw, 2)} kW (${n(kwToHp(kw), 1)} hp)`),
   /** An instant (received, saved, approved) as the date it fell on in the shop's zone. */

@@ -21,15 +21,23 @@ export async function recordDecision(userId: string, input: Decision): Promise<{
     const r = await tx.quote.updateMany({
       where: { id: quote.id, version: input.version, status: 'SENT' },
       data: {
-        status: input.decision, decidedAt: new Date(`${input.decidedOn}T12:00:00Z`), decidedBy: input.decidedBy, decisionMethod: input.method,
-        customerOrderNumber: input.customerOrderNumber || null, decisionNote: input.note || null, decisionRecordedById: userId, version: { increment: 1 },
+        status: input.decision,
+        decidedAt: new Date(`${input.decidedOn}T12:00:00Z`),
+        decidedBy: input.decidedBy,
+        decisionMethod: input.method,
+        customerOrderNumber: input.customerOrderNumber || null,
+        decisionNote: input.note || null,
+        decisionRecordedById: userId,
+        version: { increment: 1 },
       },
     });
     if (r.count === 0) throw new DomainError('stale', QUOTE_MESSAGES.stale);
     const what = input.decision === 'ACCEPTED' ? 'accepted' : 'declined';
     await tx.jobEvent.create({
       data: {
-        jobId: quote.jobId, userId, kind: 'QUOTE',
+        jobId: quote.jobId,
+        userId,
+        kind: 'QUOTE',
         message: `Quote ${quoteNumber(quote.job.number, quote.revision)} ${what} by ${input.decidedBy} on ${input.decidedOn} (${DECISION_METHOD_LABELS[input.method].toLowerCase()})${input.customerOrderNumber ? `, order ${input.customerOrderNumber}` : ''}.`,
       },
     });

@@ -9,12 +9,22 @@ import type { EstimateLine, EstimateLineInput } from './quote-schema';
 
 export function lineToForm(l: EstimateLine, currency: CurrencyCode): EstimateLineInput {
   return {
-    kind: l.kind, description: l.description, reference: l.reference ?? '', quantity: formatScaledShort(l.quantityMilli, 3),
-    unit: l.unit, unitPrice: formatScaled(l.unitPriceMinor, minorExponent(currency)), taxRate: basisPointsToPercent(l.taxRateBp),
+    kind: l.kind,
+    description: l.description,
+    reference: l.reference ?? '',
+    quantity: formatScaledShort(l.quantityMilli, 3),
+    unit: l.unit,
+    unitPrice: formatScaled(l.unitPriceMinor, minorExponent(currency)),
+    taxRate: basisPointsToPercent(l.taxRateBp),
   };
 }
 
-export function liveTotals(lines: readonly Partial<EstimateLineInput>[], discount: string, currency: CurrencyCode, taxMode: TaxMode): EstimateTotals {
+export function liveTotals(
+  lines: readonly Partial<EstimateLineInput>[],
+  discount: string,
+  currency: CurrencyCode,
+  taxMode: TaxMode,
+): EstimateTotals {
   const exp = minorExponent(currency);
   const priced = lines.map((l) => ({
     quantityMilli: parseScaled(l.quantity ?? '', 3) ?? 0,
@@ -22,6 +32,10 @@ export function liveTotals(lines: readonly Partial<EstimateLineInput>[], discoun
     taxRateBp: percentToBasisPoints(l.taxRate ?? '') ?? 0,
   }));
   // Out-of-range entries are refused on save; the live view caps them so the arithmetic stays exact.
-  const safe = priced.map((p) => ({ quantityMilli: Math.min(p.quantityMilli, 10_000_000), unitPriceMinor: Math.min(p.unitPriceMinor, 1_000_000 * 10 ** exp), taxRateBp: Math.min(p.taxRateBp, 10_000) }));
+  const safe = priced.map((p) => ({
+    quantityMilli: Math.min(p.quantityMilli, 10_000_000),
+    unitPriceMinor: Math.min(p.unitPriceMinor, 1_000_000 * 10 ** exp),
+    taxRateBp: Math.min(p.taxRateBp, 10_000),
+  }));
   return estimateTotals(safe, { currency, taxMode, discountBp: Math.min(percentToBasisPoints(discount) ?? 0, 10_000) });
 }

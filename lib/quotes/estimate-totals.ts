@@ -67,19 +67,40 @@ export function estimateTotals(lines: readonly PricedLine[], rules: TotalsRules)
   const lineTax = new Array<number>(lines.length).fill(0);
   const bands: TaxBand[] = rates.map((rateBp) => {
     const idx = lines.flatMap((l, i) => (l.taxRateBp === rateBp ? [i] : []));
-    const baseMinor = sumMinor(idx.map((i) => taxable[i] ?? 0), code);
+    const baseMinor = sumMinor(
+      idx.map((i) => taxable[i] ?? 0),
+      code,
+    );
     if (rules.taxMode === 'PER_LINE') {
       for (const i of idx) lineTax[i] = timesBasisPoints(taxable[i] ?? 0, rateBp, code);
     } else {
-      const shares = allocateMinor(timesBasisPoints(baseMinor, rateBp, code), idx.map((i) => taxable[i] ?? 0), code);
-      idx.forEach((i, k) => { lineTax[i] = shares[k] ?? 0; });
+      const shares = allocateMinor(
+        timesBasisPoints(baseMinor, rateBp, code),
+        idx.map((i) => taxable[i] ?? 0),
+        code,
+      );
+      idx.forEach((i, k) => {
+        lineTax[i] = shares[k] ?? 0;
+      });
     }
-    return { rateBp, baseMinor, taxMinor: sumMinor(idx.map((i) => lineTax[i] ?? 0), code) };
+    return {
+      rateBp,
+      baseMinor,
+      taxMinor: sumMinor(
+        idx.map((i) => lineTax[i] ?? 0),
+        code,
+      ),
+    };
   });
 
   const taxMinor = sumMinor(lineTax, code);
   return {
-    lines: net.map((n, i) => ({ netMinor: n, discountMinor: lineDiscount[i] ?? 0, taxMinor: lineTax[i] ?? 0, grossMinor: (taxable[i] ?? 0) + (lineTax[i] ?? 0) })),
+    lines: net.map((n, i) => ({
+      netMinor: n,
+      discountMinor: lineDiscount[i] ?? 0,
+      taxMinor: lineTax[i] ?? 0,
+      grossMinor: (taxable[i] ?? 0) + (lineTax[i] ?? 0),
+    })),
     subtotalMinor,
     discountMinor,
     taxMinor,

@@ -14,8 +14,16 @@ export interface LabourComparison {
 
 export async function labourComparison(jobId: string): Promise<LabourComparison> {
   const [bookings, quotes] = await Promise.all([
-    db().labourBooking.findMany({ where: { jobId }, orderBy: [{ workedOn: 'asc' }, { createdAt: 'asc' }], select: { id: true, personName: true, task: true, hoursMilli: true, workedOn: true } }),
-    db().quote.findMany({ where: { jobId }, orderBy: { revision: 'desc' }, select: { revision: true, status: true, lines: { where: { kind: 'LABOUR', unit: 'h' }, select: { quantityMilli: true } } } }),
+    db().labourBooking.findMany({
+      where: { jobId },
+      orderBy: [{ workedOn: 'asc' }, { createdAt: 'asc' }],
+      select: { id: true, personName: true, task: true, hoursMilli: true, workedOn: true },
+    }),
+    db().quote.findMany({
+      where: { jobId },
+      orderBy: { revision: 'desc' },
+      select: { revision: true, status: true, lines: { where: { kind: 'LABOUR', unit: 'h' }, select: { quantityMilli: true } } },
+    }),
   ]);
   const basis = quotes.find((q) => q.status === 'ACCEPTED') ?? quotes.find((q) => q.status !== 'DRAFT') ?? quotes[0];
   return {

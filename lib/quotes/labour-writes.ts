@@ -12,11 +12,27 @@ export async function bookLabour(userId: string, input: z.output<typeof labourBo
       tx.user.findUnique({ where: { id: input.personId }, select: { id: true, name: true, active: true } }),
     ]);
     if (!job) throw new DomainError('not-found', MESSAGES.notFound('job'));
-    if (!person?.active) throw new DomainError('invalid', 'Choose someone who works here.', { personId: ['Choose someone who works here.'] });
+    if (!person?.active)
+      throw new DomainError('invalid', 'Choose someone who works here.', { personId: ['Choose someone who works here.'] });
     const row = await tx.labourBooking.create({
-      data: { jobId: job.id, personId: person.id, personName: person.name, task: input.task, hoursMilli: input.hours, workedOn: new Date(`${input.workedOn}T00:00:00Z`), bookedById: userId },
+      data: {
+        jobId: job.id,
+        personId: person.id,
+        personName: person.name,
+        task: input.task,
+        hoursMilli: input.hours,
+        workedOn: new Date(`${input.workedOn}T00:00:00Z`),
+        bookedById: userId,
+      },
     });
-    await tx.jobEvent.create({ data: { jobId: job.id, userId, kind: 'LABOUR', message: `${formatScaledShort(input.hours, 3)} h booked for ${person.name}: ${input.task} (${input.workedOn}).` } });
+    await tx.jobEvent.create({
+      data: {
+        jobId: job.id,
+        userId,
+        kind: 'LABOUR',
+        message: `${formatScaledShort(input.hours, 3)} h booked for ${person.name}: ${input.task} (${input.workedOn}).`,
+      },
+    });
     return { id: row.id };
   });
 }

@@ -24,7 +24,13 @@ export const scaledText = (label: string, decimals: number, min: number, max: nu
       const n = parseScaled(v, decimals);
       const u = unit ? ` ${unit}` : '';
       if (n === null) {
-        ctx.addIssue({ code: 'custom', message: v.trim() === '' ? `${label} is required.` : `${label} must be a number with at most ${decimals} decimal place${decimals === 1 ? '' : 's'}.` });
+        ctx.addIssue({
+          code: 'custom',
+          message:
+            v.trim() === ''
+              ? `${label} is required.`
+              : `${label} must be a number with at most ${decimals} decimal place${decimals === 1 ? '' : 's'}.`,
+        });
         return z.NEVER;
       }
       if (n < min || n > max) {

@@ -46,14 +46,20 @@ export function timesBasisPoints(minor: number, rateBp: number, code: CurrencyCo
 }
 
 export function sumMinor(values: readonly number[], code: CurrencyCode): number {
-  return toMinor(values.reduce((acc, v) => add(acc, money(v, code)), money(0, code)), code);
+  return toMinor(
+    values.reduce((acc, v) => add(acc, money(v, code)), money(0, code)),
+    code,
+  );
 }
 
 /** Shares `minor` over `weights` in proportion; the shares always add up to `minor` exactly (dinero's allocate). */
 export function allocateMinor(minor: number, weights: readonly number[], code: CurrencyCode): number[] {
   if (weights.length === 0) return [];
   if (minor === 0 || weights.every((w) => w === 0)) return weights.map(() => 0);
-  return allocate(money(minor, code), weights.map((w) => BigInt(w))).map((d) => toMinor(d, code));
+  return allocate(
+    money(minor, code),
+    weights.map((w) => BigInt(w)),
+  ).map((d) => toMinor(d, code));
 }
 
 /** "$1,234.50": Intl formats the exact decimal string, so no float ever touches the amount. */

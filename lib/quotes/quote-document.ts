@@ -54,30 +54,53 @@ export async function quoteDocument(jobNumber: number, revision: number): Promis
     include: { customer: { include: { contacts: { take: 1 } } }, motor: true },
   });
   if (!job) return null;
-  const quote = await db().quote.findUnique({ where: { jobId_revision: { jobId: job.id, revision } }, include: { lines: { orderBy: { position: 'asc' } } } });
+  const quote = await db().quote.findUnique({
+    where: { jobId_revision: { jobId: job.id, revision } },
+    include: { lines: { orderBy: { position: 'asc' } } },
+  });
   if (!quote) return null;
   const [redesign, { settings }] = await Promise.all([getApprovedRedesign(job.id), getCommercialSettings()]);
   const code = quoteCurrency(quote.currency);
   const m = (minor: number) => formatMoney(minor, code);
-  const t = estimateTotals(quote.lines, { currency: code, taxMode: quote.taxMode === 'PER_LINE' ? 'PER_LINE' : 'ON_TOTAL', discountBp: quote.discountBp });
+  const t = estimateTotals(quote.lines, {
+    currency: code,
+    taxMode: quote.taxMode === 'PER_LINE' ? 'PER_LINE' : 'ON_TOTAL',
+    discountBp: quote.discountBp,
+  });
   const number = quoteNumber(job.number, quote.revision);
   const totals: QuoteDocument['totals'] = [{ label: 'Subtotal', value: m(t.subtotalMinor) }];
   if (t.discountMinor) totals.push({ label: `Discount ${basisPointsToPercent(quote.discountBp)} %`, value: `−${m(t.discountMinor)}` });
-  for (const b of t.bands) if (b.rateBp > 0) totals.push({ label: `Tax ${basisPointsToPercent(b.rateBp)} % on ${m(b.baseMinor)}`, value: m(b.taxMinor) });
+  for (const b of t.bands)
+    if (b.rateBp > 0) totals.push({ label: `Tax ${basisPointsToPercent(b.rateBp)} % on ${m(b.baseMinor)}`, value: m(b.taxMinor) });
   totals.push({ label: `Total (${code})`, value: m(t.totalMinor), strong: true });
   const noticeIds = redesign ? ['isolation', 'redesign', 'hazardous-location'] : ['isolation', 'hazardous-location'];
-  const decision = quote.status === 'ACCEPTED' || quote.status === 'DECLINED'
-    ? `${quote.status === 'ACCEPTED' ? 'Accepted' : 'Declined'} by ${quote.decidedBy ?? '—'} on ${day(quote.decidedAt) ?? '—'}${quote.customerOrderNumber ? ` · customer order ${quote.customerOrderNumber}` : ''}`
-    : null;
+  const decision =
+    quote.status === 'ACCEPTED' || quote.status === 'DECLINED'
+      ? `${quote.status === 'ACCEPTED' ? 'Accepted' : 'Declined'} by ${quote.decidedBy ?? '—'} on ${day(quote.decidedAt) ?? '—'}${quote.customerOrderNumber ? ` · customer order ${quote.customerOrderNumber}` : ''}`
+      : null;
   return {
     shop: shopDetails(),
-    number, revision: quote.revision, status: quote.status, jobNumber: job.number,
-    issued: day(quote.sentAt), validUntil: day(quote.validUntil),
+    number,
+    revision: quote.revision,
+    status: quote.status,
+    jobNumber: job.number,
+    issued: day(quote.sentAt),
+    validUntil: day(quote.validUntil),
     customer: {
-      company: job.customer.company, contact: job.customer.contacts[0]?.name ?? null, address: job.customer.address,
-      phone: job.customer.phone, email: job.customer.email,
+      company: job.customer.company,
+      contact: job.customer.contacts[0]?.name ?? null,
+      address: job.customer.address,
+      phone: job.customer.phone,
+      email: job.customer.email,
     },
-    motor: [job.motor.manufacturer, job.motor.model, job.motor.serial ? `S/N ${job.motor.serial}` : null, job.motor.outputKw ? `${job.motor.outputKw.toFixed(2)} kW` : null].filter(Boolean).join(' · '),
+    motor: [
+      job.motor.manufacturer,
+      job.motor.model,
+      job.motor.serial ? `S/N ${job.motor.serial}` : null,
+      job.motor.outputKw ? `${job.motor.outputKw.toFixed(2)} kW` : null,
+    ]
+      .filter(Boolean)
+      .join(' · '),
     customerPo: job.customerPo,
     lines: quote.lines.map((l, i) => ({
       kind: LINE_KIND_LABELS[l.kind as LineKind],

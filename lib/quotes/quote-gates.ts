@@ -10,7 +10,8 @@ import { DomainError } from '@/lib/errors/domain-errors';
 
 export const QUOTE_GATE_MESSAGES = {
   needsSent: 'A job moves to "Quote sent" only once a quote has been sent: send it from the job’s Estimate and quote page first.',
-  needsAccepted: 'A job moves to "Customer approved" only when the customer’s acceptance of the latest quote is recorded: record it on the Estimate and quote page first.',
+  needsAccepted:
+    'A job moves to "Customer approved" only when the customer’s acceptance of the latest quote is recorded: record it on the Estimate and quote page first.',
 } as const;
 
 /** The latest revision that was sent (drafts after it do not count), or null. */
@@ -28,7 +29,11 @@ export function quoteGateRefusal(from: JobStatus, to: JobStatus, latestSent: Lat
 const GATED: readonly JobStatus[] = ['QUOTE_SENT', 'CUSTOMER_APPROVED'];
 
 export async function latestSentQuote(tx: Prisma.TransactionClient, jobId: string): Promise<LatestSentQuote> {
-  return tx.quote.findFirst({ where: { jobId, status: { not: 'DRAFT' } }, orderBy: { revision: 'desc' }, select: { revision: true, status: true } });
+  return tx.quote.findFirst({
+    where: { jobId, status: { not: 'DRAFT' } },
+    orderBy: { revision: 'desc' },
+    select: { revision: true, status: true },
+  });
 }
 
 /** Throws the refusal inside the status move's transaction. */

@@ -1,6 +1,7 @@
 /** Messages of the estimate and quote actions, pinned by the tests. */
 export const QUOTE_MESSAGES = {
-  stale: 'Someone else saved this estimate while you were editing. Your lines are kept in the form: review the current estimate, then save again.',
+  stale:
+    'Someone else saved this estimate while you were editing. Your lines are kept in the form: review the current estimate, then save again.',
   frozen: 'This quote has been sent and can no longer be changed. Start a new revision to change it; the sent one is kept.',
   currencyChanged: 'This estimate is priced in another currency than the form. Reload the page.',
   empty: 'An estimate needs at least one line before it can be sent.',

@@ -9,11 +9,38 @@ import type { QuoteDocument } from './quote-document';
 const ink = '#1d2430';
 const s = StyleSheet.create({
   page: { fontFamily: 'DejaVu', fontSize: 8.5, color: ink, paddingTop: 54, paddingBottom: 44, paddingHorizontal: 36, lineHeight: 1.3 },
-  header: { position: 'absolute', top: 20, left: 36, right: 36, flexDirection: 'row', justifyContent: 'space-between', borderBottomWidth: 1, borderBottomColor: ink, paddingBottom: 4 },
-  footer: { position: 'absolute', bottom: 18, left: 36, right: 36, flexDirection: 'row', justifyContent: 'space-between', fontSize: 7, color: '#5a6473' },
+  header: {
+    position: 'absolute',
+    top: 20,
+    left: 36,
+    right: 36,
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    borderBottomWidth: 1,
+    borderBottomColor: ink,
+    paddingBottom: 4,
+  },
+  footer: {
+    position: 'absolute',
+    bottom: 18,
+    left: 36,
+    right: 36,
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    fontSize: 7,
+    color: '#5a6473',
+  },
   shop: { fontSize: 12, fontWeight: 'bold' },
   title: { fontSize: 15, fontWeight: 'bold', marginBottom: 6 },
-  h2: { fontSize: 10.5, fontWeight: 'bold', marginTop: 10, marginBottom: 4, borderBottomWidth: 0.5, borderBottomColor: '#999', paddingBottom: 2 },
+  h2: {
+    fontSize: 10.5,
+    fontWeight: 'bold',
+    marginTop: 10,
+    marginBottom: 4,
+    borderBottomWidth: 0.5,
+    borderBottomColor: '#999',
+    paddingBottom: 2,
+  },
   cols: { flexDirection: 'row', gap: 14 },
   col: { flex: 1 },
   row: { flexDirection: 'row', marginBottom: 1.5 },
@@ -38,7 +65,10 @@ const s = StyleSheet.create({
 });
 
 const Row = ({ label, value }: { label: string; value: string | null }) => (
-  <View style={s.row}><Text style={s.label}>{label}</Text><Text style={s.value}>{value ?? '—'}</Text></View>
+  <View style={s.row}>
+    <Text style={s.label}>{label}</Text>
+    <Text style={s.value}>{value ?? '—'}</Text>
+  </View>
 );
 
 export function QuotePdfDocument({ d }: { d: QuoteDocument }) {
@@ -47,7 +77,9 @@ export function QuotePdfDocument({ d }: { d: QuoteDocument }) {
       <Page size="A4" style={s.page}>
         <View style={s.header} fixed>
           <Text style={s.shop}>{d.shop.name}</Text>
-          <Text>Quote {d.number} · job {d.jobNumber}</Text>
+          <Text>
+            Quote {d.number} · job {d.jobNumber}
+          </Text>
         </View>
         <View style={s.footer} fixed>
           <Text>{[d.shop.address, d.shop.phone].filter(Boolean).join(' · ') || 'Motor repair quote'}</Text>
@@ -77,36 +109,59 @@ export function QuotePdfDocument({ d }: { d: QuoteDocument }) {
 
         <Text style={s.h2}>Work and materials</Text>
         <View style={[s.trow, s.thead]} fixed>
-          <Text style={s.cKind}>Kind</Text><Text style={s.cDesc}>Description</Text><Text style={s.cQty}>Quantity</Text>
-          <Text style={s.cPrice}>Unit price</Text><Text style={s.cTax}>Tax</Text><Text style={s.cAmt}>Amount</Text>
+          <Text style={s.cKind}>Kind</Text>
+          <Text style={s.cDesc}>Description</Text>
+          <Text style={s.cQty}>Quantity</Text>
+          <Text style={s.cPrice}>Unit price</Text>
+          <Text style={s.cTax}>Tax</Text>
+          <Text style={s.cAmt}>Amount</Text>
         </View>
         {d.lines.map((l, i) => (
           <View key={i} style={s.trow} wrap={false}>
             <Text style={s.cKind}>{l.kind}</Text>
-            <Text style={s.cDesc}>{l.description}{l.reference ? ` — ${l.reference}` : ''}</Text>
-            <Text style={s.cQty}>{l.quantity}</Text><Text style={s.cPrice}>{l.unitPrice}</Text>
-            <Text style={s.cTax}>{l.taxRate}</Text><Text style={s.cAmt}>{l.amount}</Text>
+            <Text style={s.cDesc}>
+              {l.description}
+              {l.reference ? ` — ${l.reference}` : ''}
+            </Text>
+            <Text style={s.cQty}>{l.quantity}</Text>
+            <Text style={s.cPrice}>{l.unitPrice}</Text>
+            <Text style={s.cTax}>{l.taxRate}</Text>
+            <Text style={s.cAmt}>{l.amount}</Text>
           </View>
         ))}
         <View style={s.totals} wrap={false}>
           {d.totals.map((t) => (
             <View key={t.label} style={s.trowTotal}>
-              <Text style={t.strong ? s.strong : {}}>{t.label}</Text><Text style={t.strong ? s.strong : {}}>{t.value}</Text>
+              <Text style={t.strong ? s.strong : {}}>{t.label}</Text>
+              <Text style={t.strong ? s.strong : {}}>{t.value}</Text>
             </View>
           ))}
         </View>
-        {d.notes && <><Text style={s.h2}>Notes</Text><Text>{d.notes}</Text></>}
+        {d.notes && (
+          <>
+            <Text style={s.h2}>Notes</Text>
+            <Text>{d.notes}</Text>
+          </>
+        )}
 
         <Text style={s.h2}>Terms</Text>
         <Text>{d.terms}</Text>
 
         <Text style={s.h2}>Safety</Text>
-        {d.notices.map((n) => <Text key={n.id} style={s.notice}>⚠ {n.title}: {n.text}</Text>)}
+        {d.notices.map((n) => (
+          <Text key={n.id} style={s.notice}>
+            ⚠ {n.title}: {n.text}
+          </Text>
+        ))}
         <Text style={s.muted}>{d.closing}</Text>
 
         <View style={s.sign} wrap={false}>
-          <View style={s.signBox}><Text>Accepted for the customer (name, signature, date)</Text></View>
-          <View style={s.signBox}><Text>Customer order number</Text></View>
+          <View style={s.signBox}>
+            <Text>Accepted for the customer (name, signature, date)</Text>
+          </View>
+          <View style={s.signBox}>
+            <Text>Customer order number</Text>
+          </View>
         </View>
       </Page>
     </Document>

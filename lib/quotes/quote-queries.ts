@@ -18,7 +18,10 @@ export async function latestQuoteState(jobId: string) {
 
 /** What the estimate page needs of its job. */
 export async function jobForQuotePage(jobNumber: number) {
-  return db().job.findUnique({ where: { number: jobNumber }, select: { id: true, number: true, status: true, customer: { select: { company: true } } } });
+  return db().job.findUnique({
+    where: { number: jobNumber },
+    select: { id: true, number: true, status: true, customer: { select: { company: true } } },
+  });
 }
 
 /** The latest sent revision with its total and order number, for the job page's note. */

@@ -56,7 +56,10 @@ export interface EstimateLine {
 export function unitPriceMinor(text: string, currency: CurrencyCode): number | string {
   const exp = minorExponent(currency);
   const n = parseScaled(text, exp);
-  if (n === null) return text.trim() === '' ? 'Unit price is required.' : `Unit price must be an amount in ${currency} with at most ${exp} decimal place${exp === 1 ? '' : 's'}.`;
+  if (n === null)
+    return text.trim() === ''
+      ? 'Unit price is required.'
+      : `Unit price must be an amount in ${currency} with at most ${exp} decimal place${exp === 1 ? '' : 's'}.`;
   if (n > MAX_PRICE_MAJOR * 10 ** exp) return `Unit price must be at most ${MAX_PRICE_MAJOR.toLocaleString('en-US')} ${currency}.`;
   return n;
 }
@@ -76,8 +79,13 @@ export const estimateSaveSchema = z
       const price = unitPriceMinor(l.unitPrice, v.currency);
       if (typeof price === 'string') ctx.addIssue({ code: 'custom', path: ['lines', i, 'unitPrice'], message: price });
       return {
-        kind: l.kind, description: l.description, reference: l.reference || null, quantityMilli: l.quantity,
-        unit: l.unit, unitPriceMinor: typeof price === 'number' ? price : 0, taxRateBp: l.taxRate,
+        kind: l.kind,
+        description: l.description,
+        reference: l.reference || null,
+        quantityMilli: l.quantity,
+        unit: l.unit,
+        unitPriceMinor: typeof price === 'number' ? price : 0,
+        taxRateBp: l.taxRate,
       };
     });
     return { quoteId: v.quoteId, version: v.version, currency: v.currency, discountBp: v.discount, notes: v.notes || null, lines };

@@ -14,7 +14,8 @@ import type { EstimateLine } from './quote-schema';
  * Wire to buy, grams, rounded UP: the winder needs at least this much on the bench. This is the one place a
  * float (the engine's kg) becomes a stored quantity.
  */
-export const kgToBuyMilli = (copperKg: number, allowanceBp: number): number => Math.ceil(copperKg * (1 + allowanceBp / 10_000) * 1000 - 1e-9);
+export const kgToBuyMilli = (copperKg: number, allowanceBp: number): number =>
+  Math.ceil(copperKg * (1 + allowanceBp / 10_000) * 1000 - 1e-9);
 
 export function rewindMaterialLines(copper: WindingCopper, source: string, s: CommercialSettings): EstimateLine[] {
   const wire: EstimateLine[] = copper.lines.map((l) => ({
@@ -26,9 +27,24 @@ export function rewindMaterialLines(copper: WindingCopper, source: string, s: Co
     unitPriceMinor: s.copperPricePerKgMinor,
     taxRateBp: s.defaultTaxRateBp,
   }));
-  const copperCost = sumMinor(wire.map((l) => timesMilli(l.unitPriceMinor, l.quantityMilli, s.currency)), s.currency);
+  const copperCost = sumMinor(
+    wire.map((l) => timesMilli(l.unitPriceMinor, l.quantityMilli, s.currency)),
+    s.currency,
+  );
   const share = (bp: number, description: string): EstimateLine[] =>
-    bp > 0 ? [{ kind: 'REWIND', description: `${description}: ${basisPointsToPercent(bp)} % of the copper`, reference: source, quantityMilli: 1000, unit: 'lot', unitPriceMinor: timesBasisPoints(copperCost, bp, s.currency), taxRateBp: s.defaultTaxRateBp }] : [];
+    bp > 0
+      ? [
+          {
+            kind: 'REWIND',
+            description: `${description}: ${basisPointsToPercent(bp)} % of the copper`,
+            reference: source,
+            quantityMilli: 1000,
+            unit: 'lot',
+            unitPriceMinor: timesBasisPoints(copperCost, bp, s.currency),
+            taxRateBp: s.defaultTaxRateBp,
+          },
+        ]
+      : [];
   return [
     ...wire,
     ...share(s.insulationAllowanceBp, 'Insulation (slot liners, wedges, sleeving, ties)'),

@@ -17,22 +17,32 @@ export async function rewindCopperFor(jobId: string): Promise<RewindCopper> {
   if (redesign) {
     const c = redesign.snapshot.report.candidate;
     const mlt = redesign.snapshot.report.rows.find((r) => r.key === 'mlt')?.values.candidate ?? redesign.snapshot.original.meanTurnLengthMm;
-    if (mlt === undefined || mlt === null) return { ok: false, reason: 'The approved redesign has no mean turn length: enter it on the as-found sheet.' };
+    if (mlt === undefined || mlt === null)
+      return { ok: false, reason: 'The approved redesign has no mean turn length: enter it on the as-found sheet.' };
     const r = windingCopper({
-      seriesTurnsPerPhase: c.seriesTurnsPerPhase, parallelPaths: c.winding.parallelPaths, meanTurnLengthMm: mlt,
+      seriesTurnsPerPhase: c.seriesTurnsPerPhase,
+      parallelPaths: c.winding.parallelPaths,
+      meanTurnLengthMm: mlt,
       wires: c.wires.parts.map((p) => ({ label: p.wire.label, areaMm2: p.wire.areaMm2, count: p.count })),
     });
-    return r.ok ? { ok: true, source: `approved redesign, revision ${redesign.revision}`, copper: r.value } : { ok: false, reason: r.error.message };
+    return r.ok
+      ? { ok: true, source: `approved redesign, revision ${redesign.revision}`, copper: r.value }
+      : { ok: false, reason: r.error.message };
   }
   const sheet = await getAsFoundSheet(jobId);
   if (!sheet) return { ok: false, reason: 'There is no as-found data sheet or approved redesign yet.' };
   const mlt = sheet.sheet.winding.meanTurnLengthMm;
-  if (mlt === undefined) return { ok: false, reason: 'The as-found sheet has no mean turn length: the copper cannot be worked out without it.' };
+  if (mlt === undefined)
+    return { ok: false, reason: 'The as-found sheet has no mean turn length: the copper cannot be worked out without it.' };
   const a = analyseSheet(sheet.sheet);
   if (!a.ok) return { ok: false, reason: `The as-found sheet cannot be analysed: ${a.error.message}` };
   const r = windingCopper({
-    seriesTurnsPerPhase: a.value.winding.seriesTurnsPerPhase, parallelPaths: sheet.sheet.winding.parallelPaths, meanTurnLengthMm: mlt,
+    seriesTurnsPerPhase: a.value.winding.seriesTurnsPerPhase,
+    parallelPaths: sheet.sheet.winding.parallelPaths,
+    meanTurnLengthMm: mlt,
     wires: a.value.wires.map((w) => ({ label: wireLabel(w.standard, w.size), areaMm2: w.areaMm2, count: w.count })),
   });
-  return r.ok ? { ok: true, source: `as-found sheet, revision ${sheet.revision}`, copper: r.value } : { ok: false, reason: r.error.message };
+  return r.ok
+    ? { ok: true, source: `as-found sheet, revision ${sheet.revision}`, copper: r.value }
+    : { ok: false, reason: r.error.message };
 }

@@ -43,7 +43,14 @@ const pad = (lo: number, hi: number, values: number[]): [number, number] => {
 const tesla = (t: number): string => `${t.toFixed(3)} T (${teslaToKilolinesPerIn2(t).toFixed(1)} kl/in²)`;
 
 /** The six bands for the pinned candidates (one or two). */
-export function comparisonBands(pinned: readonly Candidate[], search: Pick<RedesignSearch, 'originalBasis'>, limits: RedesignLimits, flux: OriginalFlux | null, originalHarmonic: number, poleRatio: number): Band[] {
+export function comparisonBands(
+  pinned: readonly Candidate[],
+  search: Pick<RedesignSearch, 'originalBasis'>,
+  limits: RedesignLimits,
+  flux: OriginalFlux | null,
+  originalHarmonic: number,
+  poleRatio: number,
+): Band[] {
   const bands: Band[] = [];
   const density = (key: 'gap' | 'tooth' | 'yoke', label: string, t0: number | null): void => {
     const lim = limits[key];
@@ -51,12 +58,30 @@ export function comparisonBands(pinned: readonly Candidate[], search: Pick<Redes
     const hi = 1 + lim.over;
     const values = pinned.map((c) => c.ratios[key]);
     const scale = t0 ?? 1;
-    const text = (r: number): string => (t0 === null ? `${(r * 100).toFixed(1)} % of the original` : `${tesla(t0 * r)} · ${r >= 1 ? '+' : '−'}${Math.abs((r - 1) * 100).toFixed(1)} %`);
+    const text = (r: number): string =>
+      t0 === null
+        ? `${(r * 100).toFixed(1)} % of the original`
+        : `${tesla(t0 * r)} · ${r >= 1 ? '+' : '−'}${Math.abs((r - 1) * 100).toFixed(1)} %`;
     bands.push({
-      key, label, domain: pad(lo * scale, hi * scale, values.map((v) => v * scale)), allowed: [lo * scale, hi * scale], original: scale,
-      values: values.map((v) => v * scale), unit: t0 === null ? '× original' : 'T', originalText: text(1), texts: values.map(text),
+      key,
+      label,
+      domain: pad(
+        lo * scale,
+        hi * scale,
+        values.map((v) => v * scale),
+      ),
+      allowed: [lo * scale, hi * scale],
+      original: scale,
+      values: values.map((v) => v * scale),
+      unit: t0 === null ? '× original' : 'T',
+      originalText: text(1),
+      texts: values.map(text),
       allowedText: `${(lo * 100).toFixed(0)}–${(hi * 100).toFixed(0)} % of the original`,
-      ...(key === 'yoke' && poleRatio > 1 ? { note: `More poles: the back-iron density falls to about ${(100 / poleRatio).toFixed(0)} % of the original at the kept gap density. That fall is forced and costs nothing in the ranking.` } : {}),
+      ...(key === 'yoke' && poleRatio > 1
+        ? {
+            note: `More poles: the back-iron density falls to about ${(100 / poleRatio).toFixed(0)} % of the original at the kept gap density. That fall is forced and costs nothing in the ranking.`,
+          }
+        : {}),
     });
   };
   density('gap', 'Air-gap flux density (peak)', flux?.gapPeakT ?? null);
@@ -68,10 +93,20 @@ export function comparisonBands(pinned: readonly Candidate[], search: Pick<Redes
   const jScale = j0 ?? 1;
   const jAllowedHi = j0 === null ? jHi : Math.min(jHi * j0, limits.currentDensityMaxAPerMm2);
   const jValues = pinned.map((c) => c.currentDensity.ratio * jScale);
-  const jText = (j: number): string => (j0 === null ? `${((j / jScale) * 100).toFixed(1)} % of the original` : `${j.toFixed(2)} A/mm² (${ampsPerMm2ToCmilPerAmp(j).toFixed(0)} CM/A)`);
+  const jText = (j: number): string =>
+    j0 === null
+      ? `${((j / jScale) * 100).toFixed(1)} % of the original`
+      : `${j.toFixed(2)} A/mm² (${ampsPerMm2ToCmilPerAmp(j).toFixed(0)} CM/A)`;
   bands.push({
-    key: 'currentDensity', label: 'Current density', domain: pad(0, jAllowedHi, [...jValues, jScale]), allowed: [0, jAllowedHi], original: jScale,
-    values: jValues, unit: j0 === null ? '× original' : 'A/mm²', originalText: jText(jScale), texts: jValues.map(jText),
+    key: 'currentDensity',
+    label: 'Current density',
+    domain: pad(0, jAllowedHi, [...jValues, jScale]),
+    allowed: [0, jAllowedHi],
+    original: jScale,
+    values: jValues,
+    unit: j0 === null ? '× original' : 'A/mm²',
+    originalText: jText(jScale),
+    texts: jValues.map(jText),
     allowedText: j0 === null ? `up to ${(jHi * 100).toFixed(0)} % of the original` : `up to ${jAllowedHi.toFixed(2)} A/mm²`,
     note: 'A lower current density is never penalised.',
   });
@@ -79,17 +114,33 @@ export function comparisonBands(pinned: readonly Candidate[], search: Pick<Redes
   const fillLimit = search.originalBasis.slotFillLimit;
   const fills = pinned.map((c) => c.slotFill);
   bands.push({
-    key: 'slotFill', label: 'Slot fill (insulated wire / gross slot area)', domain: pad(0, fillLimit, [...fills, search.originalBasis.slotFill]), allowed: [0, fillLimit],
-    original: search.originalBasis.slotFill, values: fills, unit: '%', originalText: `${(search.originalBasis.slotFill * 100).toFixed(1)} %`,
-    texts: fills.map((f) => `${(f * 100).toFixed(1)} %`), allowedText: `up to ${(fillLimit * 100).toFixed(1)} %`,
+    key: 'slotFill',
+    label: 'Slot fill (insulated wire / gross slot area)',
+    domain: pad(0, fillLimit, [...fills, search.originalBasis.slotFill]),
+    allowed: [0, fillLimit],
+    original: search.originalBasis.slotFill,
+    values: fills,
+    unit: '%',
+    originalText: `${(search.originalBasis.slotFill * 100).toFixed(1)} %`,
+    texts: fills.map((f) => `${(f * 100).toFixed(1)} %`),
+    allowedText: `up to ${(fillLimit * 100).toFixed(1)} %`,
   });
 
   const hLimit = Math.max(limits.harmonicKwMax, originalHarmonic);
   const hs = pinned.map((c) => Math.max(c.harmonics.kw5, c.harmonics.kw7));
   bands.push({
-    key: 'harmonics', label: 'Harmonic content: larger of k_w5 and k_w7', domain: pad(0, hLimit, [...hs, originalHarmonic]), allowed: [0, hLimit],
-    original: originalHarmonic, values: hs, unit: '', originalText: originalHarmonic.toFixed(3),
-    texts: pinned.map((c, i) => `${(hs[i] ?? 0).toFixed(3)} (k_w5 ${c.harmonics.kw5.toFixed(3)}, k_w7 ${c.harmonics.kw7.toFixed(3)}; MMF harmonic content ${(c.harmonics.mmfDistortion * 100).toFixed(1)} %)`),
+    key: 'harmonics',
+    label: 'Harmonic content: larger of k_w5 and k_w7',
+    domain: pad(0, hLimit, [...hs, originalHarmonic]),
+    allowed: [0, hLimit],
+    original: originalHarmonic,
+    values: hs,
+    unit: '',
+    originalText: originalHarmonic.toFixed(3),
+    texts: pinned.map(
+      (c, i) =>
+        `${(hs[i] ?? 0).toFixed(3)} (k_w5 ${c.harmonics.kw5.toFixed(3)}, k_w7 ${c.harmonics.kw7.toFixed(3)}; MMF harmonic content ${(c.harmonics.mmfDistortion * 100).toFixed(1)} %)`,
+    ),
     allowedText: `up to ${hLimit.toFixed(3)}`,
   });
   return bands;

@@ -24,8 +24,13 @@ export async function chooseCandidate(raw: unknown) {
 }
 
 export async function approveRedesignRevision(raw: unknown) {
-  return guardedAction('redesign.approve', 'approve a redesign: only an engineer may approve one', approveRedesignSchema, async (user, input) => {
-    const r = await approveRedesign(user, input);
-    return success(r, `Revision ${r.revision} approved and frozen. The winder can print it now.`);
-  })(raw);
+  return guardedAction(
+    'redesign.approve',
+    'approve a redesign: only an engineer may approve one',
+    approveRedesignSchema,
+    async (user, input) => {
+      const r = await approveRedesign(user, input);
+      return success(r, `Revision ${r.revision} approved and frozen. The winder can print it now.`);
+    },
+  )(raw);
 }

@@ -27,12 +27,17 @@ export async function loadRedesignContext(jobId: string): Promise<{ ok: true; va
     getShopLimits(),
     listStockWires(jobId),
   ]);
-  if (!sheet) return { ok: false, reason: 'This job has no saved as-found data sheet yet. The redesign starts from the sheet: record the winding first.' };
+  if (!sheet)
+    return {
+      ok: false,
+      reason: 'This job has no saved as-found data sheet yet. The redesign starts from the sheet: record the winding first.',
+    };
   const m = job?.motor;
   // The plate speed describes the sheet's winding only when the plate frequency is the sheet's.
   const speed = m?.speedRpm && m.frequencyHz === sheet.sheet.supply.frequencyHz ? m.speedRpm : undefined;
   const original = originalFromSheet(sheet.sheet, speed);
-  if (!original.ok) return { ok: false, reason: `The as-found sheet cannot be used for a redesign: ${original.error.message} ${original.error.hint}` };
+  if (!original.ok)
+    return { ok: false, reason: `The as-found sheet cannot be used for a redesign: ${original.error.message} ${original.error.hint}` };
   return { ok: true, value: { sheet, original: original.value, shopLimits: limits.limits, stock } };
 }
 

@@ -39,8 +39,16 @@ export async function getApprovedRedesign(jobId: string): Promise<ApprovedRedesi
     throw new Error(`Approved redesign ${row.id} has no readable snapshot.`);
   const snapshot = row.snapshot;
   return {
-    id: row.id, jobId: row.jobId, revision: row.revision, approvedAt: row.approvedAt, approvedBy: row.approvedBy, note: row.approvalNote ?? '',
-    snapshot, winding: snapshot.report.candidate.winding, wires: snapshot.report.candidate.wires, nameplate: snapshot.report.nameplate,
+    id: row.id,
+    jobId: row.jobId,
+    revision: row.revision,
+    approvedAt: row.approvedAt,
+    approvedBy: row.approvedBy,
+    note: row.approvalNote ?? '',
+    snapshot,
+    winding: snapshot.report.candidate.winding,
+    wires: snapshot.report.candidate.wires,
+    nameplate: snapshot.report.nameplate,
   };
 }
 
@@ -73,9 +81,19 @@ export async function listRedesigns(jobId: string): Promise<RedesignRevision[]> 
     const request = storedRequestSchema.safeParse(r.request);
     if (!request.success) throw new Error(`Redesign ${r.id} holds a request that no longer matches the schema: ${request.error.message}`);
     return {
-      id: r.id, revision: r.revision, status: r.status, request: request.data, sheetRevision: r.sheetRevision, chosenKey: r.chosenKey,
-      version: r.version, createdAt: r.createdAt, updatedAt: r.updatedAt, createdBy: r.createdBy?.name ?? null,
-      approvedAt: r.approvedAt, approvedBy: r.approvedBy?.name ?? null, approvalNote: r.approvalNote,
+      id: r.id,
+      revision: r.revision,
+      status: r.status,
+      request: request.data,
+      sheetRevision: r.sheetRevision,
+      chosenKey: r.chosenKey,
+      version: r.version,
+      createdAt: r.createdAt,
+      updatedAt: r.updatedAt,
+      createdBy: r.createdBy?.name ?? null,
+      approvedAt: r.approvedAt,
+      approvedBy: r.approvedBy?.name ?? null,
+      approvalNote: r.approvalNote,
       snapshot: isRedesignSnapshot(r.snapshot) ? r.snapshot : null,
     };
   });

@@ -12,8 +12,22 @@ import { noNul } from '@/lib/validation/safe-text';
 /** "7, 8" or "7 8" → [7, 8]; "" → []. Messages name the field. */
 const wholeList = (label: string, max: number) =>
   z.preprocess(
-    (v) => (typeof v === 'string' ? v.split(/[\s,;]+/).filter(Boolean).map((x) => Number(x)) : v ?? []),
-    z.array(z.number({ error: `${label}: whole numbers separated by commas.` }).int(`${label}: whole numbers only.`).min(1, `${label}: at least 1.`).max(max, `${label}: at most ${max}.`), { error: `${label}: whole numbers separated by commas.` })
+    (v) =>
+      typeof v === 'string'
+        ? v
+            .split(/[\s,;]+/)
+            .filter(Boolean)
+            .map((x) => Number(x))
+        : (v ?? []),
+    z
+      .array(
+        z
+          .number({ error: `${label}: whole numbers separated by commas.` })
+          .int(`${label}: whole numbers only.`)
+          .min(1, `${label}: at least 1.`)
+          .max(max, `${label}: at most ${max}.`),
+        { error: `${label}: whole numbers separated by commas.` },
+      )
       .max(8, `${label}: at most 8 values.`),
   );
 
@@ -60,10 +74,20 @@ export function limitsFromForm(f: LimitsForm): RedesignLimits {
 export function limitsToForm(l: RedesignLimits): LimitsForm {
   const p = (v: number) => Math.round(v * 10_000) / 100;
   return {
-    gapRisePercent: p(l.gap.over), gapFallPercent: p(l.gap.under), toothRisePercent: p(l.tooth.over), toothFallPercent: p(l.tooth.under),
-    yokeRisePercent: p(l.yoke.over), yokeFallPercent: p(l.yoke.under), currentDensityRisePercent: p(l.currentDensityRise),
-    currentDensityMaxAPerMm2: l.currentDensityMaxAPerMm2, slotFillMaxPercent: p(l.slotFillMax), maxStrandsInHand: l.maxStrandsInHand,
-    maxWireSizes: l.maxWireSizes, mixedSizeRatioMax: l.mixedSizeRatioMax, minWireBareMm: l.minWireBareMm, harmonicKwMax: l.harmonicKwMax,
+    gapRisePercent: p(l.gap.over),
+    gapFallPercent: p(l.gap.under),
+    toothRisePercent: p(l.tooth.over),
+    toothFallPercent: p(l.tooth.under),
+    yokeRisePercent: p(l.yoke.over),
+    yokeFallPercent: p(l.yoke.under),
+    currentDensityRisePercent: p(l.currentDensityRise),
+    currentDensityMaxAPerMm2: l.currentDensityMaxAPerMm2,
+    slotFillMaxPercent: p(l.slotFillMax),
+    maxStrandsInHand: l.maxStrandsInHand,
+    maxWireSizes: l.maxWireSizes,
+    mixedSizeRatioMax: l.mixedSizeRatioMax,
+    minWireBareMm: l.minWireBareMm,
+    harmonicKwMax: l.harmonicKwMax,
   };
 }
 
@@ -92,21 +116,35 @@ export type RedesignRequestFormInput = z.input<typeof redesignRequestFormSchema>
 export type RedesignRequestForm = z.output<typeof redesignRequestFormSchema>;
 
 /** Form output → the request the engine and the database hold. */
-export const requestFromForm = (f: RedesignRequestForm): RedesignRequest => ({ target: { ...f.target, allowOverPitch: f.target.allowOverPitch ?? false }, limits: limitsFromForm(f.limits) });
+export const requestFromForm = (f: RedesignRequestForm): RedesignRequest => ({
+  target: { ...f.target, allowOverPitch: f.target.allowOverPitch ?? false },
+  limits: limitsFromForm(f.limits),
+});
 
 const fraction = z.number().min(0).max(1);
 /** A request as stored (fractions): checked when read back so a damaged row fails loudly, not silently. */
 export const storedRequestSchema = z.object({
   target: z.object({
-    lineVoltageV: z.number().positive(), frequencyHz: z.number().positive(), poles: z.number().int().min(2),
-    connection: z.enum(CONNECTION_CHOICES), spans: z.array(z.number().int()), layers: z.enum(LAYER_CHOICES), parallelPaths: z.array(z.number().int()),
+    lineVoltageV: z.number().positive(),
+    frequencyHz: z.number().positive(),
+    poles: z.number().int().min(2),
+    connection: z.enum(CONNECTION_CHOICES),
+    spans: z.array(z.number().int()),
+    layers: z.enum(LAYER_CHOICES),
+    parallelPaths: z.array(z.number().int()),
     // Requests stored before over-pitch became an explicit choice did not ask for it.
     allowOverPitch: z.boolean().default(false),
   }),
   limits: z.object({
-    gap: z.object({ over: fraction, under: fraction }), tooth: z.object({ over: fraction, under: fraction }), yoke: z.object({ over: fraction, under: fraction }),
-    currentDensityRise: fraction, currentDensityMaxAPerMm2: z.number().positive(), slotFillMax: fraction, maxStrandsInHand: z.number().int().min(1),
-    maxWireSizes: z.union([z.literal(1), z.literal(2), z.literal(3)]), mixedSizeRatioMax: z.number().min(1),
+    gap: z.object({ over: fraction, under: fraction }),
+    tooth: z.object({ over: fraction, under: fraction }),
+    yoke: z.object({ over: fraction, under: fraction }),
+    currentDensityRise: fraction,
+    currentDensityMaxAPerMm2: z.number().positive(),
+    slotFillMax: fraction,
+    maxStrandsInHand: z.number().int().min(1),
+    maxWireSizes: z.union([z.literal(1), z.literal(2), z.literal(3)]),
+    mixedSizeRatioMax: z.number().min(1),
     // Added with the ranking rule; older rows get the shop defaults of that change.
     minWireBareMm: z.number().min(0).default(DEFAULT_REDESIGN_LIMITS.minWireBareMm),
     harmonicKwMax: z.number().positive().max(1).default(DEFAULT_REDESIGN_LIMITS.harmonicKwMax),
@@ -124,7 +162,15 @@ export const chooseCandidateSchema = z.object({
 export const approveRedesignSchema = z.object({
   redesignId: uuid('Redesign'),
   version: z.coerce.number().int().positive(),
-  note: z.preprocess((v) => (typeof v === 'string' ? v.trim() : v), noNul(z.string({ error: 'Write an approval note.' }).min(3, 'Write an approval note: what you checked and any condition.').max(2000, 'At most 2000 characters.'))),
+  note: z.preprocess(
+    (v) => (typeof v === 'string' ? v.trim() : v),
+    noNul(
+      z
+        .string({ error: 'Write an approval note.' })
+        .min(3, 'Write an approval note: what you checked and any condition.')
+        .max(2000, 'At most 2000 characters.'),
+    ),
+  ),
 });
 
 /** Shop settings form: the redesign limits with the version it was loaded from. */

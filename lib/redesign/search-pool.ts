@@ -62,15 +62,26 @@ function start(): Worker {
 }
 
 /** Searches in the worker thread; resolves with the engine's result (never rejects). */
-export function searchOffThread(original: RedesignOriginal, request: RedesignRequest, stock: readonly StockWire[]): Promise<EngineResult<RedesignSearch>> {
-  if (pending.size >= MAX_QUEUE) return Promise.resolve(fail('not-applicable', 'The server is busy with other redesign searches.', 'Try again in a minute.'));
+export function searchOffThread(
+  original: RedesignOriginal,
+  request: RedesignRequest,
+  stock: readonly StockWire[],
+): Promise<EngineResult<RedesignSearch>> {
+  if (pending.size >= MAX_QUEUE)
+    return Promise.resolve(fail('not-applicable', 'The server is busy with other redesign searches.', 'Try again in a minute.'));
   worker ??= start();
   const w = worker;
   const id = nextId++;
   return new Promise((resolve) => {
     const timer = setTimeout(() => {
       pending.delete(id);
-      resolve(fail('too-wide', 'The search took too long and was stopped.', 'Narrow the request: fewer wires in hand, sizes per conductor, spans or circuits.'));
+      resolve(
+        fail(
+          'too-wide',
+          'The search took too long and was stopped.',
+          'Narrow the request: fewer wires in hand, sizes per conductor, spans or circuits.',
+        ),
+      );
       // The worker is busy with this search: replace it (jobs queued behind it fail and may be retried).
       if (worker === w) worker = null;
       void w.terminate();

@@ -29,5 +29,7 @@ export interface RedesignSnapshot {
 export function isRedesignSnapshot(v: unknown): v is RedesignSnapshot {
   if (typeof v !== 'object' || v === null) return false;
   const s = v as Record<string, unknown>;
-  return s.format === REDESIGN_SNAPSHOT_FORMAT && s.version === REDESIGN_SNAPSHOT_VERSION && typeof s.report === 'object' && s.report !== null;
+  return (
+    s.format === REDESIGN_SNAPSHOT_FORMAT && s.version === REDESIGN_SNAPSHOT_VERSION && typeof s.report === 'object' && s.report !== null
+  );
 }

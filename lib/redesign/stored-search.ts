@@ -23,7 +23,10 @@ export interface StoredSearch {
 /** The value to store: the search with its candidate list cut to STORED_CANDIDATES_MAX. */
 export function toStoredSearch(search: RedesignSearch, sheetRevision: number): StoredSearch {
   return {
-    format: STORED_SEARCH_FORMAT, version: STORED_SEARCH_VERSION, sheetRevision, candidatesFound: search.candidates.length,
+    format: STORED_SEARCH_FORMAT,
+    version: STORED_SEARCH_VERSION,
+    sheetRevision,
+    candidatesFound: search.candidates.length,
     search: { ...search, candidates: search.candidates.slice(0, STORED_CANDIDATES_MAX) },
   };
 }
@@ -33,6 +36,13 @@ export function isStoredSearch(v: unknown): v is StoredSearch {
   if (typeof v !== 'object' || v === null) return false;
   const s = v as Record<string, unknown>;
   const search = s.search as Record<string, unknown> | null | undefined;
-  return s.format === STORED_SEARCH_FORMAT && s.version === STORED_SEARCH_VERSION && typeof search === 'object' && search !== null
-    && Array.isArray(search.candidates) && Array.isArray(search.rejected) && typeof search.asFound === 'object';
+  return (
+    s.format === STORED_SEARCH_FORMAT &&
+    s.version === STORED_SEARCH_VERSION &&
+    typeof search === 'object' &&
+    search !== null &&
+    Array.isArray(search.candidates) &&
+    Array.isArray(search.rejected) &&
+    typeof search.asFound === 'object'
+  );
 }

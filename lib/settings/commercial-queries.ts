@@ -12,9 +12,15 @@ export async function getCommercialSettings(): Promise<{ settings: CommercialSet
     settings: {
       currency: isCurrencyCode(row.currency) ? row.currency : DEFAULT_COMMERCIAL_SETTINGS.currency,
       taxMode: row.taxMode === 'PER_LINE' ? 'PER_LINE' : 'ON_TOTAL',
-      defaultTaxRateBp: row.defaultTaxRateBp, labourRateMinor: row.labourRateMinor, copperPricePerKgMinor: row.copperPricePerKgMinor,
-      copperAllowanceBp: row.copperAllowanceBp, insulationAllowanceBp: row.insulationAllowanceBp, varnishAllowanceBp: row.varnishAllowanceBp,
-      quoteValidityDays: row.quoteValidityDays, quoteTerms: row.quoteTerms, warrantyDays: row.warrantyDays,
+      defaultTaxRateBp: row.defaultTaxRateBp,
+      labourRateMinor: row.labourRateMinor,
+      copperPricePerKgMinor: row.copperPricePerKgMinor,
+      copperAllowanceBp: row.copperAllowanceBp,
+      insulationAllowanceBp: row.insulationAllowanceBp,
+      varnishAllowanceBp: row.varnishAllowanceBp,
+      quoteValidityDays: row.quoteValidityDays,
+      quoteTerms: row.quoteTerms,
+      warrantyDays: row.warrantyDays,
     },
   };
 }

@@ -10,7 +10,11 @@ import { parseScaled } from '@/lib/quotes/decimal-input';
 import type { CommercialSettings } from './commercial-defaults';
 
 const days = (label: string, min: number, max: number) =>
-  z.coerce.number({ error: `${label} must be a whole number of days.` }).int(`${label} must be a whole number of days.`).min(min, `${label}: at least ${min}.`).max(max, `${label}: at most ${max}.`);
+  z.coerce
+    .number({ error: `${label} must be a whole number of days.` })
+    .int(`${label} must be a whole number of days.`)
+    .min(min, `${label}: at least ${min}.`)
+    .max(max, `${label}: at most ${max}.`);
 
 const PRICE_FIELDS = ['labourRate', 'copperPricePerKg'] as const;
 
@@ -35,15 +39,27 @@ export const commercialSettingsSchema = z
     for (const f of PRICE_FIELDS) {
       const n = parseScaled(v[f], exp);
       if (n === null || n > MAX_PRICE_MAJOR * 10 ** exp) {
-        ctx.addIssue({ code: 'custom', path: [f], message: `Enter an amount in ${v.currency} with at most ${exp} decimal place${exp === 1 ? '' : 's'}, up to ${MAX_PRICE_MAJOR.toLocaleString('en-US')}.` });
+        ctx.addIssue({
+          code: 'custom',
+          path: [f],
+          message: `Enter an amount in ${v.currency} with at most ${exp} decimal place${exp === 1 ? '' : 's'}, up to ${MAX_PRICE_MAJOR.toLocaleString('en-US')}.`,
+        });
       } else price[f] = n;
     }
     return {
       version: v.version,
       settings: {
-        currency: v.currency, taxMode: v.taxMode, defaultTaxRateBp: v.defaultTaxRate, labourRateMinor: price.labourRate,
-        copperPricePerKgMinor: price.copperPricePerKg, copperAllowanceBp: v.copperAllowance, insulationAllowanceBp: v.insulationAllowance,
-        varnishAllowanceBp: v.varnishAllowance, quoteValidityDays: v.quoteValidityDays, quoteTerms: v.quoteTerms, warrantyDays: v.warrantyDays,
+        currency: v.currency,
+        taxMode: v.taxMode,
+        defaultTaxRateBp: v.defaultTaxRate,
+        labourRateMinor: price.labourRate,
+        copperPricePerKgMinor: price.copperPricePerKg,
+        copperAllowanceBp: v.copperAllowance,
+        insulationAllowanceBp: v.insulationAllowance,
+        varnishAllowanceBp: v.varnishAllowance,
+        quoteValidityDays: v.quoteValidityDays,
+        quoteTerms: v.quoteTerms,
+        warrantyDays: v.warrantyDays,
       },
     };
   });

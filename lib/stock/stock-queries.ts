@@ -23,15 +23,34 @@ const grade = (g: number): EnamelGrade => (g === 1 || g === 3 ? g : 2);
 export async function listStock(): Promise<StockRowView[]> {
   const rows = await db().wireStock.findMany({
     orderBy: [{ bareMm: 'desc' }, { standard: 'asc' }, { enamelGrade: 'asc' }],
-    include: { reservations: { where: { releasedAt: null }, orderBy: { createdAt: 'asc' }, include: { redesign: { select: { jobId: true, revision: true, job: { select: { number: true } } } } } } },
+    include: {
+      reservations: {
+        where: { releasedAt: null },
+        orderBy: { createdAt: 'asc' },
+        include: { redesign: { select: { jobId: true, revision: true, job: { select: { number: true } } } } },
+      },
+    },
   });
   return rows.map((r) => {
     const standard = r.standard === 'awg' ? 'awg' : 'metric';
     const w = stockWire({ standard, size: r.size, enamelGrade: grade(r.enamelGrade) });
-    const reservations = r.reservations.map((x) => ({ jobId: x.redesign.jobId, jobNumber: x.redesign.job.number, revision: x.redesign.revision, kg: x.kg, at: x.createdAt }));
+    const reservations = r.reservations.map((x) => ({
+      jobId: x.redesign.jobId,
+      jobNumber: x.redesign.job.number,
+      revision: x.redesign.revision,
+      kg: x.kg,
+      at: x.createdAt,
+    }));
     return {
-      id: r.id, standard, size: r.size, enamelGrade: grade(r.enamelGrade), quantityKg: r.quantityKg, note: r.note, wire: w.ok ? w.value : null,
-      reservations, reservedKg: reservations.reduce((sum, x) => sum + x.kg, 0),
+      id: r.id,
+      standard,
+      size: r.size,
+      enamelGrade: grade(r.enamelGrade),
+      quantityKg: r.quantityKg,
+      note: r.note,
+      wire: w.ok ? w.value : null,
+      reservations,
+      reservedKg: reservations.reduce((sum, x) => sum + x.kg, 0),
     };
   });
 }

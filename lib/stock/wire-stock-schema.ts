@@ -11,7 +11,10 @@ import { noNul } from '@/lib/validation/safe-text';
 export const wireStockSchema = z
   .object({
     standard: z.enum(['awg', 'metric'], { error: 'Wire standard is AWG or metric.' }),
-    size: z.preprocess((v) => (typeof v === 'string' ? v.trim() : v), noNul(z.string({ error: 'Enter the wire size.' }).min(1, 'Enter the wire size.').max(20, 'At most 20 characters.'))),
+    size: z.preprocess(
+      (v) => (typeof v === 'string' ? v.trim() : v),
+      noNul(z.string({ error: 'Enter the wire size.' }).min(1, 'Enter the wire size.').max(20, 'At most 20 characters.')),
+    ),
     enamelGrade: z.coerce.number().pipe(z.union([z.literal(1), z.literal(2), z.literal(3)], { error: 'Enamel grade is 1, 2 or 3.' })),
     quantityKg: optionalNumber({ label: 'Quantity', positive: true, max: 100_000, unit: 'kg' }),
     note: optionalText(200),

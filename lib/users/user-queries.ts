@@ -3,5 +3,8 @@ import { db } from '@/lib/db/client';
 
 /** Everyone, active people first, then by name. */
 export async function listUsers() {
-  return db().user.findMany({ orderBy: [{ active: 'desc' }, { name: 'asc' }], select: { id: true, name: true, email: true, role: true, active: true } });
+  return db().user.findMany({
+    orderBy: [{ active: 'desc' }, { name: 'asc' }],
+    select: { id: true, name: true, email: true, role: true, active: true },
+  });
 }

@@ -6,8 +6,7 @@ import { z } from 'zod';
 import { noNul } from './safe-text';
 import { numberTextMessage, parseDecimal } from './number-text';
 
-const blankToUndefined = (v: unknown): unknown =>
-  v === '' || v === null || (typeof v === 'number' && Number.isNaN(v)) ? undefined : v;
+const blankToUndefined = (v: unknown): unknown => (v === '' || v === null || (typeof v === 'number' && Number.isNaN(v)) ? undefined : v);
 
 const toNumber = (v: unknown): unknown => {
   const b = blankToUndefined(v);
@@ -30,7 +29,9 @@ interface NumberRule {
 
 function numberSchema({ min, max, positive, int, label, unit }: NumberRule) {
   const u = unit ? ` ${unit}` : '';
-  let s = z.number({ error: (issue) => (typeof issue.input === 'string' ? numberTextMessage(label, issue.input) : `${label} must be a number.`) });
+  let s = z.number({
+    error: (issue) => (typeof issue.input === 'string' ? numberTextMessage(label, issue.input) : `${label} must be a number.`),
+  });
   if (int) s = s.int(`${label} must be a whole number.`);
   if (positive) s = s.positive(`${label} must be greater than zero.`);
   if (min !== undefined) s = s.min(min, `${label} must be at least ${min}${u}.`);
@@ -41,18 +42,26 @@ function numberSchema({ min, max, positive, int, label, unit }: NumberRule) {
 export const optionalNumber = (rule: NumberRule) => z.preprocess(toNumber, numberSchema(rule).optional());
 
 export const requiredNumber = (rule: NumberRule) =>
-  z.preprocess(toNumber, numberSchema(rule).optional()).refine((v) => v !== undefined, `${rule.label} is required.`)
+  z
+    .preprocess(toNumber, numberSchema(rule).optional())
+    .refine((v) => v !== undefined, `${rule.label} is required.`)
     .transform((v) => v as number);
 
 export const optionalText = (max = 200) =>
-  z.preprocess((v) => (typeof v === 'string' ? v.trim() : v), noNul(z.string().max(max, `At most ${max} characters.`)))
+  z
+    .preprocess((v) => (typeof v === 'string' ? v.trim() : v), noNul(z.string().max(max, `At most ${max} characters.`)))
     .optional()
     .transform((v) => (v ? v : undefined));
 
 export const requiredText = (label: string, max = 200) =>
   z.preprocess(
     (v) => (typeof v === 'string' ? v.trim() : v),
-    noNul(z.string({ error: `${label} is required.` }).min(1, `${label} is required.`).max(max, `At most ${max} characters.`)),
+    noNul(
+      z
+        .string({ error: `${label} is required.` })
+        .min(1, `${label} is required.`)
+        .max(max, `At most ${max} characters.`),
+    ),
   );
 
 /** An email address, length checked first so the format pattern never runs on a huge string. */
@@ -67,7 +76,6 @@ export const optionalEmail = z
   .transform((v) => (v ? v : undefined));
 
 /** A calendar date from an <input type="date"> (YYYY-MM-DD), or nothing. */
-export const optionalDate = z
-  .preprocess(blankToUndefined, z.iso.date('Enter a date as YYYY-MM-DD.').optional());
+export const optionalDate = z.preprocess(blankToUndefined, z.iso.date('Enter a date as YYYY-MM-DD.').optional());
 
 export const uuid = (label: string) => z.uuid(`${label} is not valid.`);

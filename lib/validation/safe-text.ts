@@ -19,7 +19,11 @@ export const noNul = <S extends z.ZodString>(s: S): S => s.refine((v) => !hasNul
  * stack; what lies beyond the budget is left to the schema (whose strings refuse NUL too).
  */
 export function findNul(value: unknown, budget = 20_000): (string | number)[] | null {
-  interface Node { v: unknown; key: string | number | null; parent: Node | null }
+  interface Node {
+    v: unknown;
+    key: string | number | null;
+    parent: Node | null;
+  }
   const pathOf = (n: Node, last?: string): (string | number)[] => {
     const out: (string | number)[] = last === undefined ? [] : [last];
     for (let c: Node | null = n; c && c.key !== null; c = c.parent) out.unshift(c.key);

@@ -11,8 +11,27 @@ export const LIBRARY_SHEETS = 100_000;
 const SEARCH_TARGET_MS = 100;
 
 const SAMPLE_SHEET = {
-  core: { boreMm: 150, coreLengthMm: 120, outsideDiameterMm: 240, slots: 36, slotDepthMm: 20, slotWidthTopMm: 7, slotWidthBottomMm: 9, toothWidthMm: 6.5, stackingFactor: 0.95 },
-  winding: { layers: 2, style: 'lap', spans: [7], turnsPerCoil: [14], parallelPaths: 1, connection: 'star', meanTurnLengthMm: 560, leads: 6 },
+  core: {
+    boreMm: 150,
+    coreLengthMm: 120,
+    outsideDiameterMm: 240,
+    slots: 36,
+    slotDepthMm: 20,
+    slotWidthTopMm: 7,
+    slotWidthBottomMm: 9,
+    toothWidthMm: 6.5,
+    stackingFactor: 0.95,
+  },
+  winding: {
+    layers: 2,
+    style: 'lap',
+    spans: [7],
+    turnsPerCoil: [14],
+    parallelPaths: 1,
+    connection: 'star',
+    meanTurnLengthMm: 560,
+    leads: 6,
+  },
   wires: [{ standard: 'metric', size: '0.85', count: 2, enamelGrade: 2 }],
   insulation: { thermalClass: 'F', slotLiner: 'NMN 0.25 mm', wedges: 'Fibreglass', varnish: 'Polyester' },
   supply: { lineVoltageV: 400, frequencyHz: 50, poles: 4, ratedCurrentA: 5, ratedOutputKw: 2.2 },
@@ -53,10 +72,21 @@ export const librarySection: BenchSection = {
         );
         await sql.exec('ANALYZE "WindingSheet"');
       });
-      lines.push(`seeded ${LIBRARY_SHEETS.toLocaleString('en-GB')} jobs and sheets in ${((performance.now() - t0) / 1000).toFixed(1)} s (migrations included)`);
+      lines.push(
+        `seeded ${LIBRARY_SHEETS.toLocaleString('en-GB')} jobs and sheets in ${((performance.now() - t0) / 1000).toFixed(1)} s (migrations included)`,
+      );
       const searches: [string, Parameters<typeof searchLibrary>[0]][] = [
         ['slots + poles + bore ±1 mm', { slots: 36, poles: 4, boreMm: { min: 149, max: 151 }, target: { boreMm: 150 } }],
-        ['slots + poles + bore ±1 + length ±5 mm', { slots: 48, poles: 4, boreMm: { min: 199, max: 201 }, coreLengthMm: { min: 195, max: 205 }, target: { boreMm: 200, coreLengthMm: 200 } }],
+        [
+          'slots + poles + bore ±1 + length ±5 mm',
+          {
+            slots: 48,
+            poles: 4,
+            boreMm: { min: 199, max: 201 },
+            coreLengthMm: { min: 195, max: 205 },
+            target: { boreMm: 200, coreLengthMm: 200 },
+          },
+        ],
         ['bore ±1 + length ±5 mm (no slots)', { boreMm: { min: 149, max: 151 }, coreLengthMm: { min: 115, max: 125 } }],
         ['slots + poles only (broad)', { slots: 36, poles: 4 }],
         ['output ±10 % + voltage ±5 %', { outputKw: { min: 9.9, max: 12.1 }, lineVoltageV: { min: 437, max: 483 } }],
@@ -74,7 +104,9 @@ export const librarySection: BenchSection = {
         worst = Math.max(worst, t.medianMs);
         lines.push(`${formatTiming(t)}   → ${count} rows`);
       }
-      lines.push(`target: every typical search under ${SEARCH_TARGET_MS} ms — ${worst < SEARCH_TARGET_MS ? 'met' : 'NOT met'} (slowest median ${worst.toFixed(1)} ms)`);
+      lines.push(
+        `target: every typical search under ${SEARCH_TARGET_MS} ms — ${worst < SEARCH_TARGET_MS ? 'met' : 'NOT met'} (slowest median ${worst.toFixed(1)} ms)`,
+      );
     } finally {
       await closeDb();
     }

@@ -57,7 +57,9 @@ const log = (s: string) => process.stderr.write(`[bench ${engine}] ${s}\n`);
 
 // ---- data -------------------------------------------------------------------------------------------
 await prepareDatabase();
-const user = await db().user.create({ data: { name: 'Bench Desk', email: `bench-${process.pid}@bench.invalid`, role: 'FRONT_DESK', passwordHash: 'x' } });
+const user = await db().user.create({
+  data: { name: 'Bench Desk', email: `bench-${process.pid}@bench.invalid`, role: 'FRONT_DESK', passwordHash: 'x' },
+});
 const { token } = await createSession(user.id);
 const cookie = `cw_session=${token}`;
 
@@ -95,8 +97,28 @@ async function fillJobs(total: number): Promise<void> {
 }
 
 const SAMPLE_SHEET = JSON.stringify({
-  core: { boreMm: 150, coreLengthMm: 120, outsideDiameterMm: 240, slots: 36, slotDepthMm: 20, slotWidthTopMm: 7, slotWidthBottomMm: 9, toothWidthMm: 6.5, stackingFactor: 0.95 },
-  winding: { layers: 2, style: 'lap', spans: [7], turnsPerCoil: [14], parallelPaths: 1, connection: 'star', meanTurnLengthMm: 560, leads: 6, jumperNotes: 'x'.repeat(3000) },
+  core: {
+    boreMm: 150,
+    coreLengthMm: 120,
+    outsideDiameterMm: 240,
+    slots: 36,
+    slotDepthMm: 20,
+    slotWidthTopMm: 7,
+    slotWidthBottomMm: 9,
+    toothWidthMm: 6.5,
+    stackingFactor: 0.95,
+  },
+  winding: {
+    layers: 2,
+    style: 'lap',
+    spans: [7],
+    turnsPerCoil: [14],
+    parallelPaths: 1,
+    connection: 'star',
+    meanTurnLengthMm: 560,
+    leads: 6,
+    jumperNotes: 'x'.repeat(3000),
+  },
   wires: [{ standard: 'metric', size: '0.85', count: 2, enamelGrade: 2 }],
   insulation: { thermalClass: 'F' },
   supply: { lineVoltageV: 400, frequencyHz: 50, poles: 4, ratedCurrentA: 5, ratedOutputKw: 2.2 },
@@ -104,14 +126,17 @@ const SAMPLE_SHEET = JSON.stringify({
 });
 async function fillSheets(n: number): Promise<void> {
   const t0 = performance.now();
-  await sql(`INSERT INTO "WindingSheet" (id, "jobId", data, slots, poles, "boreMm", "coreLengthMm", "lineVoltageV", "frequencyHz", "outputKw", manufacturer, model, "updatedAt")
+  await sql(
+    `INSERT INTO "WindingSheet" (id, "jobId", data, slots, poles, "boreMm", "coreLengthMm", "lineVoltageV", "frequencyHz", "outputKw", manufacturer, model, "updatedAt")
     SELECT 'bench-s-' || g, 'bench-j-' || g, $1::jsonb,
       (ARRAY[24,36,36,48,48,54,60,72,72,96])[1 + g % 10], (ARRAY[2,4,4,4,6,6,8])[1 + (g / 10) % 7],
       60 + (g::bigint * 7919 % 3400) / 10.0, 50 + (g::bigint * 104729 % 4500) / 10.0,
       (ARRAY[230,400,415,460,575,690])[1 + g % 6], (ARRAY[50,60])[1 + g % 2], 0.37 + (g % 2000) / 10.0,
       (ARRAY['Aldermoor','Brightwell','Corrick','Dunstable Electric','Everholt','Farrow & Lane'])[1 + g % 6], 'M-' || (g % 997),
       timestamp '2026-11-30' - (g || ' minutes')::interval
-    FROM generate_series(1, ${n}) g`, [SAMPLE_SHEET]);
+    FROM generate_series(1, ${n}) g`,
+    [SAMPLE_SHEET],
+  );
   await sql('ANALYZE "WindingSheet"');
   log(`${n} sheets in ${((performance.now() - t0) / 1000).toFixed(1)} s`);
 }
@@ -127,7 +152,11 @@ async function freePort(): Promise<number> {
   });
 }
 
-interface Server { base: string; child: ChildProcess; stop(): Promise<void> }
+interface Server {
+  base: string;
+  child: ChildProcess;
+  stop(): Promise<void>;
+}
 async function startServer(): Promise<Server> {
   if (engine === 'embedded') await closeDb(); // the embedded database is single-process
   const port = await freePort();
@@ -146,7 +175,9 @@ async function startServer(): Promise<Server> {
     if (child.exitCode !== null) throw new Error(`server exited:\n${out}`);
     try {
       if ((await fetch(`${base}/login`)).ok) break;
-    } catch { /* starting */ }
+    } catch {
+      /* starting */
+    }
     if (Date.now() > deadline) throw new Error(`server did not start:\n${out}`);
     await new Promise((r) => setTimeout(r, 500));
   }
@@ -201,7 +232,12 @@ async function timePage(s: Server, path: string, runs = RUNS): Promise<{ p50: nu
 }
 
 // ---- cases ------------------------------------------------------------------------------------------
-interface Case { name: string; path: string; data: () => Promise<unknown>; mayBeEmpty?: boolean }
+interface Case {
+  name: string;
+  path: string;
+  data: () => Promise<unknown>;
+  mayBeEmpty?: boolean;
+}
 
 /** The statements the board page sends: session, the board itself, the staff list for the filter. */
 const boardCase = (name: string, params: Record<string, string>): Case => ({
@@ -213,7 +249,12 @@ const boardCase = (name: string, params: Record<string, string>): Case => ({
     await listStaff();
   },
 });
-const libraryCase = (name: string, params: Record<string, string>, search: Parameters<typeof searchLibrary>[0], mayBeEmpty = false): Case => ({
+const libraryCase = (
+  name: string,
+  params: Record<string, string>,
+  search: Parameters<typeof searchLibrary>[0],
+  mayBeEmpty = false,
+): Case => ({
   name,
   path: `/library?${new URLSearchParams({ ...params, unit: 'mm' })}`,
   data: async () => {
@@ -225,7 +266,12 @@ const libraryCase = (name: string, params: Record<string, string>, search: Param
 
 /** The cursor of the row at `position` of the open board by promised date (the old "page 400"). */
 async function deepCursor(position: number): Promise<string> {
-  const row = await db().job.findFirstOrThrow({ where: { isOpen: true, promisedAt: { not: null } }, orderBy: [{ promisedAt: 'asc' }, { number: 'asc' }], skip: position - 1, select: { number: true, promisedAt: true } });
+  const row = await db().job.findFirstOrThrow({
+    where: { isOpen: true, promisedAt: { not: null } },
+    orderBy: [{ promisedAt: 'asc' }, { number: 'asc' }],
+    skip: position - 1,
+    select: { number: true, promisedAt: true },
+  });
   return `${row.number}~${row.promisedAt!.toISOString()}`;
 }
 
@@ -244,10 +290,19 @@ const legacyCase = (name: string, opts: { status?: (typeof OPEN)[number]; custom
     await db().job.count({ where });
     await db().job.findMany({
       where,
-      orderBy: opts.customer ? [{ customer: { company: 'asc' } }, { number: 'asc' }] : [{ promisedAt: { sort: 'asc', nulls: 'last' } }, { number: 'asc' }],
+      orderBy: opts.customer
+        ? [{ customer: { company: 'asc' } }, { number: 'asc' }]
+        : [{ promisedAt: { sort: 'asc', nulls: 'last' } }, { number: 'asc' }],
       skip: ((opts.page ?? 1) - 1) * 25,
       take: 25,
-      select: { id: true, number: true, status: true, customer: { select: { id: true, company: true } }, motor: { select: { manufacturer: true, serial: true } }, assignee: { select: { name: true } } },
+      select: {
+        id: true,
+        number: true,
+        status: true,
+        customer: { select: { id: true, company: true } },
+        motor: { select: { manufacturer: true, serial: true } },
+        assignee: { select: { name: true } },
+      },
     });
     await db().customer.findMany({ orderBy: { company: 'asc' }, select: { id: true, company: true } });
     await listStaff();
@@ -260,7 +315,11 @@ const legacyCases = (): Case[] => [
   legacyCase('before: page 400 (offset 9,975)', { page: 400 }),
 ];
 
-interface Floor { p50: number; rows: number; statements: number }
+interface Floor {
+  p50: number;
+  rows: number;
+  statements: number;
+}
 async function floors(cases: Case[]): Promise<Map<string, Floor>> {
   const captured = new Map<string, Statement[]>();
   for (const c of cases) captured.set(c.name, await capture(c.data));
@@ -298,7 +357,13 @@ async function floors(cases: Case[]): Promise<Map<string, Floor>> {
   return out;
 }
 
-interface Row { name: string; size: number; p50: number; p95: number; floor?: Floor }
+interface Row {
+  name: string;
+  size: number;
+  p50: number;
+  p95: number;
+  floor?: Floor;
+}
 const rows: Row[] = [];
 
 async function measure(size: number, cases: Case[]): Promise<Server> {
@@ -353,7 +418,11 @@ cases = [
   ...(await growthCases()),
   libraryCase('library: text that matches nothing', { q: 'zzqx nothing' }, { text: 'zzqx nothing' }, true),
   libraryCase('library: manufacturer part (ightwe)', { q: 'ightwe' }, { text: 'ightwe' }),
-  libraryCase('library: slots + poles + bore ±1 mm', { slots: '36', poles: '4', bore: '150', boreTol: '1' }, { slots: 36, poles: 4, boreMm: { min: 149, max: 151 }, target: { boreMm: 150 } }),
+  libraryCase(
+    'library: slots + poles + bore ±1 mm',
+    { slots: '36', poles: '4', bore: '150', boreTol: '1' },
+    { slots: 36, poles: 4, boreMm: { min: 149, max: 151 }, target: { boreMm: 150 } },
+  ),
 ];
 server = await measure(SIZES.large, cases);
 
@@ -389,15 +458,17 @@ let failures = 0;
 async function tenClients(offset: number): Promise<{ p50: number; perSecond: number }> {
   const times: number[] = [];
   const t0 = performance.now();
-  await Promise.all(Array.from({ length: 10 }, async (_, c) => {
-    for (let k = 0; k < 3; k++) {
-      const t = performance.now();
-      const res = await fetch(`${server.base}/jobs/${openJobs[offset + c * 3 + k]}/job-sheet/pdf`, { headers: { cookie } });
-      await res.arrayBuffer();
-      if (res.status === 200) times.push(performance.now() - t);
-      else failures++;
-    }
-  }));
+  await Promise.all(
+    Array.from({ length: 10 }, async (_, c) => {
+      for (let k = 0; k < 3; k++) {
+        const t = performance.now();
+        const res = await fetch(`${server.base}/jobs/${openJobs[offset + c * 3 + k]}/job-sheet/pdf`, { headers: { cookie } });
+        await res.arrayBuffer();
+        if (res.status === 200) times.push(performance.now() - t);
+        else failures++;
+      }
+    }),
+  );
   return { p50: pct(times, 50), perSecond: times.length / ((performance.now() - t0) / 1000) };
 }
 results.pdfTenCold = await tenClients(200);
@@ -405,7 +476,15 @@ results.pdfTenCached = await tenClients(200);
 if (failures > 0 || pdfCount === 0) throw new Error(`job sheet PDFs failed (${failures} refused or failed, ${pdfCount} while browsing)`);
 
 // RSS under 10 mixed clients (board views, library, job pages, PDFs) for 20 s.
-const mixed = ['/jobs', '/jobs?sort=customer', '/jobs?status=WINDING', '/library?q=ightwe&unit=mm', '/jobs/1001', `/jobs/1002/job-sheet/pdf`, '/jobs?q=SN-0000777'];
+const mixed = [
+  '/jobs',
+  '/jobs?sort=customer',
+  '/jobs?status=WINDING',
+  '/library?q=ightwe&unit=mm',
+  '/jobs/1001',
+  `/jobs/1002/job-sheet/pdf`,
+  '/jobs?q=SN-0000777',
+];
 let peak = 0;
 let stopMix = false;
 const sampler = setInterval(() => (peak = Math.max(peak, serverRssMb(server))), 250);

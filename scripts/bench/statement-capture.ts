@@ -6,7 +6,10 @@
 import { PGlite } from '@electric-sql/pglite';
 import pg from 'pg';
 
-export interface Statement { text: string; values: unknown[] }
+export interface Statement {
+  text: string;
+  values: unknown[];
+}
 
 let capturing: Statement[] | null = null;
 
@@ -55,7 +58,7 @@ export function pgReplayer(client: pg.Client): Replayer {
 export function pgliteReplayer(db: PGlite): Replayer {
   return async (statements) => {
     let rows = 0;
-    for (const s of statements) rows += (await pgliteQuery.call(db, s.text, s.values) as { rows: unknown[] }).rows.length;
+    for (const s of statements) rows += ((await pgliteQuery.call(db, s.text, s.values)) as { rows: unknown[] }).rows.length;
     return rows;
   };
 }

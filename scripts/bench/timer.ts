@@ -71,7 +71,11 @@ export const formatTiming = (t: Timing): string =>
   `${t.name.padEnd(44)} median ${(t.medianMs * 1000).toFixed(1).padStart(8)} µs   mean ${(t.meanMs * 1000).toFixed(1).padStart(8)} µs   (${t.iterations} calls)`;
 
 /** Times an async call (e.g. a database query): `runs` calls after `warmup`, one at a time. */
-export async function timeItAsync(name: string, fn: () => Promise<unknown>, { warmup = 3, runs = 25 }: { warmup?: number; runs?: number } = {}): Promise<Timing> {
+export async function timeItAsync(
+  name: string,
+  fn: () => Promise<unknown>,
+  { warmup = 3, runs = 25 }: { warmup?: number; runs?: number } = {},
+): Promise<Timing> {
   for (let i = 0; i < warmup; i++) sink = await fn();
   const times: number[] = [];
   for (let i = 0; i < runs; i++) {

@@ -21,7 +21,12 @@ const PHONE = { width: 390, height: 844 };
 const WCAG_21_AA = ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'];
 
 type RoleName = 'front desk' | 'winder' | 'engineer' | 'administrator';
-const USERS: Record<RoleName, { email: string; password: string }> = { 'front desk': FRONT_DESK, winder: WINDER, engineer: ENGINEER, administrator: ADMIN };
+const USERS: Record<RoleName, { email: string; password: string }> = {
+  'front desk': FRONT_DESK,
+  winder: WINDER,
+  engineer: ENGINEER,
+  administrator: ADMIN,
+};
 const ALL: RoleName[] = ['front desk', 'winder', 'engineer', 'administrator'];
 
 /**
@@ -29,7 +34,11 @@ const ALL: RoleName[] = ['front desk', 'winder', 'engineer', 'administrator'];
  * gets a draft redesign with a chosen candidate in the first test. `{compare}` is filled with two library
  * sheets' ids once known.
  */
-interface Screen { path: string; roles: RoleName[]; phone?: boolean }
+interface Screen {
+  path: string;
+  roles: RoleName[];
+  phone?: boolean;
+}
 const SCREENS: Screen[] = [
   { path: '/jobs', roles: ALL, phone: true },
   { path: '/jobs/new', roles: ['front desk', 'administrator'] },
@@ -60,7 +69,10 @@ async function axeProblems(page: Page, where: string): Promise<string[]> {
   return result.violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
     .map((v) => {
-      const targets = v.nodes.slice(0, 4).map((n) => n.target.join(' ')).join(' | ');
+      const targets = v.nodes
+        .slice(0, 4)
+        .map((n) => n.target.join(' '))
+        .join(' | ');
       return `${where}: ${v.id} (${v.impact}) ${v.help} — ${v.nodes.length} element${v.nodes.length === 1 ? '' : 's'}: ${targets}`;
     });
 }
@@ -137,7 +149,9 @@ describe('accessibility and tablet layout of every screen', () => {
     await page.waitForURL(/rev=1/, { timeout: 120_000 });
     await expect.poll(() => page.getByRole('table', { name: 'Candidate windings' }).count(), { timeout: 60_000 }).toBe(1);
     await page.getByRole('button', { name: 'Choose candidate 1', exact: true }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Candidate 1 beside the as-found winding' }).count(), { timeout: 60_000 }).toBe(1);
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'Candidate 1 beside the as-found winding' }).count(), { timeout: 60_000 })
+      .toBe(1);
     await page.goto(`${e2e.app.baseUrl}/library?slots=36&poles=4`);
     const ids = await page.locator('input[name="compare"]').evaluateAll((els) => els.slice(0, 2).map((e) => (e as HTMLInputElement).value));
     expect(ids.length).toBe(2);
@@ -149,7 +163,10 @@ describe('accessibility and tablet layout of every screen', () => {
     await e2e.browser.context.clearCookies();
     const page = await e2e.browser.context.newPage();
     const problems: string[] = [];
-    for (const [name, size] of [['desktop', DESKTOP], ['tablet', TABLET]] as const) {
+    for (const [name, size] of [
+      ['desktop', DESKTOP],
+      ['tablet', TABLET],
+    ] as const) {
       await page.setViewportSize(size);
       await page.goto(`${e2e.app.baseUrl}/login`);
       await settle(page);
@@ -163,9 +180,13 @@ describe('accessibility and tablet layout of every screen', () => {
     await page.close();
   });
 
-  it.each(ALL)('%s: no serious or critical axe violation at 1366 and 820 px, and no sideways scroll on a tablet', async (role) => {
-    const { axe, scroll } = await checkRole(role);
-    expect.soft(axe, 'axe-core violations').toEqual([]);
-    expect.soft(scroll, 'sideways scrolling').toEqual([]);
-  }, 600_000);
+  it.each(ALL)(
+    '%s: no serious or critical axe violation at 1366 and 820 px, and no sideways scroll on a tablet',
+    async (role) => {
+      const { axe, scroll } = await checkRole(role);
+      expect.soft(axe, 'axe-core violations').toEqual([]);
+      expect.soft(scroll, 'sideways scrolling').toEqual([]);
+    },
+    600_000,
+  );
 });

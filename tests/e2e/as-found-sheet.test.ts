@@ -36,9 +36,16 @@ describe('a winder records an as-found sheet', () => {
     expect(await field(page, 'Poles').inputValue()).toBe('6');
 
     for (const [label, value] of [
-      ['Bore (mm)', '130'], ['Core length (mm)', '110'], ['Core outside diameter (mm)', '210'], ['Stator slots', '36'],
-      ['Slot depth (mm)', '15'], ['Slot width, top (bore end) (mm)', '5'], ['Slot width, bottom (mm)', '7'], ['Tooth width (mm)', '5.5'],
-    ] as const) await field(page, label).fill(value);
+      ['Bore (mm)', '130'],
+      ['Core length (mm)', '110'],
+      ['Core outside diameter (mm)', '210'],
+      ['Stator slots', '36'],
+      ['Slot depth (mm)', '15'],
+      ['Slot width, top (bore end) (mm)', '5'],
+      ['Slot width, bottom (mm)', '7'],
+      ['Tooth width (mm)', '5.5'],
+    ] as const)
+      await field(page, label).fill(value);
     await field(page, 'Layers').selectOption('1');
     await field(page, 'Coil style').selectOption('concentric');
     await field(page, 'Single-layer coiling').selectOption('half');
@@ -61,7 +68,9 @@ describe('a winder records an as-found sheet', () => {
     await field(page, 'Insulation class').selectOption('F');
 
     const analysis = page.getByTestId('analysis');
-    await expect.poll(() => analysis.locator('[data-finding="parallel-paths"]').textContent(), { timeout: 10_000 }).toContain('Possible: 1, 3.');
+    await expect
+      .poll(() => analysis.locator('[data-finding="parallel-paths"]').textContent(), { timeout: 10_000 })
+      .toContain('Possible: 1, 3.');
     expect(await page.getByTestId('kw1').textContent()).toMatch(/^0\.9\d{3}$/);
     expect(await analysis.getByText('Air gap, peak').count()).toBe(1);
     expect(await page.getByRole('img', { name: /Slot diagram: 36 slots, 6 poles/ }).count()).toBe(1);
@@ -106,7 +115,9 @@ describe('a winder records an as-found sheet', () => {
     expect(await field(page, 'Bore (mm)').inputValue()).toBe('130');
     await page.getByRole('button', { name: 'Dismiss' }).click();
 
-    await page.locator('#import-json').setInputFiles({ name: 'job-sheet.json', mimeType: 'application/json', buffer: Buffer.from(exported) });
+    await page
+      .locator('#import-json')
+      .setInputFiles({ name: 'job-sheet.json', mimeType: 'application/json', buffer: Buffer.from(exported) });
     await expect.poll(() => page.getByRole('status').filter({ hasText: 'Imported job-sheet.json' }).count()).toBe(1);
     await page.getByRole('button', { name: 'Save data sheet' }).click();
     await expect.poll(() => page.getByRole('status').filter({ hasText: 'Data sheet saved (revision 2).' }).count()).toBe(1);

@@ -48,7 +48,9 @@ describe('a winder records the core-loss test before and after stripping', () =>
 
     await fillReadings(page, voltage!, '100');
     await page.getByRole('button', { name: 'Save test' }).click();
-    await expect.poll(async () => page.getByRole('status').filter({ hasText: 'Core-loss test before stripping saved.' }).count(), SLOW).toBe(1);
+    await expect
+      .poll(async () => page.getByRole('status').filter({ hasText: 'Core-loss test before stripping saved.' }).count(), SLOW)
+      .toBe(1);
     await expect.poll(async () => text(page, 'core-verdict'), SLOW).toContain('record the loop test after stripping');
 
     await page.getByLabel('When').selectOption('AFTER_STRIPPING');
@@ -58,12 +60,20 @@ describe('a winder records the core-loss test before and after stripping', () =>
     await page.locator('#data-hotSpots-0-axialPositionMm').fill('25');
     await page.locator('#data-hotSpots-0-riseK').fill('6');
     await page.getByRole('button', { name: 'Save test' }).click();
-    await expect.poll(async () => page.getByRole('status').filter({ hasText: 'Core-loss test after stripping saved.' }).count(), SLOW).toBe(1);
+    await expect
+      .poll(async () => page.getByRole('status').filter({ hasText: 'Core-loss test after stripping saved.' }).count(), SLOW)
+      .toBe(1);
 
     // 108 W against 100 W at the same voltage: +8.0 % [derived], within the default 20 % (shop practice).
-    await expect.poll(async () => text(page, 'core-verdict'), SLOW).toContain('+8.0 %, within the shop\'s limit of +20.0 %');
+    await expect.poll(async () => text(page, 'core-verdict'), SLOW).toContain("+8.0 %, within the shop's limit of +20.0 %");
     expect(await text(page, 'core-verdict')).toContain('✓ Core acceptable');
-    expect(await page.getByRole('table', { name: /Hot spots by test/ }).getByRole('row').filter({ hasText: '25 mm (0.98 in)' }).count()).toBe(1);
+    expect(
+      await page
+        .getByRole('table', { name: /Hot spots by test/ })
+        .getByRole('row')
+        .filter({ hasText: '25 mm (0.98 in)' })
+        .count(),
+    ).toBe(1);
     expect(await page.getByRole('img', { name: /Core end view/ }).count()).toBe(1);
     expect(await text(page, 'core-tests')).toContain('PA-E2E-7');
 
@@ -71,7 +81,9 @@ describe('a winder records the core-loss test before and after stripping', () =>
     expect(pdf.status()).toBe(200);
     const sheet = pdfText(await pdf.body());
     expect(sheet).toContain('Losses and efficiency after the rewind');
-    expect(sheet).toMatch(/Rewinding to the original data \(predicted\) leaves the stator copper loss unchanged at [\d.]+ W at \d+ °C \(class [BF], IEEE 112 specified temperature\); efficiency [\d.]+ % → [\d.]+ %/);
+    expect(sheet).toMatch(
+      /Rewinding to the original data \(predicted\) leaves the stator copper loss unchanged at [\d.]+ W at \d+ °C \(class [BF], IEEE 112 specified temperature\); efficiency [\d.]+ % → [\d.]+ %/,
+    );
     expect(sheet).toContain('Core-loss change from the loop tests');
     await page.close();
   });

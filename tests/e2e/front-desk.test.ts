@@ -4,7 +4,6 @@ import { useAppInBrowser } from '../support/e2e-session';
 import { signIn } from '../support/browser';
 import { FRONT_DESK, WINDER } from '../support/demo-users';
 
-
 const e2e = useAppInBrowser();
 
 async function newPage(): Promise<Page> {
@@ -66,7 +65,9 @@ describe('the front desk', () => {
     await expect.poll(() => first.getByRole('status').filter({ hasText: 'Job saved.' }).count()).toBe(1);
     await second.getByLabel('Notes').fill('Customer will collect.');
     await second.getByRole('button', { name: 'Save job details' }).click();
-    await expect.poll(() => second.getByRole('form', { name: 'Job details' }).getByRole('alert').textContent()).toContain('Someone else changed this job');
+    await expect
+      .poll(() => second.getByRole('form', { name: 'Job details' }).getByRole('alert').textContent())
+      .toContain('Someone else changed this job');
     expect(await second.getByLabel('Notes').inputValue()).toBe('Customer will collect.');
     await second.getByRole('button', { name: /Keep my changes and retry/ }).click();
     await second.getByRole('button', { name: 'Save job details' }).click();

@@ -9,7 +9,7 @@ import fc from 'fast-check';
 import pg from 'pg';
 import { createHash, randomBytes } from 'node:crypto';
 import { startApp, type AppServer } from '../support/app-server';
-import { callActionOverHttp, listActions, pagePath, type ActionRef } from '../support/action-client';
+import { callActionOverHttp, listActions, pagePath } from '../support/action-client';
 
 const ON_POSTGRES = process.env.E2E_DB === 'postgres' && Boolean(process.env.TEST_DATABASE_URL);
 const RUNS = Number(process.env.FUZZ_RUNS ?? 12);
@@ -19,7 +19,22 @@ let sql: pg.Client;
 let cookie = '';
 
 // Tables a refused call must not touch (sessions, sign-in counters and drafts are not records).
-const RECORD_TABLES = ['Customer', 'CustomerContact', 'Motor', 'Job', 'JobEvent', 'Attachment', 'WindingSheet', 'WindingSheetRevision', 'Redesign', 'TestRecord', 'WireStock', 'ShopSettings', 'User', 'JobSheetSnapshot'];
+const RECORD_TABLES = [
+  'Customer',
+  'CustomerContact',
+  'Motor',
+  'Job',
+  'JobEvent',
+  'Attachment',
+  'WindingSheet',
+  'WindingSheetRevision',
+  'Redesign',
+  'TestRecord',
+  'WireStock',
+  'ShopSettings',
+  'User',
+  'JobSheetSnapshot',
+];
 
 async function fingerprint(): Promise<string> {
   const parts: string[] = [];
@@ -33,12 +48,42 @@ async function fingerprint(): Promise<string> {
 const hostileString = fc.oneof(
   fc.string({ maxLength: 40 }),
   fc.string({ unit: 'binary', maxLength: 40 }),
-  fc.constantFrom('\u0000', 'a\u0000b', ' '.repeat(5000) + 'x', 'x'.repeat(100_000), '1'.repeat(80_000) + ' awg', "' OR 1=1 --", '<script>alert(1)</script>', '../../etc/passwd', '%00', '\uD800', 'NaN', '-0', '1e309'),
+  fc.constantFrom(
+    '\u0000',
+    'a\u0000b',
+    ' '.repeat(5000) + 'x',
+    'x'.repeat(100_000),
+    '1'.repeat(80_000) + ' awg',
+    "' OR 1=1 --",
+    '<script>alert(1)</script>',
+    '../../etc/passwd',
+    '%00',
+    '\uD800',
+    'NaN',
+    '-0',
+    '1e309',
+  ),
 );
-const hostileNumber = fc.oneof(fc.integer(), fc.double({ noNaN: true, noDefaultInfinity: true }), fc.constantFrom(0, -1, 1e308, -1e308, 2 ** 53, 0.1));
+const hostileNumber = fc.oneof(
+  fc.integer(),
+  fc.double({ noNaN: true, noDefaultInfinity: true }),
+  fc.constantFrom(0, -1, 1e308, -1e308, 2 ** 53, 0.1),
+);
 const leaf = fc.oneof(hostileString, hostileNumber, fc.boolean(), fc.constant(null));
 const nested = fc.letrec((tie) => ({
-  value: fc.oneof({ depthSize: 'small', withCrossShrink: true }, leaf, fc.array(tie('value'), { maxLength: 4 }), fc.dictionary(fc.oneof(fc.string({ maxLength: 8 }), fc.constantFrom('jobId', 'version', 'sheet', 'draft', 'core', '__proto__', 'constructor', 'a\u0000')), tie('value'), { maxKeys: 5 })),
+  value: fc.oneof(
+    { depthSize: 'small', withCrossShrink: true },
+    leaf,
+    fc.array(tie('value'), { maxLength: 4 }),
+    fc.dictionary(
+      fc.oneof(
+        fc.string({ maxLength: 8 }),
+        fc.constantFrom('jobId', 'version', 'sheet', 'draft', 'core', '__proto__', 'constructor', 'a\u0000'),
+      ),
+      tie('value'),
+      { maxKeys: 5 },
+    ),
+  ),
 })).value;
 const deep = fc.integer({ min: 200, max: 2000 }).map((n) => {
   let v: unknown = 'x';
@@ -81,7 +126,8 @@ describe.skipIf(!ON_POSTGRES)('fuzz over HTTP (production build, PostgreSQL)', (
           if (r && r.ok === false) {
             expect(r.code, `${action.name}: ${JSON.stringify(r).slice(0, 300)}`).not.toBe('unexpected');
             expect(await fingerprint(), `${action.name} wrote on refusal`).toBe(before);
-            if (r.code === 'invalid') expect(Object.keys(r.fieldErrors ?? {}).length, `${action.name}: invalid without a field`).toBeGreaterThan(0);
+            if (r.code === 'invalid')
+              expect(Object.keys(r.fieldErrors ?? {}).length, `${action.name}: invalid without a field`).toBeGreaterThan(0);
           }
         }),
         { numRuns: RUNS },
@@ -93,7 +139,15 @@ describe.skipIf(!ON_POSTGRES)('fuzz over HTTP (production build, PostgreSQL)', (
     await fc.assert(
       fc.asyncProperty(hostileString, async (s) => {
         const e = encodeURIComponent(s.slice(0, 2000));
-        for (const path of [`/api/attachments/${e}`, `/jobs/${e}`, `/jobs/${e}/as-found/export`, `/jobs/${e}/job-sheet/pdf`, `/jobs?q=${e}`, `/library?q=${e}`, `/login?next=${e}`]) {
+        for (const path of [
+          `/api/attachments/${e}`,
+          `/jobs/${e}`,
+          `/jobs/${e}/as-found/export`,
+          `/jobs/${e}/job-sheet/pdf`,
+          `/jobs?q=${e}`,
+          `/library?q=${e}`,
+          `/login?next=${e}`,
+        ]) {
           const res = await fetch(`${app.baseUrl}${path}`, { headers: { Cookie: cookie }, redirect: 'manual' });
           expect(res.status, `${path} → ${res.status}`).toBeLessThan(500);
           await res.arrayBuffer();

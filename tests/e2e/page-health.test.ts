@@ -7,8 +7,21 @@ const e2e = useAppInBrowser();
 
 // Demo job 1016 is in winding with a saved as-found sheet; 1026 has shipped.
 const PAGES = [
-  '/jobs', '/jobs?due=overdue&sort=customer', '/jobs/new', '/jobs/1016', '/jobs/1016/as-found', '/jobs/1016/as-found/print', '/jobs/1005/as-found',
-  '/jobs/1016/redesign', '/jobs/1016/final-tests', '/jobs/1016/job-sheet', '/jobs/1026/job-sheet', '/library', '/library?slots=36&poles=4', '/stock', '/admin/users',
+  '/jobs',
+  '/jobs?due=overdue&sort=customer',
+  '/jobs/new',
+  '/jobs/1016',
+  '/jobs/1016/as-found',
+  '/jobs/1016/as-found/print',
+  '/jobs/1005/as-found',
+  '/jobs/1016/redesign',
+  '/jobs/1016/final-tests',
+  '/jobs/1016/job-sheet',
+  '/jobs/1026/job-sheet',
+  '/library',
+  '/library?slots=36&poles=4',
+  '/stock',
+  '/admin/users',
 ];
 
 describe('every screen', () => {

@@ -65,7 +65,9 @@ describe('the front desk quotes a repair', () => {
     await page.waitForURL(new RegExp(`/jobs/${number}$`));
     await expect.poll(() => page.getByText('accepted, customer order PO-E2E-77').count(), { timeout: 20_000 }).toBe(1);
     await page.getByRole('button', { name: 'Move to Customer approved' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: /^Status:/ }).textContent(), { timeout: 20_000 }).toContain('Customer approved');
+    await expect
+      .poll(() => page.getByRole('heading', { name: /^Status:/ }).textContent(), { timeout: 20_000 })
+      .toContain('Customer approved');
     await page.close();
   });
 });

@@ -9,7 +9,6 @@ const JOB = 1014;
 /** Set E2E_SCREENSHOTS=/some/dir to keep full-page screenshots of each step. */
 const SHOTS = process.env.E2E_SCREENSHOTS;
 
-
 const e2e = useAppInBrowser();
 
 async function shot(page: Page, name: string): Promise<void> {
@@ -35,7 +34,9 @@ async function request(page: Page, volts: string, hz: string, connection: 'star'
 
 async function chooseFirst(page: Page): Promise<void> {
   await page.getByRole('button', { name: 'Choose candidate 1', exact: true }).click();
-  await expect.poll(() => page.getByRole('heading', { name: 'Candidate 1 beside the as-found winding' }).count(), { timeout: 30_000 }).toBe(1);
+  await expect
+    .poll(() => page.getByRole('heading', { name: 'Candidate 1 beside the as-found winding' }).count(), { timeout: 30_000 })
+    .toBe(1);
 }
 
 describe('the engineer’s redesign', () => {
@@ -58,10 +59,19 @@ describe('the engineer’s redesign', () => {
     const page = await asEngineer();
     await page.goto(`${e2e.app.baseUrl}/jobs/${JOB}/redesign?rev=1`);
     expect(await page.getByTestId('ranking-rule').textContent()).toMatch(/as-found wire/);
-    expect(await page.getByTestId('search-counts').textContent()).toMatch(/famil(y|ies) examined .* turn counts checked .* wire combinations looked at/);
+    expect(await page.getByTestId('search-counts').textContent()).toMatch(
+      /famil(y|ies) examined .* turn counts checked .* wire combinations looked at/,
+    );
     // The first two are pinned on arrival: one band per quantity, each an image with a title and description.
     expect(await page.getByRole('heading', { name: 'Pinned for comparison (2 of 2)' }).count()).toBe(1);
-    for (const q of ['Air-gap flux density (peak)', 'Tooth flux density', 'Back-iron (yoke) flux density', 'Current density', 'Slot fill', 'Harmonic content'])
+    for (const q of [
+      'Air-gap flux density (peak)',
+      'Tooth flux density',
+      'Back-iron (yoke) flux density',
+      'Current density',
+      'Slot fill',
+      'Harmonic content',
+    ])
       expect(await page.getByRole('img', { name: new RegExp(q.replace(/[()]/g, '\\$&')) }).count()).toBe(1);
     // A third cannot be pinned until one is unpinned.
     const third = page.getByRole('checkbox', { name: /pin candidate 3$/ });
@@ -70,7 +80,9 @@ describe('the engineer’s redesign', () => {
     await third.check();
     expect(await page.getByRole('heading', { name: 'Pinned for comparison (2 of 2)' }).count()).toBe(1);
     await page.getByText('Numbers', { exact: true }).click();
-    expect(await page.getByRole('table', { name: 'Pinned candidates beside the as-found winding' }).textContent()).toMatch(/T \(\d+\.\d kl\/in²\)/);
+    expect(await page.getByRole('table', { name: 'Pinned candidates beside the as-found winding' }).textContent()).toMatch(
+      /T \(\d+\.\d kl\/in²\)/,
+    );
     await shot(page, '1b-bands');
     await page.close();
   });
@@ -85,7 +97,8 @@ describe('the engineer’s redesign', () => {
     expect(await page.getByRole('button', { name: /^Choose candidate/ }).count()).toBe(0);
     await page.getByLabel('Approval note *').fill('Looks fine.');
     await page.getByRole('button', { name: 'Approve revision 1' }).click();
-    await expect.poll(() => page.getByRole('form', { name: 'Approve redesign' }).getByRole('alert').textContent())
+    await expect
+      .poll(() => page.getByRole('form', { name: 'Approve redesign' }).getByRole('alert').textContent())
       .toBe('Your role does not allow you to approve a redesign: only an engineer may approve one.');
     await shot(page, '3-winder-refused');
     await page.close();
@@ -126,8 +139,9 @@ describe('the engineer’s redesign', () => {
     // The second tab still shows the draft: changing the choice there is refused by the server.
     await other.getByRole('button', { name: 'Choose candidate 2', exact: true }).click();
     await expect.poll(() => other.getByRole('alert').filter({ hasText: 'approved and frozen' }).count()).toBe(1);
-    expect(await other.getByRole('alert').filter({ hasText: 'approved and frozen' }).first().textContent())
-      .toBe('Revision 2 is approved and frozen: it cannot be changed. Start a new revision to change the design; it will need approval again.');
+    expect(await other.getByRole('alert').filter({ hasText: 'approved and frozen' }).first().textContent()).toBe(
+      'Revision 2 is approved and frozen: it cannot be changed. Start a new revision to change the design; it will need approval again.',
+    );
     await shot(other, '5-frozen-refused');
     await other.close();
     await page.close();
@@ -141,8 +155,18 @@ describe('the engineer’s redesign', () => {
     await page.getByLabel(/Also evaluate over-pitched spans/).check();
     await page.getByText(/^Limits for this job/).click();
     const wide: Record<string, string> = {
-      gapRisePercent: '100', gapFallPercent: '99', toothRisePercent: '100', toothFallPercent: '99', yokeRisePercent: '100', yokeFallPercent: '99',
-      currentDensityRisePercent: '100', currentDensityMaxAPerMm2: '30', slotFillMaxPercent: '100', maxStrandsInHand: '40', maxWireSizes: '3', mixedSizeRatioMax: '3',
+      gapRisePercent: '100',
+      gapFallPercent: '99',
+      toothRisePercent: '100',
+      toothFallPercent: '99',
+      yokeRisePercent: '100',
+      yokeFallPercent: '99',
+      currentDensityRisePercent: '100',
+      currentDensityMaxAPerMm2: '30',
+      slotFillMaxPercent: '100',
+      maxStrandsInHand: '40',
+      maxWireSizes: '3',
+      mixedSizeRatioMax: '3',
     };
     for (const [k, v] of Object.entries(wide)) await page.locator(`#limits-${k}`).fill(v);
     const started = Date.now();
@@ -154,9 +178,17 @@ describe('the engineer’s redesign', () => {
       await res.text();
       latencies.push(Date.now() - t);
     }
-    await expect.poll(async () => (await page.getByRole('table', { name: 'Candidate windings' }).count()) + (await page.getByText(/Narrow the request/).count()), { timeout: 60_000 }).toBeGreaterThan(0);
+    await expect
+      .poll(
+        async () =>
+          (await page.getByRole('table', { name: 'Candidate windings' }).count()) + (await page.getByText(/Narrow the request/).count()),
+        { timeout: 60_000 },
+      )
+      .toBeGreaterThan(0);
     const worst = Math.max(...latencies);
-    console.log(`/login while the widest search runs: ${latencies.length} requests, worst ${worst} ms, median ${[...latencies].sort((a, b) => a - b)[Math.floor(latencies.length / 2)]} ms`);
+    console.log(
+      `/login while the widest search runs: ${latencies.length} requests, worst ${worst} ms, median ${[...latencies].sort((a, b) => a - b)[Math.floor(latencies.length / 2)]} ms`,
+    );
     expect(worst).toBeLessThan(3000);
     await page.close();
   });

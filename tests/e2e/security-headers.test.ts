@@ -11,7 +11,17 @@ import { ADMIN } from '../support/demo-users';
 
 const e2e = useAppInBrowser();
 
-const PAGES = ['/jobs', '/jobs/new', '/jobs/1016', '/jobs/1016/as-found', '/jobs/1016/redesign', '/jobs/1016/final-tests', '/library', '/stock', '/admin/users'];
+const PAGES = [
+  '/jobs',
+  '/jobs/new',
+  '/jobs/1016',
+  '/jobs/1016/as-found',
+  '/jobs/1016/redesign',
+  '/jobs/1016/final-tests',
+  '/library',
+  '/stock',
+  '/admin/users',
+];
 
 describe('security headers', () => {
   it('a page carries a fresh nonce CSP and the framing and referrer rules', async () => {
@@ -44,7 +54,11 @@ describe('security headers', () => {
     }
     // Hydrated: a client-side control reacts (the board's link navigates without a full reload).
     await page.goto(`${e2e.app.baseUrl}/jobs/1016`);
-    await page.getByRole('link', { name: 'Back to the job board' }).or(page.getByRole('link', { name: 'Job board' })).first().click();
+    await page
+      .getByRole('link', { name: 'Back to the job board' })
+      .or(page.getByRole('link', { name: 'Job board' }))
+      .first()
+      .click();
     await page.waitForURL(/\/jobs$/);
     expect(problems).toEqual([]);
     await page.close();

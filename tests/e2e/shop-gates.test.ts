@@ -37,7 +37,9 @@ describe('final tests and the Ready gate', () => {
     await expect.poll(() => text(page, 'verdict-hipot'), { timeout: 30_000 }).toContain('⚠ FAIL');
     expect(await text(page, 'verdict-hipot')).toContain('below the proposed 3060 V');
     await page.getByRole('button', { name: 'Save test record' }).click();
-    await expect.poll(() => page.getByRole('status').filter({ hasText: 'Test record #1 saved: FAIL.' }).count(), { timeout: 30_000 }).toBe(1);
+    await expect
+      .poll(() => page.getByRole('status').filter({ hasText: 'Test record #1 saved: FAIL.' }).count(), { timeout: 30_000 })
+      .toBe(1);
 
     await page.goto(`${e2e.app.baseUrl}/jobs/${TESTING_JOB}`);
     expect(await text(page, 'gate-READY')).toContain('Testing → Ready needs a final-test record whose overall verdict is PASS');
@@ -83,7 +85,9 @@ describe('a job redesigned for 460 V 60 Hz', () => {
     const approver = await as(ENGINEER);
     await approver.goto(`${e2e.app.baseUrl}/jobs/${REDESIGN_JOB}/redesign?rev=1`);
     await approver.getByRole('button', { name: 'Choose candidate 1', exact: true }).click();
-    await expect.poll(() => approver.getByRole('heading', { name: 'Candidate 1 beside the as-found winding' }).count(), { timeout: 60_000 }).toBe(1);
+    await expect
+      .poll(() => approver.getByRole('heading', { name: 'Candidate 1 beside the as-found winding' }).count(), { timeout: 60_000 })
+      .toBe(1);
     await approver.getByLabel('Approval note *').fill('Flux and current density within limits for the 460 V 60 Hz supply.');
     await approver.getByRole('button', { name: 'Approve revision 1' }).click();
     await expect.poll(() => approver.getByText(/approved/i).count(), { timeout: 60_000 }).toBeGreaterThan(0);
@@ -108,11 +112,15 @@ describe('a job redesigned for 460 V 60 Hz', () => {
     await expect.poll(() => text(page, 'verdict-hipot')).toContain('✓ Pass');
     await page.getByRole('button', { name: 'Save test record' }).click();
     await expect.poll(() => page.getByRole('status').filter({ hasText: 'Test record #1 saved' }).count(), { timeout: 30_000 }).toBe(1);
-    await expect.poll(() => text(page, 'current-rating'), { timeout: 30_000 }).toContain('judged for the as-repaired rating 460 V 60 Hz, redesign revision 1');
+    await expect
+      .poll(() => text(page, 'current-rating'), { timeout: 30_000 })
+      .toContain('judged for the as-repaired rating 460 V 60 Hz, redesign revision 1');
 
     await page.goto(`${e2e.app.baseUrl}/jobs/${REDESIGN_JOB}/job-sheet`);
     expect(await text(page, 'judged-for')).toContain('judged for the as-repaired rating 460 V 60 Hz, redesign revision 1');
-    expect(await text(page, 'statement-of-work')).toMatch(/^Rewound to redesign revision 1 approved by Ravi Castellano on \d{4}-\d{2}-\d{2}\.$/);
+    expect(await text(page, 'statement-of-work')).toMatch(
+      /^Rewound to redesign revision 1 approved by Ravi Castellano on \d{4}-\d{2}-\d{2}\.$/,
+    );
     expect(await text(page, 'nameplate-as-repaired')).toContain('460 V');
     expect(await text(page, 'sheet-revision')).toContain('Issue');
     await page.close();
@@ -126,11 +134,16 @@ describe('the as-found sheet', () => {
     const notes = page.getByLabel('Notes', { exact: true });
     await notes.fill('Leads re-sleeved; typed just before leaving.');
     await expect.poll(() => page.getByText('Unsaved changes: keeping a draft…').count(), { timeout: 10_000 }).toBeGreaterThan(0);
-    await page.getByRole('link', { name: `← Job ${WINDING_JOB}` }).first().click();
+    await page
+      .getByRole('link', { name: `← Job ${WINDING_JOB}` })
+      .first()
+      .click();
     await page.waitForURL(new RegExp(`/jobs/${WINDING_JOB}$`));
     await page.goto(`${e2e.app.baseUrl}/jobs/${WINDING_JOB}/as-found`);
     // The form fills its fields once it is running in the browser: poll rather than read the server HTML.
-    await expect.poll(() => page.getByLabel('Notes', { exact: true }).inputValue(), { timeout: 30_000 }).toBe('Leads re-sleeved; typed just before leaving.');
+    await expect
+      .poll(() => page.getByLabel('Notes', { exact: true }).inputValue(), { timeout: 30_000 })
+      .toBe('Leads re-sleeved; typed just before leaving.');
     await page.close();
   });
 });

@@ -24,12 +24,15 @@ async function asUser(user: { email: string; password: string }): Promise<Page> 
 
 /** True when the element's box lies inside the viewport and it is the topmost thing at its centre. */
 async function inView(page: Page, selector: string): Promise<boolean> {
-  return page.locator(selector).first().evaluate((el) => {
-    const r = el.getBoundingClientRect();
-    const inside = r.width > 0 && r.height > 0 && r.left >= 0 && r.top >= 0 && r.right <= innerWidth && r.bottom <= innerHeight;
-    const hit = document.elementFromPoint(r.left + r.width / 2, r.top + r.height / 2);
-    return inside && hit !== null && el.contains(hit);
-  });
+  return page
+    .locator(selector)
+    .first()
+    .evaluate((el) => {
+      const r = el.getBoundingClientRect();
+      const inside = r.width > 0 && r.height > 0 && r.left >= 0 && r.top >= 0 && r.right <= innerWidth && r.bottom <= innerHeight;
+      const hit = document.elementFromPoint(r.left + r.width / 2, r.top + r.height / 2);
+      return inside && hit !== null && el.contains(hit);
+    });
 }
 
 describe('the winder’s sheet on a tablet', () => {
@@ -56,14 +59,25 @@ describe('the winder’s sheet on a tablet', () => {
     await page.goto(`${e2e.app.baseUrl}${SHEET}`);
     await page.waitForLoadState('networkidle');
     const small = await page.evaluate(() =>
-      Array.from(document.querySelectorAll<HTMLElement>('main input:not([type=checkbox]):not([type=radio]):not([type=file]):not([type=hidden]), main select, main button, main .btn'))
+      Array.from(
+        document.querySelectorAll<HTMLElement>(
+          'main input:not([type=checkbox]):not([type=radio]):not([type=file]):not([type=hidden]), main select, main button, main .btn',
+        ),
+      )
         .filter((el) => el.offsetParent !== null)
         .filter((el) => el.getBoundingClientRect().height < 44)
-        .map((el) => `${el.tagName.toLowerCase()}#${el.id} "${(el.textContent ?? '').trim().slice(0, 30)}" ${Math.round(el.getBoundingClientRect().height)} px`),
+        .map(
+          (el) =>
+            `${el.tagName.toLowerCase()}#${el.id} "${(el.textContent ?? '').trim().slice(0, 30)}" ${Math.round(el.getBoundingClientRect().height)} px`,
+        ),
     );
     expect(small).toEqual([]);
 
-    const numberFields = await page.locator('#sec-core').locator('xpath=..').locator('input').evaluateAll((els) => els.map((e) => (e as HTMLInputElement).inputMode));
+    const numberFields = await page
+      .locator('#sec-core')
+      .locator('xpath=..')
+      .locator('input')
+      .evaluateAll((els) => els.map((e) => (e as HTMLInputElement).inputMode));
     expect(numberFields.length).toBeGreaterThan(10);
     expect(numberFields.every((m) => m === 'decimal' || m === 'numeric')).toBe(true);
 
@@ -76,8 +90,16 @@ describe('the winder’s sheet on a tablet', () => {
         const cs = getComputedStyle(sel);
         ctx.font = `${cs.fontWeight} ${cs.fontSize} ${cs.fontFamily}`;
         // Room for the text: the box less its padding, borders and the drop-down arrow (about 20 px).
-        const room = sel.getBoundingClientRect().width - parseFloat(cs.paddingLeft) - parseFloat(cs.paddingRight) - parseFloat(cs.borderLeftWidth) - parseFloat(cs.borderRightWidth) - 20;
-        for (const o of Array.from(sel.options)) if (ctx.measureText(o.text).width > room) out.push(`${sel.id}: “${o.text}” needs ${Math.ceil(ctx.measureText(o.text).width)} px, has ${Math.floor(room)}`);
+        const room =
+          sel.getBoundingClientRect().width -
+          parseFloat(cs.paddingLeft) -
+          parseFloat(cs.paddingRight) -
+          parseFloat(cs.borderLeftWidth) -
+          parseFloat(cs.borderRightWidth) -
+          20;
+        for (const o of Array.from(sel.options))
+          if (ctx.measureText(o.text).width > room)
+            out.push(`${sel.id}: “${o.text}” needs ${Math.ceil(ctx.measureText(o.text).width)} px, has ${Math.floor(room)}`);
       }
       return out;
     });
@@ -89,7 +111,9 @@ describe('the winder’s sheet on a tablet', () => {
     const page = await asUser(WINDER);
     await page.goto(`${e2e.app.baseUrl}${SHEET}`);
     await page.waitForLoadState('networkidle');
-    expect(await page.locator('#wire-keys').textContent()).toMatch(/Alt\+Shift\+A adds a wire size; Alt\+Shift\+R removes the row you are in/);
+    expect(await page.locator('#wire-keys').textContent()).toMatch(
+      /Alt\+Shift\+A adds a wire size; Alt\+Shift\+R removes the row you are in/,
+    );
     const rows = page.locator('table.wires tbody tr');
     const before = await rows.count();
     await page.locator('#f-wires-0-size').focus();
@@ -130,7 +154,7 @@ describe('the engineer’s redesign on a tablet', () => {
     for (const b of await choose.all()) {
       await b.scrollIntoViewIfNeeded();
       const box = await b.boundingBox();
-      expect(box, await b.textContent() ?? '').not.toBeNull();
+      expect(box, (await b.textContent()) ?? '').not.toBeNull();
       expect(box!.x).toBeGreaterThanOrEqual(0);
       expect(box!.x + box!.width).toBeLessThanOrEqual(TABLET.width);
     }

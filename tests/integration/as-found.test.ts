@@ -3,7 +3,13 @@ import { db } from '@/lib/db/client';
 import type { JobStatus } from '@/lib/db/generated/enums';
 import type { WindingSheet } from '@/lib/as-found/winding-sheet-schema';
 import { MAX_DRAFT_BYTES } from '@/lib/as-found/draft-schema';
-import { chooseLengthUnit, discardSheetDraft, saveAsFoundSheet, saveSheetDraft, copyLibrarySheetToJob } from '@/lib/as-found/as-found-actions';
+import {
+  chooseLengthUnit,
+  discardSheetDraft,
+  saveAsFoundSheet,
+  saveSheetDraft,
+  copyLibrarySheetToJob,
+} from '@/lib/as-found/as-found-actions';
 import { getAsFoundSheet, getLengthUnit, getSheetDraft, getSheetRevision, listSheetRevisions } from '@/lib/as-found/as-found-queries';
 import { searchLibrary } from '@/lib/library/library-queries';
 import { SHEET_MESSAGES } from '@/lib/as-found/as-found-messages';
@@ -34,7 +40,15 @@ describe('saving the as-found sheet', () => {
     const r = await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: EXAMPLE_A_SHEET });
     expect(r).toMatchObject({ ok: true, data: { revision: 1 }, message: SHEET_MESSAGES.saved(1) });
     const row = await db().windingSheet.findUniqueOrThrow({ where: { jobId: job.id }, include: { job: { include: { motor: true } } } });
-    expect(row).toMatchObject({ slots: 36, poles: 4, boreMm: 150, coreLengthMm: 120, lineVoltageV: 400, frequencyHz: 50, manufacturer: row.job.motor.manufacturer });
+    expect(row).toMatchObject({
+      slots: 36,
+      poles: 4,
+      boreMm: 150,
+      coreLengthMm: 120,
+      lineVoltageV: 400,
+      frequencyHz: 50,
+      manufacturer: row.job.motor.manufacturer,
+    });
     expect((await getAsFoundSheet(job.id))?.sheet).toEqual(EXAMPLE_A_SHEET);
     expect(await listSheetRevisions(row.id)).toHaveLength(1);
     const events = await db().jobEvent.findMany({ where: { jobId: job.id, kind: 'SHEET' } });
@@ -76,7 +90,9 @@ describe('saving the as-found sheet', () => {
   it('lets only one of two racing first saves in', async () => {
     await actAs(WINDER.email);
     const job = await jobWithoutSheet();
-    const results = await Promise.all([1, 2].map((i) => saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: { ...EXAMPLE_A_SHEET, notes: `racer ${i}` } })));
+    const results = await Promise.all(
+      [1, 2].map((i) => saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: { ...EXAMPLE_A_SHEET, notes: `racer ${i}` } })),
+    );
     expect(results.filter((r) => r.ok)).toHaveLength(1);
     expect(results.find((r) => !r.ok)).toMatchObject({ code: 'stale' });
   });
@@ -84,7 +100,10 @@ describe('saving the as-found sheet', () => {
   it('refuses the front desk before reading the input, and saves nothing', async () => {
     await actAs(FRONT_DESK.email);
     const job = await jobWithoutSheet();
-    expect(await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: EXAMPLE_A_SHEET })).toMatchObject({ ok: false, code: 'forbidden' });
+    expect(await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: EXAMPLE_A_SHEET })).toMatchObject({
+      ok: false,
+      code: 'forbidden',
+    });
     expect(await saveSheetDraft({ jobId: job.id, draft: draftOf('1') })).toMatchObject({ ok: false, code: 'forbidden' });
     expect(await saveAsFoundSheet({ nonsense: true })).toMatchObject({ ok: false, code: 'forbidden' });
     expect(await db().windingSheet.count({ where: { jobId: job.id } })).toBe(0);
@@ -94,20 +113,26 @@ describe('saving the as-found sheet', () => {
     expect(await saveAsFoundSheet({})).toMatchObject({ ok: false, code: 'unauthenticated' });
   });
 
-  it.each(['TESTING', 'READY', 'SHIPPED', 'RETURNED_UNREPAIRED'] as const)('refuses saves once the job is %s (past winding)', async (status) => {
-    await actAs(ENGINEER.email);
-    const job = await jobWithoutSheet(status);
-    const r = await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: EXAMPLE_A_SHEET });
-    expect(r).toMatchObject({ ok: false, code: 'frozen' });
-    expect(r.ok ? '' : r.message).toContain('can no longer be changed');
-    expect(await saveSheetDraft({ jobId: job.id, draft: draftOf('1') })).toMatchObject({ ok: false, code: 'frozen' });
-  });
+  it.each(['TESTING', 'READY', 'SHIPPED', 'RETURNED_UNREPAIRED'] as const)(
+    'refuses saves once the job is %s (past winding)',
+    async (status) => {
+      await actAs(ENGINEER.email);
+      const job = await jobWithoutSheet(status);
+      const r = await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: EXAMPLE_A_SHEET });
+      expect(r).toMatchObject({ ok: false, code: 'frozen' });
+      expect(r.ok ? '' : r.message).toContain('can no longer be changed');
+      expect(await saveSheetDraft({ jobId: job.id, draft: draftOf('1') })).toMatchObject({ ok: false, code: 'frozen' });
+    },
+  );
 
   it('judges a job on hold by the status it was held from', async () => {
     await actAs(WINDER.email);
     const job = await jobWithoutSheet();
     await db().job.update({ where: { id: job.id }, data: { status: 'ON_HOLD', heldFrom: 'READY' } });
-    expect(await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: EXAMPLE_A_SHEET })).toMatchObject({ ok: false, code: 'frozen' });
+    expect(await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: EXAMPLE_A_SHEET })).toMatchObject({
+      ok: false,
+      code: 'frozen',
+    });
     await db().job.update({ where: { id: job.id }, data: { heldFrom: 'WINDING' } });
     expect(await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: EXAMPLE_A_SHEET })).toMatchObject({ ok: true });
   });
@@ -115,7 +140,11 @@ describe('saving the as-found sheet', () => {
   it('returns every schema problem by path and writes nothing', async () => {
     await actAs(WINDER.email);
     const job = await jobWithoutSheet();
-    const bad = { ...EXAMPLE_A_SHEET, core: { ...EXAMPLE_A_SHEET.core, boreMm: -1 }, wires: [{ standard: 'awg', size: '99', count: 1, enamelGrade: 2 }] };
+    const bad = {
+      ...EXAMPLE_A_SHEET,
+      core: { ...EXAMPLE_A_SHEET.core, boreMm: -1 },
+      wires: [{ standard: 'awg', size: '99', count: 1, enamelGrade: 2 }],
+    };
     const r = await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: bad });
     expect(r).toMatchObject({ ok: false, code: 'invalid' });
     expect(Object.keys(r.ok ? {} : (r.fieldErrors ?? {}))).toEqual(expect.arrayContaining(['sheet.core.boreMm', 'sheet.wires.0.size']));
@@ -151,7 +180,14 @@ describe('drafts and preferences', () => {
     await actAs(WINDER.email);
     const job = await jobWithoutSheet();
     expect(await saveSheetDraft({ jobId: job.id, draft: { unit: 'mm', values: 'x' } })).toMatchObject({ ok: false, code: 'invalid' });
-    const slotTable = Array.from({ length: 2400 }, (_, i) => ({ slot: (i % 600) + 1, layer: 1, phase: 'A', polarity: 1, turns: 10_000, coil: i + 1 }));
+    const slotTable = Array.from({ length: 2400 }, (_, i) => ({
+      slot: (i % 600) + 1,
+      layer: 1,
+      phase: 'A',
+      polarity: 1,
+      turns: 10_000,
+      coil: i + 1,
+    }));
     const huge = draftOf('1');
     for (const k of Object.keys(huge.values.core) as (keyof typeof huge.values.core)[]) huge.values.core[k] = 'x'.repeat(5000);
     huge.values.notes = 'x'.repeat(5000);
@@ -179,7 +215,11 @@ describe('the winding library', () => {
   it('finds sheets by slots, poles and bore within tolerance, closest first', async () => {
     await actAs(WINDER.email);
     const job = await jobWithoutSheet();
-    await saveAsFoundSheet({ jobId: job.id, baseRevision: null, sheet: { ...EXAMPLE_A_SHEET, core: { ...EXAMPLE_A_SHEET.core, boreMm: 150.4 } } });
+    await saveAsFoundSheet({
+      jobId: job.id,
+      baseRevision: null,
+      sheet: { ...EXAMPLE_A_SHEET, core: { ...EXAMPLE_A_SHEET.core, boreMm: 150.4 } },
+    });
     const hit = await searchLibrary({ slots: 36, poles: 4, boreMm: { min: 149.5, max: 150.5 }, target: { boreMm: 150 } });
     expect(hit.rows.map((r) => r.jobNumber)).toContain(job.number);
     expect(hit.rows.every((r) => r.slots === 36 && r.poles === 4 && r.boreMm >= 149.5 && r.boreMm <= 150.5)).toBe(true);
@@ -191,7 +231,10 @@ describe('the winding library', () => {
     const any = await db().windingSheet.findFirstOrThrow({ where: { manufacturer: { not: null } } });
     const byText = await searchLibrary({ text: any.manufacturer!.toUpperCase().slice(0, 5) });
     expect(byText.rows.map((r) => r.id)).toContain(any.id);
-    const byRating = await searchLibrary({ outputKw: { min: any.outputKw! * 0.99, max: any.outputKw! * 1.01 }, lineVoltageV: { min: any.lineVoltageV, max: any.lineVoltageV } });
+    const byRating = await searchLibrary({
+      outputKw: { min: any.outputKw! * 0.99, max: any.outputKw! * 1.01 },
+      lineVoltageV: { min: any.lineVoltageV, max: any.lineVoltageV },
+    });
     expect(byRating.rows.map((r) => r.id)).toContain(any.id);
   });
 

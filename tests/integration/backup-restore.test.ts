@@ -32,7 +32,16 @@ async function snapshot(sql: SqlRunner): Promise<Record<string, string[]>> {
 async function fillSomeMore(): Promise<void> {
   // Records beyond the demo seed, including a photo's bytes and JSON, so every column type is covered.
   const job = await db().job.findFirstOrThrow({ where: { number: 1003 } });
-  await db().attachment.create({ data: { jobId: job.id, kind: 'OTHER', filename: 'plate.png', mimeType: 'image/png', sizeBytes: 4, data: Buffer.from([0x89, 0x50, 0x4e, 0x47]) } });
+  await db().attachment.create({
+    data: {
+      jobId: job.id,
+      kind: 'OTHER',
+      filename: 'plate.png',
+      mimeType: 'image/png',
+      sizeBytes: 4,
+      data: Buffer.from([0x89, 0x50, 0x4e, 0x47]),
+    },
+  });
   await db().jobEvent.create({ data: { jobId: job.id, kind: 'EDIT', message: "Backup test: ünïcödé, Ω, ⚠, 'quotes'" } });
 }
 

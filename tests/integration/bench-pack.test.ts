@@ -58,10 +58,25 @@ const core = { boreMm: 150, coreLengthMm: 120, slotDepthMm: 20, slots: 36 };
 function input(winding: WindingSpec, over: Partial<BenchPackInput> = {}): BenchPackInput {
   return {
     job: { number: 9001, customer: 'Test customer', motor: 'Test motor' },
-    basis: { kind: 'redesign', revision: 1, approvedBy: 'Test Engineer', approvedAt: new Date('2026-11-30T10:00:00Z'), note: 'Checked.', current: true, currentRevision: 1 },
-    supply: { lineVoltageV: 400, frequencyHz: 50 }, winding, core: { ...core, slots: winding.slots },
+    basis: {
+      kind: 'redesign',
+      revision: 1,
+      approvedBy: 'Test Engineer',
+      approvedAt: new Date('2026-11-30T10:00:00Z'),
+      note: 'Checked.',
+      current: true,
+      currentRevision: 1,
+    },
+    supply: { lineVoltageV: 400, frequencyHz: 50 },
+    winding,
+    core: { ...core, slots: winding.slots },
     wires: [{ label: '0.850 mm', enamelGrade: 2, count: 2, areaMm2: 0.56745, onHandKg: 1 }],
-    insulation: [{ label: 'Thermal class', value: 'F (155 °C)' }], cautions: [], wireAllowance: 0.1, marking: 'iec', leads: 6, ...over,
+    insulation: [{ label: 'Thermal class', value: 'F (155 °C)' }],
+    cautions: [],
+    wireAllowance: 0.1,
+    marking: 'iec',
+    leads: 6,
+    ...over,
   };
 }
 
@@ -69,9 +84,34 @@ describe('the bench pack PDF shows the engine’s groups and connections', () =>
   // Lap and concentric, 1, 2 and 4 circuits, star and delta, both lead conventions; the expected
   // sequence is the engine's own plan (connection-plan.ts, checked in tests/unit/engine/bench).
   it.each([
-    ['lap 36/4 1–8, 2 circuits, delta, NEMA 12 leads', { slots: 36, poles: 4, layers: 2, style: 'lap', spans: [7], turnsPerCoil: [28], parallelPaths: 2, connection: 'delta' }, 'nema', 12],
-    ['concentric single-layer 36/4, 1 circuit, star, IEC 6 leads', { slots: 36, poles: 4, layers: 1, style: 'concentric', singleLayerCoiling: 'half', spans: [11, 9, 7], turnsPerCoil: [20, 20, 20], parallelPaths: 1, connection: 'star' }, 'iec', 6],
-    ['lap 48/4 1–11, 4 circuits, star, IEC 3 leads', { slots: 48, poles: 4, layers: 2, style: 'lap', spans: [10], turnsPerCoil: [40], parallelPaths: 4, connection: 'star' }, 'iec', 3],
+    [
+      'lap 36/4 1–8, 2 circuits, delta, NEMA 12 leads',
+      { slots: 36, poles: 4, layers: 2, style: 'lap', spans: [7], turnsPerCoil: [28], parallelPaths: 2, connection: 'delta' },
+      'nema',
+      12,
+    ],
+    [
+      'concentric single-layer 36/4, 1 circuit, star, IEC 6 leads',
+      {
+        slots: 36,
+        poles: 4,
+        layers: 1,
+        style: 'concentric',
+        singleLayerCoiling: 'half',
+        spans: [11, 9, 7],
+        turnsPerCoil: [20, 20, 20],
+        parallelPaths: 1,
+        connection: 'star',
+      },
+      'iec',
+      6,
+    ],
+    [
+      'lap 48/4 1–11, 4 circuits, star, IEC 3 leads',
+      { slots: 48, poles: 4, layers: 2, style: 'lap', spans: [10], turnsPerCoil: [40], parallelPaths: 4, connection: 'star' },
+      'iec',
+      3,
+    ],
   ] as [string, WindingSpec, 'iec' | 'nema', 3 | 6 | 12][])('%s', async (_name, winding, marking, leads) => {
     const built = buildBenchPack(input(winding, { marking, leads }));
     if (!built.ok) throw new Error(built.reason);
@@ -94,7 +134,9 @@ describe('the bench pack of an approved redesign, through the route', () => {
     jobId = (await db().job.findUniqueOrThrow({ where: { number: JOB_NUMBER }, select: { id: true } })).id;
     await actAs(ENGINEER.email);
     const r = await submitRedesignRequest({
-      jobId, target: { lineVoltageV: '460', frequencyHz: '60', poles: '4', connection: 'star', spans: '', layers: 'keep', parallelPaths: '' }, limits: limitsToForm(DEFAULT_REDESIGN_LIMITS),
+      jobId,
+      target: { lineVoltageV: '460', frequencyHz: '60', poles: '4', connection: 'star', spans: '', layers: 'keep', parallelPaths: '' },
+      limits: limitsToForm(DEFAULT_REDESIGN_LIMITS),
     });
     if (!r.ok) throw new Error(r.message);
     const row = await db().redesign.findUniqueOrThrow({ where: { id: r.data.id } });
@@ -105,12 +147,19 @@ describe('the bench pack of an approved redesign, through the route', () => {
     if (!key) throw new Error('no candidate');
     const chosen = await chooseCandidate({ redesignId: r.data.id, version: r.data.version, key });
     if (!chosen.ok) throw new Error(chosen.message);
-    const approved = await approveRedesignRevision({ redesignId: r.data.id, version: chosen.data.version, note: 'Checked for the bench pack test.' });
+    const approved = await approveRedesignRevision({
+      redesignId: r.data.id,
+      version: chosen.data.version,
+      note: 'Checked for the bench pack test.',
+    });
     if (!approved.ok) throw new Error(approved.message);
     signOutTest();
   });
 
-  const get = (query = '') => GET(new Request(`http://test/jobs/${JOB_NUMBER}/redesign/bench-pack/pdf${query}`), { params: Promise.resolve({ number: String(JOB_NUMBER) }) });
+  const get = (query = '') =>
+    GET(new Request(`http://test/jobs/${JOB_NUMBER}/redesign/bench-pack/pdf${query}`), {
+      params: Promise.resolve({ number: String(JOB_NUMBER) }),
+    });
 
   it('refuses a visitor before reading anything', async () => {
     expect((await get()).status).toBe(401);
@@ -152,12 +201,21 @@ describe('the bench pack of an approved redesign, through the route', () => {
 
   it('only an administrator changes the allowance; the pack then states it', async () => {
     await actAs(WINDER.email);
-    expect(await saveBenchSettings({ version: 0, wireAllowancePercent: '15', leadConvention: 'iec' })).toMatchObject({ ok: false, code: 'forbidden' });
+    expect(await saveBenchSettings({ version: 0, wireAllowancePercent: '15', leadConvention: 'iec' })).toMatchObject({
+      ok: false,
+      code: 'forbidden',
+    });
     await actAs(ADMIN.email);
     const version = (await db().shopSettings.findUnique({ where: { id: 'shop' } }))?.version ?? 0;
-    expect(await saveBenchSettings({ version, wireAllowancePercent: '150', leadConvention: 'iec' })).toMatchObject({ ok: false, code: 'invalid' });
+    expect(await saveBenchSettings({ version, wireAllowancePercent: '150', leadConvention: 'iec' })).toMatchObject({
+      ok: false,
+      code: 'invalid',
+    });
     expect(await saveBenchSettings({ version, wireAllowancePercent: '15', leadConvention: 'iec' })).toMatchObject({ ok: true });
-    expect(await saveBenchSettings({ version, wireAllowancePercent: '12', leadConvention: 'iec' })).toMatchObject({ ok: false, code: 'stale' });
+    expect(await saveBenchSettings({ version, wireAllowancePercent: '12', leadConvention: 'iec' })).toMatchObject({
+      ok: false,
+      code: 'stale',
+    });
     await actAs(WINDER.email);
     const text = pdfText(new Uint8Array(await (await get()).arrayBuffer()));
     expect(text).toContain('plus 15 % for leads, jumpers and waste (this shop’s setting)');

@@ -20,7 +20,14 @@ const FIRST = 70_000;
 const DAY = 86_400_000;
 const base = Date.UTC(2026, 5, 1);
 
-interface Made { number: number; company: string; status: JobStatus; priority: Priority; promisedAt: Date | null; receivedAt: Date }
+interface Made {
+  number: number;
+  company: string;
+  status: JobStatus;
+  priority: Priority;
+  promisedAt: Date | null;
+  receivedAt: Date;
+}
 const made: Made[] = [];
 let customerIds: string[] = [];
 
@@ -31,7 +38,9 @@ async function addJob(i: number, number: number, status: JobStatus): Promise<Mad
   const promisedAt = i % 7 === 0 ? null : new Date(base + (i % 5) * DAY);
   const receivedAt = new Date(base - (i % 4) * DAY);
   const priority = PRIORITIES[i % 4]!;
-  await db().job.create({ data: { number, customerId, motorId: motor.id, status, priority, promisedAt, receivedAt, reportedFault: 'paging test' } });
+  await db().job.create({
+    data: { number, customerId, motorId: motor.id, status, priority, promisedAt, receivedAt, reportedFault: 'paging test' },
+  });
   return { number, company: COMPANIES[i % COMPANIES.length]!, status, priority, promisedAt, receivedAt };
 }
 
@@ -48,12 +57,18 @@ function expectedOrder(sort: BoardQuery['sort'], dir: 'asc' | 'desc', rows: Made
   const s = dir === 'asc' ? 1 : -1;
   const key = (m: Made): number | string => {
     switch (sort) {
-      case 'number': return m.number;
-      case 'promisedAt': return m.promisedAt ? m.promisedAt.getTime() : Number.MAX_SAFE_INTEGER; // no promise sorts latest
-      case 'receivedAt': return m.receivedAt.getTime();
-      case 'customer': return m.company;
-      case 'status': return JOB_STATUSES.indexOf(m.status);
-      case 'priority': return -PRIORITIES.indexOf(m.priority); // "ascending" = most urgent first
+      case 'number':
+        return m.number;
+      case 'promisedAt':
+        return m.promisedAt ? m.promisedAt.getTime() : Number.MAX_SAFE_INTEGER; // no promise sorts latest
+      case 'receivedAt':
+        return m.receivedAt.getTime();
+      case 'customer':
+        return m.company;
+      case 'status':
+        return JOB_STATUSES.indexOf(m.status);
+      case 'priority':
+        return -PRIORITIES.indexOf(m.priority); // "ascending" = most urgent first
     }
   };
   const tieDir = sort === 'priority' ? -s : s;
@@ -81,13 +96,23 @@ async function walk(query: Record<string, string>): Promise<{ forward: number[][
 
 describe('the job board pages by position', () => {
   it.each([
-    ['promisedAt', 'asc'], ['promisedAt', 'desc'], ['customer', 'asc'], ['status', 'asc'], ['priority', 'asc'], ['number', 'desc'], ['receivedAt', 'desc'],
-  ] as const)('sorted by %s %s, next reaches every job once and previous walks back the same pages', async (sort, dir) => {
-    const { forward, backward } = await walk({ q: 'pagetest', sort, dir });
-    expect(forward.flat()).toEqual(expectedOrder(sort, dir, made));
-    expect(forward.slice(0, -1).every((p) => p.length === PAGE_SIZE)).toBe(true);
-    expect(backward).toEqual(forward);
-  }, 120_000);
+    ['promisedAt', 'asc'],
+    ['promisedAt', 'desc'],
+    ['customer', 'asc'],
+    ['status', 'asc'],
+    ['priority', 'asc'],
+    ['number', 'desc'],
+    ['receivedAt', 'desc'],
+  ] as const)(
+    'sorted by %s %s, next reaches every job once and previous walks back the same pages',
+    async (sort, dir) => {
+      const { forward, backward } = await walk({ q: 'pagetest', sort, dir });
+      expect(forward.flat()).toEqual(expectedOrder(sort, dir, made));
+      expect(forward.slice(0, -1).every((p) => p.length === PAGE_SIZE)).toBe(true);
+      expect(backward).toEqual(forward);
+    },
+    120_000,
+  );
 
   it('keeps its place when a job is added before the position (no row repeated or skipped)', async () => {
     const query = { q: 'pagetest', sort: 'promisedAt' };
@@ -105,7 +130,11 @@ describe('the job board pages by position', () => {
 
   it('jumps to a promised date and to a job number', async () => {
     const byDate = await listBoard(boardQuerySchema.parse({ q: 'pagetest', from: '2026-06-03' }));
-    const expected = expectedOrder('promisedAt', 'asc', made.filter((m) => !m.promisedAt || m.promisedAt.getTime() >= Date.UTC(2026, 5, 3)));
+    const expected = expectedOrder(
+      'promisedAt',
+      'asc',
+      made.filter((m) => !m.promisedAt || m.promisedAt.getTime() >= Date.UTC(2026, 5, 3)),
+    );
     expect(byDate.rows.map((r) => r.number)).toEqual(expected.slice(0, PAGE_SIZE));
     expect(byDate.previous).not.toBeNull();
     const byNumber = await listBoard(boardQuerySchema.parse({ q: 'pagetest', sort: 'number', from: String(FIRST + 40) }));
@@ -157,7 +186,8 @@ describe('board search reaches every status', () => {
 
 describe('the customer typeahead route', () => {
   beforeEach(() => signOutTest());
-  const call = (q: string) => customersRoute(new Request(`http://x/api/customers?q=${encodeURIComponent(q)}`), { params: Promise.resolve({}) });
+  const call = (q: string) =>
+    customersRoute(new Request(`http://x/api/customers?q=${encodeURIComponent(q)}`), { params: Promise.resolve({}) });
 
   it('refuses a visitor without a session before reading anything', async () => {
     expect((await call('pagetest')).status).toBe(401);
@@ -188,8 +218,18 @@ describe('the winding library text search', () => {
     for (const [i, job] of jobs.entries()) {
       await db().windingSheet.create({
         data: {
-          id: randomUUID(), jobId: job.id, data: {}, slots: 36, poles: 4, boreMm: 150, coreLengthMm: 120, lineVoltageV: 400, frequencyHz: 50,
-          manufacturer: 'Quillfeather Electric', model: `QF-${i}`, updatedAt: new Date(base + i * DAY),
+          id: randomUUID(),
+          jobId: job.id,
+          data: {},
+          slots: 36,
+          poles: 4,
+          boreMm: 150,
+          coreLengthMm: 120,
+          lineVoltageV: 400,
+          frequencyHz: 50,
+          manufacturer: 'Quillfeather Electric',
+          model: `QF-${i}`,
+          updatedAt: new Date(base + i * DAY),
         },
       });
     }

@@ -15,7 +15,10 @@ describe('the shop time zone and date format', () => {
   it('refuses a visitor and an engineer before reading the input', async () => {
     expect(await saveShopDisplaySettings({ nonsense: true })).toMatchObject({ ok: false, code: 'unauthenticated' });
     await actAs(ENGINEER.email);
-    expect(await saveShopDisplaySettings({ version: 0, timeZone: 'Europe/London', dateFormat: 'iso' })).toMatchObject({ ok: false, code: 'forbidden' });
+    expect(await saveShopDisplaySettings({ version: 0, timeZone: 'Europe/London', dateFormat: 'iso' })).toMatchObject({
+      ok: false,
+      code: 'forbidden',
+    });
   });
 
   it('refuses an unknown zone with a field error and keeps the stored settings', async () => {
@@ -28,12 +31,22 @@ describe('the shop time zone and date format', () => {
 
   it('saves for an administrator, applies at once, and refuses a stale second save', async () => {
     await actAs(ADMIN.email);
-    expect(await saveShopDisplaySettings({ version: 0, timeZone: 'America/Chicago', dateFormat: 'mdy' })).toMatchObject({ ok: true, data: { version: 1 } });
+    expect(await saveShopDisplaySettings({ version: 0, timeZone: 'America/Chicago', dateFormat: 'mdy' })).toMatchObject({
+      ok: true,
+      data: { version: 1 },
+    });
     expect(displaySettings()).toEqual({ timeZone: 'America/Chicago', dateFormat: 'mdy' });
     // 2026-12-02 03:00 UTC is still 1 December in Chicago.
     expect(fmt.date(new Date('2026-12-02T03:00:00Z'))).toBe('12/01/2026');
-    expect(await saveShopDisplaySettings({ version: 0, timeZone: 'UTC', dateFormat: 'iso' })).toMatchObject({ ok: false, code: 'stale', message: DISPLAY_STALE });
-    expect(await saveShopDisplaySettings({ version: 1, timeZone: '', dateFormat: 'iso' })).toMatchObject({ ok: true, data: { version: 2 } });
+    expect(await saveShopDisplaySettings({ version: 0, timeZone: 'UTC', dateFormat: 'iso' })).toMatchObject({
+      ok: false,
+      code: 'stale',
+      message: DISPLAY_STALE,
+    });
+    expect(await saveShopDisplaySettings({ version: 1, timeZone: '', dateFormat: 'iso' })).toMatchObject({
+      ok: true,
+      data: { version: 2 },
+    });
     expect(displaySettings()).toEqual({ timeZone: serverTimeZone(), dateFormat: 'iso' });
   });
 });

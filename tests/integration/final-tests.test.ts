@@ -94,7 +94,10 @@ describe('recording final tests', () => {
 
   it('adds a retest as the new current record; a second retest from the same view is refused as stale', async () => {
     await actAs(WINDER.email);
-    const results = await Promise.all([saveTestRecordAction(form({ previousSequence: 1 })), saveTestRecordAction(form({ previousSequence: 1 }))]);
+    const results = await Promise.all([
+      saveTestRecordAction(form({ previousSequence: 1 })),
+      saveTestRecordAction(form({ previousSequence: 1 })),
+    ]);
     expect(results.filter((r) => r.ok)).toHaveLength(1);
     expect(results.find((r) => !r.ok)).toMatchObject({ code: 'stale' });
     const records = await listTestRecords(jobId);

@@ -18,12 +18,24 @@ useTestDatabase();
 
 function intakeForm(extra: Record<string, unknown> = {}, company = 'Idempotent Pumps Ltd'): FormData {
   const fd = new FormData();
-  fd.set('payload', JSON.stringify({
-    customer: { mode: 'new', company },
-    motor: { manufacturer: 'Testwell', serial: `ID-${Math.random().toString(36).slice(2, 9)}`, ratedVoltageV: 400, frequencyHz: 50, speedRpm: 1460, outputValue: 7.5, outputUnit: 'kW', phases: 3 },
-    job: { priority: 'NORMAL', reportedFault: 'Hums, will not start' },
-    ...extra,
-  }));
+  fd.set(
+    'payload',
+    JSON.stringify({
+      customer: { mode: 'new', company },
+      motor: {
+        manufacturer: 'Testwell',
+        serial: `ID-${Math.random().toString(36).slice(2, 9)}`,
+        ratedVoltageV: 400,
+        frequencyHz: 50,
+        speedRpm: 1460,
+        outputValue: 7.5,
+        outputUnit: 'kW',
+        phases: 3,
+      },
+      job: { priority: 'NORMAL', reportedFault: 'Hums, will not start' },
+      ...extra,
+    }),
+  );
   return fd;
 }
 
@@ -50,7 +62,10 @@ describe('intake idempotency', () => {
     expect(results.every((r) => r.ok)).toBe(true);
     expect(new Set(results.map((r) => (r.ok ? r.data.number : 0))).size).toBe(1);
     expect(await db().job.count()).toBe(before + 1);
-    const two = await Promise.all([submitIntake(intakeForm({ requestKey: randomUUID() })), submitIntake(intakeForm({ requestKey: randomUUID() }))]);
+    const two = await Promise.all([
+      submitIntake(intakeForm({ requestKey: randomUUID() })),
+      submitIntake(intakeForm({ requestKey: randomUUID() })),
+    ]);
     expect(two.every((r) => r.ok)).toBe(true);
     expect(await db().job.count()).toBe(before + 3);
   });

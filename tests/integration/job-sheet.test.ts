@@ -33,13 +33,28 @@ beforeAll(async () => {
   const winder = await db().user.findUniqueOrThrow({ where: { email: WINDER.email } });
   const data = structuredClone(PASSING);
   data.run.vibrationMmS = 4.2; // above the 3.8 mm/s limit: the sheet must show it failed
-  const saved = await saveTestRecordAction({ jobId: job.id, previousSequence: 0, testedAt: '2026-11-30T09:15', testedById: winder.id, data: { ...data, notes: 'Retest after re-balancing the rotor.' } });
+  const saved = await saveTestRecordAction({
+    jobId: job.id,
+    previousSequence: 0,
+    testedAt: '2026-11-30T09:15',
+    testedById: winder.id,
+    data: { ...data, notes: 'Retest after re-balancing the rotor.' },
+  });
   if (!saved.ok) throw new Error(saved.message);
   redesign.forJob = job.id;
   redesign.summary = {
-    revision: 2, approvedBy: 'Ravi Castellano', approvedAt: new Date('2026-11-20T10:00:00Z'), note: 'Reconnected for the new 690 V supply.',
-    changes: [{ label: 'Turns per coil', original: '14', redesigned: '24' }, { label: 'Connection', original: 'delta (Δ)', redesigned: 'star (Y)' }],
-    proposedNameplate: [{ label: 'Voltage', value: '690 V' }, { label: 'Current', value: '7.0 A' }],
+    revision: 2,
+    approvedBy: 'Ravi Castellano',
+    approvedAt: new Date('2026-11-20T10:00:00Z'),
+    note: 'Reconnected for the new 690 V supply.',
+    changes: [
+      { label: 'Turns per coil', original: '14', redesigned: '24' },
+      { label: 'Connection', original: 'delta (Δ)', redesigned: 'star (Y)' },
+    ],
+    proposedNameplate: [
+      { label: 'Voltage', value: '690 V' },
+      { label: 'Current', value: '7.0 A' },
+    ],
   };
   const sheet = await loadJobSheet(job.number);
   text = pdfText(await renderJobSheetPdf(sheet!));
@@ -47,7 +62,17 @@ beforeAll(async () => {
 
 describe('the job sheet PDF', () => {
   it('has every section, in order', () => {
-    const headings = ['Motor repair job sheet', 'Job', 'Customer', 'Nameplate as received', 'As-found winding', 'Winding as repaired', 'Final tests', 'Signatures', 'Safety notices'];
+    const headings = [
+      'Motor repair job sheet',
+      'Job',
+      'Customer',
+      'Nameplate as received',
+      'As-found winding',
+      'Winding as repaired',
+      'Final tests',
+      'Signatures',
+      'Safety notices',
+    ];
     let at = -1;
     for (const h of headings) {
       const next = text.indexOf(h, at + 1);
@@ -72,17 +97,26 @@ describe('the job sheet PDF', () => {
 
   it('prints the numbers of the saved record and its verdicts (°F, in/s, Ω, µA glyphs included)', () => {
     for (const s of [
-      'tested 2026-11-30 09:15 UTC', 'Tomasz Brennan', 'MEG-1001, HP-77, SG-5, LR-2, VB-9',
-      '1,000 MΩ', '3,000 MΩ', // readings
+      'tested 2026-11-30 09:15 UTC',
+      'Tomasz Brennan',
+      'MEG-1001, HP-77, SG-5, LR-2, VB-9',
+      '1,000 MΩ',
+      '3,000 MΩ', // readings
       '250 MΩ (minimum 5 MΩ)', // IEEE 43: 1000 MΩ at 20 °C → 40 °C
       '3.00 (minimum 2.0)', // PI 3000/1000, class F
       '1920 V AC or 3264 V DC', // NEMA MG 1 / AR100 new winding, 460 V
-      'Applied 3264 V DC for 60 s', '0.004 mA (4 µA)',
-      '20 °C (68 °F)', '2.858 Ω → 2.914 Ω at 25 °C', // 2.858·(234.5+25)/(234.5+20), IEEE copper correction
+      'Applied 3264 V DC for 60 s',
+      '0.004 mA (4 µA)',
+      '20 °C (68 °F)',
+      '2.858 Ω → 2.914 Ω at 25 °C', // 2.858·(234.5+25)/(234.5+20), IEEE copper correction
       '0.21 % (limit 2 %)', // ANSI/EASA AR100-2020 unbalance, random-wound
-      '4.2 mm/s (0.165 in/s)', '38 °C (100.4 °F)',
-      '⚠ FAIL Vibration', 'Overall verdict: ⚠ FAIL', 'Retest after re-balancing the rotor.',
-    ]) expect(text, s).toContain(s);
+      '4.2 mm/s (0.165 in/s)',
+      '38 °C (100.4 °F)',
+      '⚠ FAIL Vibration',
+      'Overall verdict: ⚠ FAIL',
+      'Retest after re-balancing the rotor.',
+    ])
+      expect(text, s).toContain(s);
   });
 
   it('marks an approved redesign as differing from the original, with the proposed nameplate', () => {
@@ -102,7 +136,8 @@ describe('the job sheet PDF', () => {
 });
 
 describe('the PDF route', () => {
-  const call = (number: number | string) => GET(new Request(`http://x/jobs/${number}/job-sheet/pdf`), { params: Promise.resolve({ number: String(number) }) });
+  const call = (number: number | string) =>
+    GET(new Request(`http://x/jobs/${number}/job-sheet/pdf`), { params: Promise.resolve({ number: String(number) }) });
 
   it('refuses a visitor without a session', async () => {
     signOutTest();
@@ -115,7 +150,11 @@ describe('the PDF route', () => {
     expect(res.status).toBe(200);
     expect(res.headers.get('content-type')).toBe('application/pdf');
     expect(res.headers.get('content-disposition')).toMatch(new RegExp(`^attachment; filename="job-${job.number}-sheet-rev\\d+\\.pdf"$`));
-    expect(Buffer.from(await res.arrayBuffer()).subarray(0, 5).toString()).toBe('%PDF-');
+    expect(
+      Buffer.from(await res.arrayBuffer())
+        .subarray(0, 5)
+        .toString(),
+    ).toBe('%PDF-');
     expect((await call(999_999)).status).toBe(404);
     expect((await call('abc')).status).toBe(404);
   });

@@ -13,7 +13,17 @@ useTestDatabase();
 function intake(overrides: Partial<IntakeInput['motor']> = {}, company = 'Integration Test Quarry'): IntakeInput {
   return {
     customer: { mode: 'new', company, contactName: 'Test Contact' },
-    motor: { manufacturer: 'Testwell', serial: `IT-${Math.random().toString(36).slice(2, 9)}`, ratedVoltageV: 400, frequencyHz: 50, speedRpm: 1460, outputValue: 15, outputUnit: 'hp', phases: 3, ...overrides },
+    motor: {
+      manufacturer: 'Testwell',
+      serial: `IT-${Math.random().toString(36).slice(2, 9)}`,
+      ratedVoltageV: 400,
+      frequencyHz: 50,
+      speedRpm: 1460,
+      outputValue: 15,
+      outputUnit: 'hp',
+      phases: 3,
+      ...overrides,
+    },
     job: { priority: 'NORMAL', reportedFault: 'Burnt phase' },
   };
 }
@@ -46,7 +56,10 @@ describe('intake', () => {
     const result = await submitIntake(form(intake(), [new File([PNG], 'plate.png', { type: 'image/png' })]));
     expect(result.ok).toBe(true);
     if (!result.ok) return;
-    const job = await db().job.findUniqueOrThrow({ where: { number: result.data.number }, include: { motor: true, attachments: true, events: true } });
+    const job = await db().job.findUniqueOrThrow({
+      where: { number: result.data.number },
+      include: { motor: true, attachments: true, events: true },
+    });
     expect(job.motor.outputKw).toBeCloseTo(15 * 0.7457, 6);
     expect(job.attachments).toHaveLength(1);
     expect(job.events.map((e) => e.kind).sort()).toEqual(['CREATED', 'PHOTO']);

@@ -31,7 +31,16 @@ function requestForm(target: Partial<RedesignRequestFormInput['target']>, draftV
   return {
     jobId,
     ...(draftVersion ? { draftVersion } : {}),
-    target: { lineVoltageV: '460', frequencyHz: '60', poles: '4', connection: 'star', spans: '', layers: 'keep', parallelPaths: '', ...target },
+    target: {
+      lineVoltageV: '460',
+      frequencyHz: '60',
+      poles: '4',
+      connection: 'star',
+      spans: '',
+      layers: 'keep',
+      parallelPaths: '',
+      ...target,
+    },
     limits: limitsToForm(DEFAULT_REDESIGN_LIMITS),
   };
 }
@@ -85,7 +94,10 @@ describe('redesign request, choice and approval', () => {
     await actAs(ENGINEER.email);
     const key = await firstCandidateKey(redesignId);
     expect(await chooseCandidate({ redesignId, version: version + 5, key })).toMatchObject({ ok: false, code: 'stale' });
-    expect(await chooseCandidate({ redesignId, version, key: 'L2l7-N1-a1-Y-nothing' })).toMatchObject({ ok: false, message: REDESIGN_MESSAGES.candidateGone });
+    expect(await chooseCandidate({ redesignId, version, key: 'L2l7-N1-a1-Y-nothing' })).toMatchObject({
+      ok: false,
+      message: REDESIGN_MESSAGES.candidateGone,
+    });
   });
 
   it('records the chosen candidate', async () => {
@@ -115,7 +127,11 @@ describe('redesign request, choice and approval', () => {
 
   it('an engineer approves: who, when, note and the exact data are frozen in the snapshot', async () => {
     await actAs(ENGINEER.email);
-    const r = await approveRedesignRevision({ redesignId, version, note: 'Checked flux ratios and fill; fan and bearings checked for 1800 rpm.' });
+    const r = await approveRedesignRevision({
+      redesignId,
+      version,
+      note: 'Checked flux ratios and fill; fan and bearings checked for 1800 rpm.',
+    });
     expect(r).toMatchObject({ ok: true, data: { revision: 1 } });
     const approved = await getApprovedRedesign(jobId);
     expect(approved?.revision).toBe(1);
@@ -124,7 +140,9 @@ describe('redesign request, choice and approval', () => {
     expect(approved?.snapshot.request.target.lineVoltageV).toBe(460);
     expect(approved?.nameplate).toMatchObject({ lineVoltageV: 460, frequencyHz: 60, connection: 'star', synchronousRpm: 1800 });
     expect(approved?.snapshot.report.candidate.key).toBe(await firstCandidateKey(redesignId));
-    expect(approved?.snapshot.report.warnings.map((w) => w.topic)).toEqual(expect.arrayContaining(['speed', 'frequency', 'certification', 'review']));
+    expect(approved?.snapshot.report.warnings.map((w) => w.topic)).toEqual(
+      expect.arrayContaining(['speed', 'frequency', 'certification', 'review']),
+    );
     expect(await db().jobEvent.count({ where: { jobId, kind: 'REDESIGN_APPROVED' } })).toBe(1);
   });
 
@@ -151,12 +169,21 @@ describe('redesign request, choice and approval', () => {
     await actAs(ENGINEER.email);
     const row = await db().redesign.findUniqueOrThrow({ where: { id: redesignId } });
     const key = row.chosenKey ?? '';
-    expect(await chooseCandidate({ redesignId, version: row.version, key })).toMatchObject({ ok: false, code: 'frozen', message: REDESIGN_MESSAGES.frozen(1) });
-    expect(await approveRedesignRevision({ redesignId, version: row.version, note: 'Again.' })).toMatchObject({ ok: false, code: 'frozen' });
+    expect(await chooseCandidate({ redesignId, version: row.version, key })).toMatchObject({
+      ok: false,
+      code: 'frozen',
+      message: REDESIGN_MESSAGES.frozen(1),
+    });
+    expect(await approveRedesignRevision({ redesignId, version: row.version, note: 'Again.' })).toMatchObject({
+      ok: false,
+      code: 'frozen',
+    });
   });
 
   it('the database itself refuses a raw UPDATE or DELETE of the approved row', async () => {
-    await expect(db().$executeRaw`UPDATE "Redesign" SET "approvalNote" = 'tampered' WHERE "id" = ${redesignId}`).rejects.toThrow(/approved and frozen/);
+    await expect(db().$executeRaw`UPDATE "Redesign" SET "approvalNote" = 'tampered' WHERE "id" = ${redesignId}`).rejects.toThrow(
+      /approved and frozen/,
+    );
     await expect(db().$executeRaw`DELETE FROM "Redesign" WHERE "id" = ${redesignId}`).rejects.toThrow(/approved and frozen/);
     expect((await db().redesign.findUniqueOrThrow({ where: { id: redesignId } })).approvalNote).toMatch(/fan and bearings/);
   });
@@ -172,15 +199,24 @@ describe('redesign request, choice and approval', () => {
     const chosen = await chooseCandidate({ redesignId: r.data.id, version: r.data.version, key: await firstCandidateKey(r.data.id) });
     expect(chosen.ok).toBe(true);
     if (!chosen.ok) return;
-    expect(await approveRedesignRevision({ redesignId: r.data.id, version: chosen.data.version, note: 'Insulation checked for 690 V.' })).toMatchObject({ ok: true });
+    expect(
+      await approveRedesignRevision({ redesignId: r.data.id, version: chosen.data.version, note: 'Insulation checked for 690 V.' }),
+    ).toMatchObject({ ok: true });
     const current = await getApprovedRedesign(jobId);
     expect(current?.revision).toBe(2);
     expect(current?.nameplate.lineVoltageV).toBe(690);
-    expect((await listRedesigns(jobId)).map((x) => [x.revision, x.status])).toEqual([[2, 'APPROVED'], [1, 'APPROVED']]);
+    expect((await listRedesigns(jobId)).map((x) => [x.revision, x.status])).toEqual([
+      [2, 'APPROVED'],
+      [1, 'APPROVED'],
+    ]);
   });
 
   it('each approval reserved the wire it winds; approving revision 2 released revision 1’s reservation (shown on the stock page)', async () => {
-    const rows = await db().wireReservation.findMany({ where: { redesign: { jobId } }, include: { redesign: { select: { revision: true } } }, orderBy: { createdAt: 'asc' } });
+    const rows = await db().wireReservation.findMany({
+      where: { redesign: { jobId } },
+      include: { redesign: { select: { revision: true } } },
+      orderBy: { createdAt: 'asc' },
+    });
     const r1 = rows.filter((x) => x.redesign.revision === 1);
     const r2 = rows.filter((x) => x.redesign.revision === 2);
     expect(r1.length).toBeGreaterThan(0);
@@ -189,7 +225,10 @@ describe('redesign request, choice and approval', () => {
     expect(r2.every((x) => x.releasedAt === null && x.kg > 0)).toBe(true);
     // The kilograms reserved are the approved candidate's wire needs.
     const approved = await getApprovedRedesign(jobId);
-    expect(r2.map((x) => x.kg).reduce((a, b) => a + b, 0)).toBeCloseTo((approved?.snapshot.report.candidate.wireNeeds ?? []).reduce((a, n) => a + n.kg, 0), 9);
+    expect(r2.map((x) => x.kg).reduce((a, b) => a + b, 0)).toBeCloseTo(
+      (approved?.snapshot.report.candidate.wireNeeds ?? []).reduce((a, n) => a + n.kg, 0),
+      9,
+    );
     const stock = await listStock();
     const held = stock.filter((s) => s.reservations.some((x) => x.jobNumber === JOB_NUMBER && x.revision === 2));
     expect(held.length).toBe(r2.length);
@@ -212,17 +251,45 @@ describe('the search result is stored with the revision', () => {
     // Were the choice searching again, the empty stock would drop every stock-made candidate.
     const saved = await db().wireStock.findMany();
     await db().wireReservation.deleteMany({ where: { redesignId: r.data.id } });
-    await db().$transaction([db().wireReservation.deleteMany({ where: { releasedAt: { not: null } } }), db().wireStock.deleteMany({ where: { reservations: { none: {} } } })]);
+    await db().$transaction([
+      db().wireReservation.deleteMany({ where: { releasedAt: { not: null } } }),
+      db().wireStock.deleteMany({ where: { reservations: { none: {} } } }),
+    ]);
     const chosen = await chooseCandidate({ redesignId: r.data.id, version: r.data.version, key });
     expect(chosen).toMatchObject({ ok: true, data: { rank: 2 } });
-    await db().wireStock.createMany({ data: saved.map(({ id, standard, size, enamelGrade, bareMm, quantityKg, note }) => ({ id, standard, size, enamelGrade, bareMm, quantityKg, note })), skipDuplicates: true });
+    await db().wireStock.createMany({
+      data: saved.map(({ id, standard, size, enamelGrade, bareMm, quantityKg, note }) => ({
+        id,
+        standard,
+        size,
+        enamelGrade,
+        bareMm,
+        quantityKg,
+        note,
+      })),
+      skipDuplicates: true,
+    });
   });
 
   it('a request too wide for the work budget is refused with a "narrow the request" message and writes nothing', async () => {
     await actAs(ENGINEER.email);
     const before = await db().redesign.count({ where: { jobId } });
     const wide = requestForm({ connection: 'either', spans: '5, 6, 7, 8, 9, 10, 11, 12', parallelPaths: '1, 2, 3, 4, 6, 8, 12, 24' });
-    const limits = { ...wide.limits, gapRisePercent: 100, gapFallPercent: 99, toothRisePercent: 100, toothFallPercent: 99, yokeRisePercent: 100, yokeFallPercent: 99, currentDensityRisePercent: 100, currentDensityMaxAPerMm2: 30, slotFillMaxPercent: 100, maxStrandsInHand: 40, maxWireSizes: 3, mixedSizeRatioMax: 3 };
+    const limits = {
+      ...wide.limits,
+      gapRisePercent: 100,
+      gapFallPercent: 99,
+      toothRisePercent: 100,
+      toothFallPercent: 99,
+      yokeRisePercent: 100,
+      yokeFallPercent: 99,
+      currentDensityRisePercent: 100,
+      currentDensityMaxAPerMm2: 30,
+      slotFillMaxPercent: 100,
+      maxStrandsInHand: 40,
+      maxWireSizes: 3,
+      mixedSizeRatioMax: 3,
+    };
     const r = await submitRedesignRequest({ ...wide, target: { ...wide.target, allowOverPitch: true }, limits });
     if (r.ok) {
       // Inside the budget on this core: then it must have stored a result.

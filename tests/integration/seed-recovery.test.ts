@@ -26,11 +26,23 @@ async function wipeAll(): Promise<void> {
 async function intakeNumber(): Promise<number> {
   await actAs(FRONT_DESK.email);
   const fd = new FormData();
-  fd.set('payload', JSON.stringify({
-    customer: { mode: 'new', company: 'Seed Recovery Test Works' },
-    motor: { manufacturer: 'Testwell', serial: `SR-${Math.random().toString(36).slice(2, 9)}`, ratedVoltageV: 400, frequencyHz: 50, speedRpm: 1460, outputValue: 11, outputUnit: 'kW', phases: 3 },
-    job: { priority: 'NORMAL', reportedFault: 'Tripping on start' },
-  }));
+  fd.set(
+    'payload',
+    JSON.stringify({
+      customer: { mode: 'new', company: 'Seed Recovery Test Works' },
+      motor: {
+        manufacturer: 'Testwell',
+        serial: `SR-${Math.random().toString(36).slice(2, 9)}`,
+        ratedVoltageV: 400,
+        frequencyHz: 50,
+        speedRpm: 1460,
+        outputValue: 11,
+        outputUnit: 'kW',
+        phases: 3,
+      },
+      job: { priority: 'NORMAL', reportedFault: 'Tripping on start' },
+    }),
+  );
   const r = await submitIntake(fd);
   if (!r.ok) throw new Error(`intake refused: ${r.message} ${JSON.stringify(r.fieldErrors)}`);
   return r.data.number;
@@ -53,7 +65,10 @@ describe('demo data', () => {
   });
 
   it('an on-hold demo job resumes to the status its history says it was held from', async () => {
-    const held = await db().job.findMany({ where: { status: 'ON_HOLD' }, include: { events: { where: { kind: 'STATUS' }, orderBy: { at: 'asc' } } } });
+    const held = await db().job.findMany({
+      where: { status: 'ON_HOLD' },
+      include: { events: { where: { kind: 'STATUS' }, orderBy: { at: 'asc' } } },
+    });
     expect(held.length).toBeGreaterThan(0);
     for (const j of held) {
       const last = j.events.at(-1);
@@ -68,8 +83,12 @@ describe('seed recovery', () => {
   it('a seed that fails part-way leaves nothing behind, and the next start seeds it whole', async () => {
     await wipeAll();
     // Fail the very last write of the seed, as a kill would interrupt it.
-    await db().$executeRawUnsafe(`CREATE FUNCTION seed_test_fail() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN RAISE EXCEPTION 'simulated crash'; END $$`);
-    await db().$executeRawUnsafe(`CREATE TRIGGER seed_test_fail BEFORE INSERT ON "ShopSettings" FOR EACH ROW EXECUTE FUNCTION seed_test_fail()`);
+    await db().$executeRawUnsafe(
+      `CREATE FUNCTION seed_test_fail() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN RAISE EXCEPTION 'simulated crash'; END $$`,
+    );
+    await db().$executeRawUnsafe(
+      `CREATE TRIGGER seed_test_fail BEFORE INSERT ON "ShopSettings" FOR EACH ROW EXECUTE FUNCTION seed_test_fail()`,
+    );
     try {
       await expect(seedDemoShop(db())).rejects.toThrow();
     } finally {
@@ -86,7 +105,10 @@ describe('seed recovery', () => {
   });
 
   it('a half-seeded database (4 jobs, no sheets, no counter) is completed on restart and intake works', async () => {
-    const fresh = await db().job.findMany({ orderBy: { number: 'asc' }, select: { number: true, status: true, receivedAt: true, heldFrom: true } });
+    const fresh = await db().job.findMany({
+      orderBy: { number: 'asc' },
+      select: { number: true, status: true, receivedAt: true, heldFrom: true },
+    });
     const freshSheets = await db().windingSheet.count();
     // What the old row-by-row seed left when killed about 8 s in.
     await db().windingSheet.deleteMany({});
@@ -99,7 +121,10 @@ describe('seed recovery', () => {
 
     expect(await demoSeedNeeded(db())).toBe(true);
     await seedDemoShop(db());
-    const after = await db().job.findMany({ orderBy: { number: 'asc' }, select: { number: true, status: true, receivedAt: true, heldFrom: true } });
+    const after = await db().job.findMany({
+      orderBy: { number: 'asc' },
+      select: { number: true, status: true, receivedAt: true, heldFrom: true },
+    });
     expect(after.map((j) => [j.number, j.status, j.heldFrom])).toEqual(fresh.map((j) => [j.number, j.status, j.heldFrom]));
     expect(await db().windingSheet.count()).toBe(freshSheets);
     expect(await db().wireStock.count()).toBeGreaterThan(0);

@@ -29,7 +29,11 @@ const move = async (id: string, to: string) => {
   const j = await job(id);
   return moveStatus({ jobId: id, version: j.version, to });
 };
-function testForm(jobId: string, previousSequence: number, patch: (d: TestRecordFormInput['data']) => void = () => {}): TestRecordFormInput {
+function testForm(
+  jobId: string,
+  previousSequence: number,
+  patch: (d: TestRecordFormInput['data']) => void = () => {},
+): TestRecordFormInput {
   const data = structuredClone(PASSING);
   patch(data);
   return { jobId, previousSequence, testedAt: '2026-11-30T09:15', testedById: winderId, data };
@@ -54,7 +58,12 @@ describe('Testing → Ready', () => {
 
   it('is refused after a hipot of 500 V DC for 5 s against the proposed level, which the server judges FAIL', async () => {
     await actAs(WINDER.email);
-    const saved = await saveTestRecordAction(testForm(jobId, 0, (d) => { d.hipot.appliedV = 500; d.hipot.durationS = 5; }));
+    const saved = await saveTestRecordAction(
+      testForm(jobId, 0, (d) => {
+        d.hipot.appliedV = 500;
+        d.hipot.durationS = 5;
+      }),
+    );
     expect(saved).toMatchObject({ ok: true, data: { verdict: 'FAIL', sequence: 1 } });
     const [rec] = await listTestRecords(jobId);
     expect(rec!.verdict).toBe('FAIL');
@@ -63,7 +72,10 @@ describe('Testing → Ready', () => {
 
   it('refuses an override from a winder and one without a written reason', async () => {
     await actAs(WINDER.email);
-    expect(await recordGateDecisionAction({ jobId, decision: 'ready-override', reason: 'Customer needs it today.' })).toMatchObject({ ok: false, code: 'forbidden' });
+    expect(await recordGateDecisionAction({ jobId, decision: 'ready-override', reason: 'Customer needs it today.' })).toMatchObject({
+      ok: false,
+      code: 'forbidden',
+    });
     await actAs(ENGINEER.email);
     const short = await recordGateDecisionAction({ jobId, decision: 'ready-override', reason: 'ok' });
     expect(short.ok).toBe(false);
@@ -76,7 +88,9 @@ describe('Testing → Ready', () => {
     const reason = 'Customer instructed a 500 V test only: winding 30 years old, accepted in writing (email 28 Nov).';
     expect(await recordGateDecisionAction({ jobId, decision: 'ready-override', reason })).toMatchObject({ ok: true });
     const event = await db().jobEvent.findFirstOrThrow({ where: { jobId, kind: 'DECISION' } });
-    expect(event.message).toBe(`Engineer's override: Testing → Ready released without a passing final test (record #1, FAIL). Reason: ${reason}`);
+    expect(event.message).toBe(
+      `Engineer's override: Testing → Ready released without a passing final test (record #1, FAIL). Reason: ${reason}`,
+    );
     expect(await move(jobId, 'READY')).toMatchObject({ ok: true });
     const sheet = await loadJobSheet((await job(jobId)).number);
     const text = pdfText(await renderJobSheetPdf(sheet!));
@@ -92,11 +106,25 @@ describe('Testing → Ready', () => {
   it('passes with a passing record, and an override stops counting once a newer record is saved', async () => {
     const other = (await db().job.findMany({ where: { status: 'TESTING' }, orderBy: { number: 'asc' } }))[1]!.id;
     await actAs(WINDER.email);
-    expect(await saveTestRecordAction(testForm(other, 0, (d) => { d.hipot.appliedV = 1000; }))).toMatchObject({ ok: true, data: { verdict: 'FAIL' } });
+    expect(
+      await saveTestRecordAction(
+        testForm(other, 0, (d) => {
+          d.hipot.appliedV = 1000;
+        }),
+      ),
+    ).toMatchObject({ ok: true, data: { verdict: 'FAIL' } });
     await actAs(ENGINEER.email);
-    expect(await recordGateDecisionAction({ jobId: other, decision: 'ready-override', reason: 'Released against record one only.' })).toMatchObject({ ok: true });
+    expect(
+      await recordGateDecisionAction({ jobId: other, decision: 'ready-override', reason: 'Released against record one only.' }),
+    ).toMatchObject({ ok: true });
     await actAs(WINDER.email);
-    expect(await saveTestRecordAction(testForm(other, 1, (d) => { d.hipot.result = 'fail'; }))).toMatchObject({ ok: true, data: { verdict: 'FAIL', sequence: 2 } });
+    expect(
+      await saveTestRecordAction(
+        testForm(other, 1, (d) => {
+          d.hipot.result = 'fail';
+        }),
+      ),
+    ).toMatchObject({ ok: true, data: { verdict: 'FAIL', sequence: 2 } });
     expect(await move(other, 'READY')).toMatchObject({ ok: false, message: GATE_MESSAGES.ready({ sequence: 2, verdict: 'FAIL' }) });
     expect(await saveTestRecordAction(testForm(other, 2))).toMatchObject({ ok: true, data: { verdict: 'PASS', sequence: 3 } });
     expect(await move(other, 'READY')).toMatchObject({ ok: true });
@@ -105,7 +133,12 @@ describe('Testing → Ready', () => {
   it('prints a deliberately reduced hipot as a reduced-level test with its reason, never a pass', async () => {
     const third = (await db().job.findMany({ where: { status: 'TESTING' }, orderBy: { number: 'asc' } }))[0]!.id;
     await actAs(WINDER.email);
-    const r = await saveTestRecordAction(testForm(third, 0, (d) => { d.hipot.appliedV = 2611; d.hipot.reducedReason = 'repeat test at the customer’s request'; }));
+    const r = await saveTestRecordAction(
+      testForm(third, 0, (d) => {
+        d.hipot.appliedV = 2611;
+        d.hipot.reducedReason = 'repeat test at the customer’s request';
+      }),
+    );
     expect(r).toMatchObject({ ok: true, data: { verdict: 'INCOMPLETE' } });
     const text = pdfText(await renderJobSheetPdf((await loadJobSheet((await job(third)).number))!));
     expect(text).toContain('Reduced-level test (repeat test at the customer’s request)');
@@ -135,7 +168,11 @@ describe('Winding waits for the redesign when another supply was asked for; test
     redesignId = r.data.id;
     version = r.data.version;
     await actAs(WINDER.email);
-    expect(await move(jobId, 'WINDING')).toMatchObject({ ok: false, code: 'conflict', message: GATE_MESSAGES.winding('a redesign request, revision 1') });
+    expect(await move(jobId, 'WINDING')).toMatchObject({
+      ok: false,
+      code: 'conflict',
+      message: GATE_MESSAGES.winding('a redesign request, revision 1'),
+    });
   });
 
   it('starts winding once an engineer approves the revision', async () => {
@@ -147,7 +184,11 @@ describe('Winding waits for the redesign when another supply was asked for; test
     if (!search.ok || !search.value.candidates[0]) throw new Error('no candidate');
     const chosen = await chooseCandidate({ redesignId, version, key: search.value.candidates[0].key });
     if (!chosen.ok) throw new Error(chosen.message);
-    const approved = await approveRedesignRevision({ redesignId, version: chosen.data.version, note: 'Checked densities and fill for the 460 V 60 Hz supply.' });
+    const approved = await approveRedesignRevision({
+      redesignId,
+      version: chosen.data.version,
+      note: 'Checked densities and fill for the 460 V 60 Hz supply.',
+    });
     expect(approved.ok).toBe(true);
     await actAs(WINDER.email);
     expect(await move(jobId, 'WINDING')).toMatchObject({ ok: true });
@@ -156,10 +197,20 @@ describe('Winding waits for the redesign when another supply was asked for; test
 
   it('refuses a test basis of 400 V against the approved 460 V and judges for 460 V 60 Hz, redesign revision 1', async () => {
     await actAs(WINDER.email);
-    const wrong = await saveTestRecordAction(testForm(jobId, 0, (d) => { d.basis.ratedVoltageV = 400; d.basis.frequencyHz = 50; }));
+    const wrong = await saveTestRecordAction(
+      testForm(jobId, 0, (d) => {
+        d.basis.ratedVoltageV = 400;
+        d.basis.frequencyHz = 50;
+      }),
+    );
     expect(wrong.ok).toBe(false);
     if (!wrong.ok) expect(wrong.fieldErrors?.['data.basis.ratedVoltageV']?.[0]).toContain('revision 1, rates this motor 460 V');
-    const ok = await saveTestRecordAction(testForm(jobId, 0, (d) => { d.basis.frequencyHz = 60; d.basis.ratingSource = 'nameplate'; }));
+    const ok = await saveTestRecordAction(
+      testForm(jobId, 0, (d) => {
+        d.basis.frequencyHz = 60;
+        d.basis.ratingSource = 'nameplate';
+      }),
+    );
     expect(ok).toMatchObject({ ok: true, data: { verdict: 'PASS' } });
     const [rec] = await listTestRecords(jobId);
     expect(rec!.data.basis).toMatchObject({ ratedVoltageV: 460, frequencyHz: 60, ratingSource: 'redesign', redesignRevision: 1 });
@@ -176,7 +227,15 @@ describe('Winding waits for the redesign when another supply was asked for; test
     expect((await loadJobSheet(1016))!.revision).toBe(1);
     await actAs(FRONT_DESK.email);
     const j = await job(jobId);
-    expect(await saveJobDetails({ jobId, version: j.version, priority: j.priority, reportedFault: j.reportedFault ?? 'x', customerPo: 'PO-NEW-4471' })).toMatchObject({ ok: true });
+    expect(
+      await saveJobDetails({
+        jobId,
+        version: j.version,
+        priority: j.priority,
+        reportedFault: j.reportedFault ?? 'x',
+        customerPo: 'PO-NEW-4471',
+      }),
+    ).toMatchObject({ ok: true });
     expect((await loadJobSheet(1016))!.revision).toBe(2);
   });
 });
@@ -188,7 +247,13 @@ describe('keeping the original winding, and shipping', () => {
     await actAs(WINDER.email);
     expect(await move(row.id, 'WINDING')).toMatchObject({ ok: false, code: 'conflict' });
     await actAs(ENGINEER.email);
-    expect(await recordGateDecisionAction({ jobId: row.id, decision: 'keep-original-winding', reason: 'Customer withdrew the 60 Hz request by phone; rewind as found.' })).toMatchObject({ ok: true });
+    expect(
+      await recordGateDecisionAction({
+        jobId: row.id,
+        decision: 'keep-original-winding',
+        reason: 'Customer withdrew the 60 Hz request by phone; rewind as found.',
+      }),
+    ).toMatchObject({ ok: true });
     await actAs(WINDER.email);
     expect(await move(row.id, 'WINDING')).toMatchObject({ ok: true });
   });

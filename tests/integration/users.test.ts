@@ -13,7 +13,10 @@ useTestDatabase();
 describe('people who sign in', () => {
   it('only an administrator may add a person', async () => {
     await actAs(ENGINEER.email);
-    expect(await addUser({ name: 'X', email: 'x@example.com', role: 'WINDER', password: 'long-enough-1' })).toMatchObject({ ok: false, code: 'forbidden' });
+    expect(await addUser({ name: 'X', email: 'x@example.com', role: 'WINDER', password: 'long-enough-1' })).toMatchObject({
+      ok: false,
+      code: 'forbidden',
+    });
   });
 
   it('stores a bcrypt hash, never the password, and refuses a duplicate email on the field', async () => {
@@ -39,7 +42,10 @@ describe('people who sign in', () => {
   it('an administrator cannot lock themselves out', async () => {
     await actAs(ADMIN.email);
     const me = await db().user.findUniqueOrThrow({ where: { email: ADMIN.email } });
-    expect(await changeUser({ userId: me.id, role: 'WINDER', active: true, newPassword: '' })).toMatchObject({ ok: false, code: 'invalid' });
+    expect(await changeUser({ userId: me.id, role: 'WINDER', active: true, newPassword: '' })).toMatchObject({
+      ok: false,
+      code: 'invalid',
+    });
   });
 
   it('creates the first administrator from the environment only when nobody exists yet', async () => {

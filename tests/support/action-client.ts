@@ -28,7 +28,10 @@ export function listActions(root = process.cwd()): ActionRef[] {
 
 /** A URL path for a page route, with a real job number in place of [number]. */
 export function pagePath(page: string, jobNumber: number): string {
-  const p = page.replace(/^app/, '').replace(/\/page$/, '').replace('[number]', String(jobNumber));
+  const p = page
+    .replace(/^app/, '')
+    .replace(/\/page$/, '')
+    .replace('[number]', String(jobNumber));
   return p === '' ? '/' : p;
 }
 
@@ -39,7 +42,13 @@ export interface ActionReply {
   text: string;
 }
 
-export async function callActionOverHttp(baseUrl: string, action: ActionRef, path: string, args: unknown[], cookie: string): Promise<ActionReply> {
+export async function callActionOverHttp(
+  baseUrl: string,
+  action: ActionRef,
+  path: string,
+  args: unknown[],
+  cookie: string,
+): Promise<ActionReply> {
   const res = await fetch(`${baseUrl}${path}`, {
     method: 'POST',
     headers: {

@@ -21,7 +21,19 @@ export interface BuiltJob {
  * 7.5 kW unless overridden). `heldFrom` is set for a job on hold.
  */
 export async function buildJob(
-  opts: { status?: JobStatus; heldFrom?: JobStatus; motor?: Partial<{ ratedVoltageV: number; frequencyHz: number; speedRpm: number; outputKw: number; currentA: number; insulationClass: string; serial: string }> } = {},
+  opts: {
+    status?: JobStatus;
+    heldFrom?: JobStatus;
+    motor?: Partial<{
+      ratedVoltageV: number;
+      frequencyHz: number;
+      speedRpm: number;
+      outputKw: number;
+      currentA: number;
+      insulationClass: string;
+      serial: string;
+    }>;
+  } = {},
 ): Promise<BuiltJob> {
   serial += 1;
   const tag = `${process.pid}-${Date.now().toString(36)}-${serial}`;
@@ -29,15 +41,28 @@ export async function buildJob(
     const customer = await tx.customer.create({ data: { company: `Test customer ${tag}` } });
     const motor = await tx.motor.create({
       data: {
-        customerId: customer.id, manufacturer: 'Test motors', model: 'TM-132', serial: `T-${tag}`,
-        ratedVoltageV: 400, frequencyHz: 50, speedRpm: 1450, outputKw: 7.5, currentA: 15, insulationClass: 'F', connection: 'star',
+        customerId: customer.id,
+        manufacturer: 'Test motors',
+        model: 'TM-132',
+        serial: `T-${tag}`,
+        ratedVoltageV: 400,
+        frequencyHz: 50,
+        speedRpm: 1450,
+        outputKw: 7.5,
+        currentA: 15,
+        insulationClass: 'F',
+        connection: 'star',
         ...opts.motor,
       },
     });
     const job = await tx.job.create({
       data: {
-        number: await allocateJobNumber(tx), customerId: customer.id, motorId: motor.id,
-        status: opts.status ?? 'INSPECTION', heldFrom: opts.heldFrom ?? null, reportedFault: 'Test job',
+        number: await allocateJobNumber(tx),
+        customerId: customer.id,
+        motorId: motor.id,
+        status: opts.status ?? 'INSPECTION',
+        heldFrom: opts.heldFrom ?? null,
+        reportedFault: 'Test job',
       },
     });
     return { id: job.id, number: job.number, customerId: customer.id, motorId: motor.id };

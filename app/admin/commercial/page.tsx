@@ -16,10 +16,18 @@ export default async function CommercialSettingsPage() {
       <section className="card">
         <CommercialSettingsForm
           defaults={{
-            version, currency: s.currency, taxMode: s.taxMode, defaultTaxRate: basisPointsToPercent(s.defaultTaxRateBp),
-            labourRate: decimalText(s.labourRateMinor, s.currency), copperPricePerKg: decimalText(s.copperPricePerKgMinor, s.currency),
-            copperAllowance: basisPointsToPercent(s.copperAllowanceBp), insulationAllowance: basisPointsToPercent(s.insulationAllowanceBp),
-            varnishAllowance: basisPointsToPercent(s.varnishAllowanceBp), quoteValidityDays: s.quoteValidityDays, quoteTerms: s.quoteTerms, warrantyDays: s.warrantyDays,
+            version,
+            currency: s.currency,
+            taxMode: s.taxMode,
+            defaultTaxRate: basisPointsToPercent(s.defaultTaxRateBp),
+            labourRate: decimalText(s.labourRateMinor, s.currency),
+            copperPricePerKg: decimalText(s.copperPricePerKgMinor, s.currency),
+            copperAllowance: basisPointsToPercent(s.copperAllowanceBp),
+            insulationAllowance: basisPointsToPercent(s.insulationAllowanceBp),
+            varnishAllowance: basisPointsToPercent(s.varnishAllowanceBp),
+            quoteValidityDays: s.quoteValidityDays,
+            quoteTerms: s.quoteTerms,
+            warrantyDays: s.warrantyDays,
           }}
         />
       </section>

@@ -17,7 +17,13 @@ export function AddUserForm() {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad'; text: string } | null>(null);
-  const { register, handleSubmit, setError, reset, formState: { errors } } = useForm<UserCreateInput, unknown, z.output<typeof userCreateSchema>>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    reset,
+    formState: { errors },
+  } = useForm<UserCreateInput, unknown, z.output<typeof userCreateSchema>>({
     resolver: zodResolver(userCreateSchema),
     defaultValues: { name: '', email: '', role: 'WINDER', password: '' },
   });
@@ -42,14 +48,30 @@ export function AddUserForm() {
         <InputField id="new-email" label="Email *" type="email" error={errors.email?.message} registration={register('email')} />
         <Field id="new-role" label="Role *" error={errors.role?.message}>
           <select {...register('role')} {...describe('new-role', errors.role?.message)}>
-            {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r]}</option>)}
+            {ROLES.map((r) => (
+              <option key={r} value={r}>
+                {ROLE_LABELS[r]}
+              </option>
+            ))}
           </select>
         </Field>
-        <Field id="new-password" label="First password *" hint="At least 10 characters; they can change it with an administrator." error={errors.password?.message}>
-          <input type="password" autoComplete="new-password" {...register('password')} {...describe('new-password', errors.password?.message, 'hint')} />
+        <Field
+          id="new-password"
+          label="First password *"
+          hint="At least 10 characters; they can change it with an administrator."
+          error={errors.password?.message}
+        >
+          <input
+            type="password"
+            autoComplete="new-password"
+            {...register('password')}
+            {...describe('new-password', errors.password?.message, 'hint')}
+          />
         </Field>
       </div>
-      <button className="btn" type="submit" disabled={pending}>{pending ? 'Adding…' : 'Add person'}</button>
+      <button className="btn" type="submit" disabled={pending}>
+        {pending ? 'Adding…' : 'Add person'}
+      </button>
     </form>
   );
 }

@@ -15,14 +15,25 @@ export default async function UsersPage() {
       <section className="card" aria-labelledby="people-h">
         <h2 id="people-h">Everyone</h2>
         <TableScroll label="Everyone who signs in">
-        <table>
-          <thead>
-            <tr><th scope="col">Name</th><th scope="col">Email</th><th scope="col">Role</th><th scope="col">Active</th><th scope="col">New password</th><th scope="col"><span className="sr-only">Save</span></th></tr>
-          </thead>
-          <tbody>
-            {users.map((u) => <UserRow key={u.id} user={u} self={u.id === me.id} />)}
-          </tbody>
-        </table>
+          <table>
+            <thead>
+              <tr>
+                <th scope="col">Name</th>
+                <th scope="col">Email</th>
+                <th scope="col">Role</th>
+                <th scope="col">Active</th>
+                <th scope="col">New password</th>
+                <th scope="col">
+                  <span className="sr-only">Save</span>
+                </th>
+              </tr>
+            </thead>
+            <tbody>
+              {users.map((u) => (
+                <UserRow key={u.id} user={u} self={u.id === me.id} />
+              ))}
+            </tbody>
+          </table>
         </TableScroll>
       </section>
       <section className="card" aria-labelledby="add-h">

@@ -8,7 +8,13 @@ import { ROLES } from '@/lib/users/user-schema';
 import { changeUser } from '@/lib/users/user-actions';
 import { callAction } from '@/lib/errors/call-action';
 
-interface Person { id: string; name: string; email: string; role: Role; active: boolean }
+interface Person {
+  id: string;
+  name: string;
+  email: string;
+  role: Role;
+  active: boolean;
+}
 
 /** One person: role, active flag and an optional new password, saved together. */
 export function UserRow({ user, self }: { user: Person; self: boolean }) {
@@ -30,12 +36,21 @@ export function UserRow({ user, self }: { user: Person; self: boolean }) {
     });
   return (
     <tr>
-      <td>{user.name}{self ? ' (you)' : ''}</td>
+      <td>
+        {user.name}
+        {self ? ' (you)' : ''}
+      </td>
       <td>{user.email}</td>
       <td>
-        <label htmlFor={`${id}-role`} className="sr-only">Role of {user.name}</label>
+        <label htmlFor={`${id}-role`} className="sr-only">
+          Role of {user.name}
+        </label>
         <select id={`${id}-role`} value={role} onChange={(e) => setRole(e.target.value as Role)}>
-          {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABELS[r]}</option>)}
+          {ROLES.map((r) => (
+            <option key={r} value={r}>
+              {ROLE_LABELS[r]}
+            </option>
+          ))}
         </select>
       </td>
       <td>
@@ -44,12 +59,25 @@ export function UserRow({ user, self }: { user: Person; self: boolean }) {
         </label>
       </td>
       <td>
-        <label htmlFor={`${id}-pw`} className="sr-only">New password for {user.name}</label>
-        <input id={`${id}-pw`} type="password" autoComplete="new-password" value={password} onChange={(e) => setPassword(e.target.value)} placeholder="unchanged" />
+        <label htmlFor={`${id}-pw`} className="sr-only">
+          New password for {user.name}
+        </label>
+        <input
+          id={`${id}-pw`}
+          type="password"
+          autoComplete="new-password"
+          value={password}
+          onChange={(e) => setPassword(e.target.value)}
+          placeholder="unchanged"
+        />
       </td>
       <td>
-        <button type="button" className="btn quiet" onClick={save} disabled={pending}>Save</button>
-        <div role="status" aria-live="polite" className={message && !message.ok ? 'field-error' : 'small muted'}>{message?.text}</div>
+        <button type="button" className="btn quiet" onClick={save} disabled={pending}>
+          Save
+        </button>
+        <div role="status" aria-live="polite" className={message && !message.ok ? 'field-error' : 'small muted'}>
+          {message?.text}
+        </div>
       </td>
     </tr>
   );

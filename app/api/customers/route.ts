@@ -2,7 +2,14 @@ import { z } from 'zod';
 import { guardedRoute } from '@/lib/auth/route-guard';
 import { findCustomers } from '@/lib/jobs/job-queries';
 
-const querySchema = z.object({ q: z.string().trim().min(1).max(80).regex(/^[^\u0000]*$/) });
+const querySchema = z.object({
+  q: z
+    .string()
+    .trim()
+    .min(1)
+    .max(80)
+    .regex(/^[^\u0000]*$/),
+});
 
 /**
  * Customers whose name contains `q`, for the board's customer filter (a typeahead that asks as you type,

@@ -34,13 +34,25 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
   const [baseVersion, setBaseVersion] = useState(current.version);
   const [conflict, setConflict] = useState(false);
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(null);
-  const { register, handleSubmit, setError, setValue, formState: { errors } } = useForm<JobEditInput, unknown, z.output<typeof jobEditSchema>>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    setValue,
+    formState: { errors },
+  } = useForm<JobEditInput, unknown, z.output<typeof jobEditSchema>>({
     resolver: zodResolver(jobEditSchema),
     defaultValues: current,
   });
   useEffect(() => setValue('version', baseVersion), [baseVersion, setValue]);
   // Your own status move bumps the job's version: follow it when this form was based on the old one.
-  useEffect(() => onJobVersion((c) => { if (c.jobId === current.jobId) setBaseVersion((v) => (v === c.from ? c.to : v)); }), [current.jobId]);
+  useEffect(
+    () =>
+      onJobVersion((c) => {
+        if (c.jobId === current.jobId) setBaseVersion((v) => (v === c.from ? c.to : v));
+      }),
+    [current.jobId],
+  );
 
   const onSubmit = handleSubmit(
     (values) =>
@@ -52,7 +64,14 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
           setSummary({ tone: 'ok', text: result.message ?? 'Saved.' });
           router.refresh();
         } else {
-          showActionFailure(result, { setError, setSummary, onStale: () => { setConflict(true); router.refresh(); } });
+          showActionFailure(result, {
+            setError,
+            setSummary,
+            onStale: () => {
+              setConflict(true);
+              router.refresh();
+            },
+          });
         }
       }),
     () => setSummary({ tone: 'bad', text: FIX_FIELDS_SUMMARY }),
@@ -67,9 +86,13 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
             <p>Loading the values saved by the other person…</p>
           ) : (
             <>
-              <p><strong>Saved by someone else</strong> (now version {current.version}). Their values:</p>
+              <p>
+                <strong>Saved by someone else</strong> (now version {current.version}). Their values:
+              </p>
               <ul className="small">
-                <li>Promised: {current.promisedAt || '—'} · Priority: {current.priority.toLowerCase()} · PO: {current.customerPo || '—'}</li>
+                <li>
+                  Promised: {current.promisedAt || '—'} · Priority: {current.priority.toLowerCase()} · PO: {current.customerPo || '—'}
+                </li>
                 <li>Reported fault: {current.reportedFault}</li>
                 <li>Notes: {current.notes || '—'}</li>
               </ul>
@@ -79,7 +102,10 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
                 onClick={() => {
                   setBaseVersion(current.version);
                   setConflict(false);
-                  setSummary({ tone: 'warn', text: 'Your changes are still in the form. Save again to apply them over the current version.' });
+                  setSummary({
+                    tone: 'warn',
+                    text: 'Your changes are still in the form. Save again to apply them over the current version.',
+                  });
                 }}
               >
                 Keep my changes and retry on the current version
@@ -93,24 +119,40 @@ export function JobDetailsForm({ current, staff }: { current: JobDetails; staff:
         <Field id="reportedFault" label="Reported fault *" className="wide" error={errors.reportedFault?.message}>
           <textarea {...register('reportedFault')} {...describe('reportedFault', errors.reportedFault?.message)} />
         </Field>
-        <InputField id="promisedAt" label="Promised date" type="date" error={errors.promisedAt?.message} registration={register('promisedAt')} />
+        <InputField
+          id="promisedAt"
+          label="Promised date"
+          type="date"
+          error={errors.promisedAt?.message}
+          registration={register('promisedAt')}
+        />
         <Field id="priority" label="Priority" error={errors.priority?.message}>
           <select id="priority" {...register('priority')}>
-            {PRIORITIES.map((p) => <option key={p} value={p}>{p.charAt(0) + p.slice(1).toLowerCase()}</option>)}
+            {PRIORITIES.map((p) => (
+              <option key={p} value={p}>
+                {p.charAt(0) + p.slice(1).toLowerCase()}
+              </option>
+            ))}
           </select>
         </Field>
         <InputField id="customerPo" label="Customer PO" error={errors.customerPo?.message} registration={register('customerPo')} />
         <Field id="assigneeId" label="Assigned to" error={errors.assigneeId?.message}>
           <select id="assigneeId" {...register('assigneeId')}>
             <option value="">Nobody yet</option>
-            {staff.map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
+            {staff.map((s) => (
+              <option key={s.id} value={s.id}>
+                {s.name}
+              </option>
+            ))}
           </select>
         </Field>
         <Field id="notes" label="Notes" className="wide" error={errors.notes?.message}>
           <textarea id="notes" {...register('notes')} />
         </Field>
       </div>
-      <button className="btn" type="submit" disabled={pending || conflict}>{pending ? 'Saving…' : 'Save job details'}</button>
+      <button className="btn" type="submit" disabled={pending || conflict}>
+        {pending ? 'Saving…' : 'Save job details'}
+      </button>
     </form>
   );
 }

@@ -16,7 +16,6 @@ import { QuoteNote } from './quote-note';
 import { loadJobRoute } from '@/lib/jobs/job-route';
 import { jobRoutes } from '@/lib/routes';
 
-
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
   return { title: `Job ${(await params).number}` };
 }
@@ -38,7 +37,9 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
 
   return (
     <>
-      <p className="no-print"><Link href="/jobs">← Job board</Link></p>
+      <p className="no-print">
+        <Link href="/jobs">← Job board</Link>
+      </p>
       <h1>
         Job {job.number} · {job.customer.company}
       </h1>
@@ -47,21 +48,46 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
       <section className="card" aria-labelledby="moves-h">
         <h2 id="moves-h">Status: {STATUS_LABELS[job.status]}</h2>
         <StatusMoves jobId={job.id} version={job.version} moves={moves} mayRelease={can(user.role, 'job.override')} />
-        {facts.readyOverride && <p className="small" data-testid="ready-override">Engineer’s override on record ({facts.readyOverride.by}, {fmt.date(facts.readyOverride.at)}): {facts.readyOverride.reason}</p>}
-        {facts.keepOriginal && <p className="small">Original winding kept ({facts.keepOriginal.by}, {fmt.date(facts.keepOriginal.at)}): {facts.keepOriginal.reason}</p>}
+        {facts.readyOverride && (
+          <p className="small" data-testid="ready-override">
+            Engineer’s override on record ({facts.readyOverride.by}, {fmt.date(facts.readyOverride.at)}): {facts.readyOverride.reason}
+          </p>
+        )}
+        {facts.keepOriginal && (
+          <p className="small">
+            Original winding kept ({facts.keepOriginal.by}, {fmt.date(facts.keepOriginal.at)}): {facts.keepOriginal.reason}
+          </p>
+        )}
         <QuoteNote jobId={job.id} jobNumber={job.number} status={job.status} />
       </section>
 
       <nav className="card no-print" aria-label="Workshop records">
         <h2>Workshop records</h2>
         <ul className="row" style={{ listStyle: 'none', padding: 0, gap: '1.5rem' }}>
-          <li><Link href={jobRoutes(job.number).quote}>Estimate and quote</Link></li>
-          <li><Link href={jobRoutes(job.number).asFound}>As-found data sheet</Link></li>
-          <li><Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>{redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}</li>
-          <li><Link href={jobRoutes(job.number).coreTest}>Core-loss (loop) test</Link></li>
-          <li><Link href={jobRoutes(job.number).finalTests}>Final tests</Link></li>
-          <li><Link href={`/jobs/${job.number}/job-sheet`}>Job sheet</Link></li>
-          <li><a className="btn secondary" href={`/jobs/${job.number}/job-sheet/pdf`} download>Download job sheet (PDF)</a></li>
+          <li>
+            <Link href={jobRoutes(job.number).quote}>Estimate and quote</Link>
+          </li>
+          <li>
+            <Link href={jobRoutes(job.number).asFound}>As-found data sheet</Link>
+          </li>
+          <li>
+            <Link href={`/jobs/${job.number}/redesign`}>Redesign</Link>
+            {redesign && <span className="small"> (current: revision {redesign.revision}, approved)</span>}
+          </li>
+          <li>
+            <Link href={jobRoutes(job.number).coreTest}>Core-loss (loop) test</Link>
+          </li>
+          <li>
+            <Link href={jobRoutes(job.number).finalTests}>Final tests</Link>
+          </li>
+          <li>
+            <Link href={`/jobs/${job.number}/job-sheet`}>Job sheet</Link>
+          </li>
+          <li>
+            <a className="btn secondary" href={`/jobs/${job.number}/job-sheet/pdf`} download>
+              Download job sheet (PDF)
+            </a>
+          </li>
         </ul>
       </nav>
 
@@ -69,27 +95,60 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
         <section className="card" aria-labelledby="cust-h">
           <h2 id="cust-h">Customer</h2>
           <dl className="dl">
-            <dt>Company</dt><dd>{job.customer.company}</dd>
-            <dt>Contact</dt><dd>{contact?.name ?? '—'}</dd>
-            <dt>Phone</dt><dd>{job.customer.phone ?? '—'}</dd>
-            <dt>Email</dt><dd>{job.customer.email ?? '—'}</dd>
-            <dt>Received</dt><dd>{fmt.date(job.receivedAt)}</dd>
+            <dt>Company</dt>
+            <dd>{job.customer.company}</dd>
+            <dt>Contact</dt>
+            <dd>{contact?.name ?? '—'}</dd>
+            <dt>Phone</dt>
+            <dd>{job.customer.phone ?? '—'}</dd>
+            <dt>Email</dt>
+            <dd>{job.customer.email ?? '—'}</dd>
+            <dt>Received</dt>
+            <dd>{fmt.date(job.receivedAt)}</dd>
           </dl>
         </section>
         <section className="card" aria-labelledby="plate-h">
           <h2 id="plate-h">Nameplate</h2>
           <dl className="dl">
-            <dt>Motor</dt><dd>{m.manufacturer} {m.model ?? ''} · S/N {m.serial ?? '—'} · frame {m.frame ?? '—'}</dd>
-            <dt>Output</dt><dd>{fmt.power(m.outputKw)}</dd>
-            <dt>Voltage</dt><dd>{fmt.num(m.ratedVoltageV, 0, 'V')} {m.voltages ? `(plate: ${m.voltages} V)` : ''} · {m.connection ? CONNECTION_LABELS[m.connection as keyof typeof CONNECTION_LABELS] ?? m.connection : 'connection not stated'}</dd>
-            <dt>Current</dt><dd>{fmt.num(m.currentA, 1, 'A')}</dd>
-            <dt>Supply</dt><dd>{m.phases} phase · {fmt.num(m.frequencyHz, 0, 'Hz')}</dd>
-            <dt>Speed</dt><dd>{fmt.num(m.speedRpm, 0, 'rpm')} {poles?.ok ? `(${poles.value} poles)` : ''}</dd>
-            <dt>Insulation / duty</dt><dd>Class {m.insulationClass ?? '—'} · {m.duty ?? '—'} · SF {m.serviceFactor ?? '—'}</dd>
-            <dt>Enclosure</dt><dd>{m.enclosure ?? '—'}</dd>
-            <dt>Efficiency, PF</dt><dd>{fmt.num(m.efficiencyPercent, 1, '%')} · {fmt.num(m.powerFactor, 2)}</dd>
-            <dt>Code / design</dt><dd>{m.codeLetter ?? '—'} / {m.designLetter ?? '—'}</dd>
-            <dt>Bearings</dt><dd>DE {m.bearingDriveEnd ?? '—'} · ODE {m.bearingOppositeEnd ?? '—'}</dd>
+            <dt>Motor</dt>
+            <dd>
+              {m.manufacturer} {m.model ?? ''} · S/N {m.serial ?? '—'} · frame {m.frame ?? '—'}
+            </dd>
+            <dt>Output</dt>
+            <dd>{fmt.power(m.outputKw)}</dd>
+            <dt>Voltage</dt>
+            <dd>
+              {fmt.num(m.ratedVoltageV, 0, 'V')} {m.voltages ? `(plate: ${m.voltages} V)` : ''} ·{' '}
+              {m.connection ? (CONNECTION_LABELS[m.connection as keyof typeof CONNECTION_LABELS] ?? m.connection) : 'connection not stated'}
+            </dd>
+            <dt>Current</dt>
+            <dd>{fmt.num(m.currentA, 1, 'A')}</dd>
+            <dt>Supply</dt>
+            <dd>
+              {m.phases} phase · {fmt.num(m.frequencyHz, 0, 'Hz')}
+            </dd>
+            <dt>Speed</dt>
+            <dd>
+              {fmt.num(m.speedRpm, 0, 'rpm')} {poles?.ok ? `(${poles.value} poles)` : ''}
+            </dd>
+            <dt>Insulation / duty</dt>
+            <dd>
+              Class {m.insulationClass ?? '—'} · {m.duty ?? '—'} · SF {m.serviceFactor ?? '—'}
+            </dd>
+            <dt>Enclosure</dt>
+            <dd>{m.enclosure ?? '—'}</dd>
+            <dt>Efficiency, PF</dt>
+            <dd>
+              {fmt.num(m.efficiencyPercent, 1, '%')} · {fmt.num(m.powerFactor, 2)}
+            </dd>
+            <dt>Code / design</dt>
+            <dd>
+              {m.codeLetter ?? '—'} / {m.designLetter ?? '—'}
+            </dd>
+            <dt>Bearings</dt>
+            <dd>
+              DE {m.bearingDriveEnd ?? '—'} · ODE {m.bearingOppositeEnd ?? '—'}
+            </dd>
           </dl>
         </section>
       </div>
@@ -113,24 +172,36 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
           />
         ) : (
           <dl className="dl">
-            <dt>Reported fault</dt><dd>{job.reportedFault ?? '—'}</dd>
-            <dt>Promised</dt><dd>{fmt.day(job.promisedAt)}</dd>
-            <dt>Priority</dt><dd>{job.priority.toLowerCase()}</dd>
-            <dt>Customer PO</dt><dd>{job.customerPo ?? '—'}</dd>
-            <dt>Assigned to</dt><dd>{job.assignee?.name ?? '—'}</dd>
-            <dt>Notes</dt><dd>{job.notes ?? '—'}</dd>
+            <dt>Reported fault</dt>
+            <dd>{job.reportedFault ?? '—'}</dd>
+            <dt>Promised</dt>
+            <dd>{fmt.day(job.promisedAt)}</dd>
+            <dt>Priority</dt>
+            <dd>{job.priority.toLowerCase()}</dd>
+            <dt>Customer PO</dt>
+            <dd>{job.customerPo ?? '—'}</dd>
+            <dt>Assigned to</dt>
+            <dd>{job.assignee?.name ?? '—'}</dd>
+            <dt>Notes</dt>
+            <dd>{job.notes ?? '—'}</dd>
           </dl>
         )}
       </section>
 
       <section className="card" aria-labelledby="photos-h">
         <h2 id="photos-h">Photos</h2>
-        {job.attachments.length === 0 ? <p className="muted">No photos yet.</p> : (
+        {job.attachments.length === 0 ? (
+          <p className="muted">No photos yet.</p>
+        ) : (
           <div className="photos">
             {job.attachments.map((a) => (
               <figure key={a.id}>
-                <a href={`/api/attachments/${a.id}`}><img src={`/api/attachments/${a.id}`} alt={`${a.kind.toLowerCase()} photo ${a.filename}`} /></a>
-                <figcaption>{a.kind.toLowerCase()} · {a.filename} · {fmt.bytes(a.sizeBytes)}</figcaption>
+                <a href={`/api/attachments/${a.id}`}>
+                  <img src={`/api/attachments/${a.id}`} alt={`${a.kind.toLowerCase()} photo ${a.filename}`} />
+                </a>
+                <figcaption>
+                  {a.kind.toLowerCase()} · {a.filename} · {fmt.bytes(a.sizeBytes)}
+                </figcaption>
               </figure>
             ))}
           </div>
@@ -143,7 +214,9 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
         <ol className="timeline" reversed>
           {job.events.map((e) => (
             <li key={e.id}>
-              <span className="muted small">{fmt.dateTime(e.at)} · {e.user?.name ?? 'system'}</span>
+              <span className="muted small">
+                {fmt.dateTime(e.at)} · {e.user?.name ?? 'system'}
+              </span>
               <div>{e.message}</div>
             </li>
           ))}
@@ -156,7 +229,8 @@ export default async function JobPage({ params }: { params: Promise<{ number: st
           <ul>
             {history.map((h) => (
               <li key={h.number}>
-                <Link href={`/jobs/${h.number}`}>Job {h.number}</Link> · {fmt.date(h.receivedAt)} · {STATUS_LABELS[h.status]} · {h.reportedFault}
+                <Link href={`/jobs/${h.number}`}>Job {h.number}</Link> · {fmt.date(h.receivedAt)} · {STATUS_LABELS[h.status]} ·{' '}
+                {h.reportedFault}
               </li>
             ))}
           </ul>

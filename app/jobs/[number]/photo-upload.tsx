@@ -34,15 +34,21 @@ export function PhotoUpload({ jobId }: { jobId: string }) {
     <div className="no-print">
       <FormStatus message={summary?.text} tone={summary?.tone ?? 'ok'} />
       <div className="row">
-        <label htmlFor="photo-kind" className="sr-only">Photo kind</label>
+        <label htmlFor="photo-kind" className="sr-only">
+          Photo kind
+        </label>
         <select id="photo-kind" value={kind} onChange={(e) => setKind(e.target.value)} style={{ width: 'auto' }}>
           <option value="NAMEPLATE">Nameplate</option>
           <option value="DAMAGE">Damage</option>
           <option value="OTHER">Other</option>
         </select>
-        <label htmlFor="photo-files" className="sr-only">Photos to add</label>
+        <label htmlFor="photo-files" className="sr-only">
+          Photos to add
+        </label>
         <input id="photo-files" ref={fileRef} type="file" accept="image/*" multiple style={{ width: 'auto' }} />
-        <button type="button" className="btn quiet" onClick={upload} disabled={pending}>{pending ? 'Uploading…' : 'Add photos'}</button>
+        <button type="button" className="btn quiet" onClick={upload} disabled={pending}>
+          {pending ? 'Uploading…' : 'Add photos'}
+        </button>
       </div>
     </div>
   );

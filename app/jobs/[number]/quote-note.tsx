@@ -17,12 +17,20 @@ export async function QuoteNote({ jobId, jobNumber, status }: { jobId: string; j
     <div className="small" aria-live="polite">
       {sent && (
         <p>
-          Quote {quoteNumber(jobNumber, sent.revision)}{total ? ` (${total})` : ''}: {sent.status === 'SENT' ? 'sent, awaiting the customer' : sent.status === 'ACCEPTED' ? `accepted${sent.customerOrderNumber ? `, customer order ${sent.customerOrderNumber}` : ''}` : 'declined'}.{' '}
-          <Link href={href}>Estimate and quote</Link>
+          Quote {quoteNumber(jobNumber, sent.revision)}
+          {total ? ` (${total})` : ''}:{' '}
+          {sent.status === 'SENT'
+            ? 'sent, awaiting the customer'
+            : sent.status === 'ACCEPTED'
+              ? `accepted${sent.customerOrderNumber ? `, customer order ${sent.customerOrderNumber}` : ''}`
+              : 'declined'}
+          . <Link href={href}>Estimate and quote</Link>
         </p>
       )}
       {sent?.status === 'DECLINED' && status !== 'RETURNED_UNREPAIRED' && (
-        <p className="notice warn">The customer declined the quote: return the motor unrepaired (“Move to Returned unrepaired”), or start a revised quote.</p>
+        <p className="notice warn">
+          The customer declined the quote: return the motor unrepaired (“Move to Returned unrepaired”), or start a revised quote.
+        </p>
       )}
       {refusal && <p className="muted">{refusal}</p>}
     </div>

@@ -24,7 +24,17 @@ const RELEASE_TEXT: Record<GateDecisionKind, { legend: string; button: string }>
 };
 
 /** Buttons for the status moves this user may make, each gate explained beside its button. */
-export function StatusMoves({ jobId, version, moves, mayRelease }: { jobId: string; version: number; moves: MoveOption[]; mayRelease: boolean }) {
+export function StatusMoves({
+  jobId,
+  version,
+  moves,
+  mayRelease,
+}: {
+  jobId: string;
+  version: number;
+  moves: MoveOption[];
+  mayRelease: boolean;
+}) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [note, setNote] = useState('');
@@ -46,7 +56,11 @@ export function StatusMoves({ jobId, version, moves, mayRelease }: { jobId: stri
   const release = (decision: GateDecisionKind) =>
     startTransition(async () => {
       const result = await recordGateDecisionAction({ jobId, decision, reason });
-      setSummary(result.ok ? { tone: 'ok', text: result.message ?? 'Recorded.' } : { tone: 'bad', text: result.fieldErrors?.reason?.[0] ?? result.message });
+      setSummary(
+        result.ok
+          ? { tone: 'ok', text: result.message ?? 'Recorded.' }
+          : { tone: 'bad', text: result.fieldErrors?.reason?.[0] ?? result.message },
+      );
       if (result.ok) setReason('');
       router.refresh();
     });
@@ -54,26 +68,51 @@ export function StatusMoves({ jobId, version, moves, mayRelease }: { jobId: stri
   return (
     <div className="no-print">
       <FormStatus message={summary?.text} tone={summary?.tone ?? 'ok'} />
-      <label htmlFor="move-note">Note for the timeline <span className="unit">(optional)</span></label>
+      <label htmlFor="move-note">
+        Note for the timeline <span className="unit">(optional)</span>
+      </label>
       <input id="move-note" value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} />
       <div className="row" style={{ marginTop: '0.5rem' }}>
         {moves.map((m) => (
-          <button key={m.to} type="button" className="btn secondary" disabled={pending} onClick={() => move(m.to)} aria-describedby={m.blocked ? `gate-${m.to}` : undefined}>
+          <button
+            key={m.to}
+            type="button"
+            className="btn secondary"
+            disabled={pending}
+            onClick={() => move(m.to)}
+            aria-describedby={m.blocked ? `gate-${m.to}` : undefined}
+          >
             {m.label}
           </button>
         ))}
       </div>
-      {moves.filter((m) => m.blocked).map((m) => (
-        <p key={m.to} id={`gate-${m.to}`} className="notice warn" data-testid={`gate-${m.to}`}>⚠ {m.blocked}</p>
-      ))}
-      {mayRelease && releasable.map((m) => (
-        <fieldset key={m.to} className="card">
-          <legend>{RELEASE_TEXT[m.release!].legend}</legend>
-          <label htmlFor={`release-${m.to}`}>Reason (printed on the job sheet and the timeline) <span aria-hidden="true">*</span></label>
-          <textarea id={`release-${m.to}`} value={reason} onChange={(e) => setReason(e.target.value)} maxLength={1000} required aria-required="true" />
-          <button type="button" className="btn" disabled={pending} onClick={() => release(m.release!)}>{RELEASE_TEXT[m.release!].button}</button>
-        </fieldset>
-      ))}
+      {moves
+        .filter((m) => m.blocked)
+        .map((m) => (
+          <p key={m.to} id={`gate-${m.to}`} className="notice warn" data-testid={`gate-${m.to}`}>
+            ⚠ {m.blocked}
+          </p>
+        ))}
+      {mayRelease &&
+        releasable.map((m) => (
+          <fieldset key={m.to} className="card">
+            <legend>{RELEASE_TEXT[m.release!].legend}</legend>
+            <label htmlFor={`release-${m.to}`}>
+              Reason (printed on the job sheet and the timeline) <span aria-hidden="true">*</span>
+            </label>
+            <textarea
+              id={`release-${m.to}`}
+              value={reason}
+              onChange={(e) => setReason(e.target.value)}
+              maxLength={1000}
+              required
+              aria-required="true"
+            />
+            <button type="button" className="btn" disabled={pending} onClick={() => release(m.release!)}>
+              {RELEASE_TEXT[m.release!].button}
+            </button>
+          </fieldset>
+        ))}
     </div>
   );
 }

@@ -32,7 +32,14 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
   const photosRef = useRef<HTMLInputElement>(null);
   const [requestKey] = useState(newRequestKey);
   const form = useForm<IntakeInput, unknown, Intake>({ resolver: zodResolver(intakeSchema), defaultValues: DEFAULTS });
-  const { register, handleSubmit, watch, setValue, setError, formState: { errors } } = form;
+  const {
+    register,
+    handleSubmit,
+    watch,
+    setValue,
+    setError,
+    formState: { errors },
+  } = form;
   const anyRegister = register as unknown as UseFormRegister<Record<string, unknown>>;
   const anyErrors = errors as FieldErrors<Record<string, unknown>>;
   const mode = watch('customer.mode');
@@ -71,7 +78,7 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
     setMatches(result.ok ? result.data : []);
   }
 
-  function useMatch(m: Match) {
+  function takeMatch(m: Match) {
     setValue('existingMotorId', m.id);
     setValue('customer', { mode: 'existing', customerId: m.customer.id });
     setValue('motor.manufacturer', m.manufacturer);
@@ -88,7 +95,9 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
 
   return (
     <form onSubmit={onSubmit} noValidate aria-describedby="intake-status">
-      <div id="intake-status"><FormStatus message={summary?.text} tone={summary?.tone ?? 'ok'} /></div>
+      <div id="intake-status">
+        <FormStatus message={summary?.text} tone={summary?.tone ?? 'ok'} />
+      </div>
 
       <fieldset>
         <legend>Customer</legend>
@@ -104,32 +113,57 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
           <Field id="customerId" label="Customer *" error={custErr?.customerId?.message}>
             <select {...register('customer.customerId')} {...describe('customerId', custErr?.customerId?.message)}>
               <option value="">Choose…</option>
-              {customers.map((c) => <option key={c.id} value={c.id}>{c.company}</option>)}
+              {customers.map((c) => (
+                <option key={c.id} value={c.id}>
+                  {c.company}
+                </option>
+              ))}
             </select>
           </Field>
         ) : (
           <div className="grid">
             <InputField id="company" label="Company *" error={custErr?.company?.message} registration={register('customer.company')} />
-            <InputField id="contactName" label="Contact" error={custErr?.contactName?.message} registration={register('customer.contactName')} />
+            <InputField
+              id="contactName"
+              label="Contact"
+              error={custErr?.contactName?.message}
+              registration={register('customer.contactName')}
+            />
             <InputField id="phone" label="Phone" type="tel" error={custErr?.phone?.message} registration={register('customer.phone')} />
             <InputField id="email" label="Email" type="email" error={custErr?.email?.message} registration={register('customer.email')} />
-            <InputField id="address" label="Address" className="wide" error={custErr?.address?.message} registration={register('customer.address')} />
+            <InputField
+              id="address"
+              label="Address"
+              className="wide"
+              error={custErr?.address?.message}
+              registration={register('customer.address')}
+            />
           </div>
         )}
       </fieldset>
 
       <div className="row no-print" style={{ marginBottom: '0.5rem' }}>
-        <button type="button" className="btn quiet" onClick={checkSerial}>Check serial for a returning motor</button>
-        {existingMotorId ? <span className="notice ok" style={{ margin: 0 }}>Returning motor: its job history is kept.</span> : null}
+        <button type="button" className="btn quiet" onClick={checkSerial}>
+          Check serial for a returning motor
+        </button>
+        {existingMotorId ? (
+          <span className="notice ok" style={{ margin: 0 }}>
+            Returning motor: its job history is kept.
+          </span>
+        ) : null}
       </div>
       {matches && (
         <div className="card" aria-live="polite">
-          {matches.length === 0 ? <p>No motor with that serial has been here before.</p> : (
+          {matches.length === 0 ? (
+            <p>No motor with that serial has been here before.</p>
+          ) : (
             <ul>
               {matches.map((m) => (
                 <li key={m.id}>
                   {m.manufacturer} {m.model} S/N {m.serial} — {m.customer.company}; jobs {m.jobs.map((j) => j.number).join(', ')}{' '}
-                  <button type="button" className="btn secondary" onClick={() => useMatch(m)}>Use this motor</button>
+                  <button type="button" className="btn secondary" onClick={() => takeMatch(m)}>
+                    Use this motor
+                  </button>
                 </li>
               ))}
             </ul>
@@ -137,7 +171,13 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
         </div>
       )}
 
-      <NameplateFields prefix="motor" register={anyRegister} errors={anyErrors} frequencyHz={watch('motor.frequencyHz')} speedRpm={watch('motor.speedRpm')} />
+      <NameplateFields
+        prefix="motor"
+        register={anyRegister}
+        errors={anyErrors}
+        frequencyHz={watch('motor.frequencyHz')}
+        speedRpm={watch('motor.speedRpm')}
+      />
 
       <fieldset>
         <legend>The job</legend>
@@ -145,28 +185,54 @@ export function IntakeForm({ customers, staff }: { customers: { id: string; comp
           <Field id="reportedFault" label="Reported fault *" className="wide" error={errors.job?.reportedFault?.message}>
             <textarea {...register('job.reportedFault')} {...describe('reportedFault', errors.job?.reportedFault?.message)} />
           </Field>
-          <InputField id="promisedAt" label="Promised date" type="date" error={errors.job?.promisedAt?.message} registration={register('job.promisedAt')} />
+          <InputField
+            id="promisedAt"
+            label="Promised date"
+            type="date"
+            error={errors.job?.promisedAt?.message}
+            registration={register('job.promisedAt')}
+          />
           <Field id="priority" label="Priority" error={errors.job?.priority?.message}>
             <select {...register('job.priority')} id="priority">
-              {PRIORITIES.map((p) => <option key={p} value={p}>{p.charAt(0) + p.slice(1).toLowerCase()}</option>)}
+              {PRIORITIES.map((p) => (
+                <option key={p} value={p}>
+                  {p.charAt(0) + p.slice(1).toLowerCase()}
+                </option>
+              ))}
             </select>
           </Field>
-          <InputField id="customerPo" label="Customer PO" error={errors.job?.customerPo?.message} registration={register('job.customerPo')} />
+          <InputField
+            id="customerPo"
+            label="Customer PO"
+            error={errors.job?.customerPo?.message}
+            registration={register('job.customerPo')}
+          />
           <Field id="assigneeId" label="Assign to" error={errors.job?.assigneeId?.message}>
             <select {...register('job.assigneeId')} id="assigneeId">
               <option value="">Nobody yet</option>
-              {staff.map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
+              {staff.map((s) => (
+                <option key={s.id} value={s.id}>
+                  {s.name}
+                </option>
+              ))}
             </select>
           </Field>
           <Field id="notes" label="Notes" className="wide" error={errors.job?.notes?.message}>
             <textarea {...register('job.notes')} id="notes" />
           </Field>
-          <Field id="photos" label="Nameplate photos" hint="JPEG, PNG, WebP or GIF; up to 5 MB each, 6 at a time." error={(errors as Record<string, { message?: string }>).photos?.message}>
+          <Field
+            id="photos"
+            label="Nameplate photos"
+            hint="JPEG, PNG, WebP or GIF; up to 5 MB each, 6 at a time."
+            error={(errors as Record<string, { message?: string }>).photos?.message}
+          >
             <input ref={photosRef} id="photos" name="photos" type="file" accept="image/*" multiple aria-describedby="photos-hint" />
           </Field>
         </div>
       </fieldset>
-      <button className="btn" type="submit" disabled={pending}>{pending ? 'Saving…' : 'Log motor and open job'}</button>
+      <button className="btn" type="submit" disabled={pending}>
+        {pending ? 'Saving…' : 'Log motor and open job'}
+      </button>
     </form>
   );
 }

@@ -10,7 +10,9 @@ export default async function NewIntakePage() {
   return (
     <>
       <h1>Log a motor</h1>
-      <p className="muted">Fields marked with a star are required. Values may be entered in metric or imperial where a unit choice is shown.</p>
+      <p className="muted">
+        Fields marked with a star are required. Values may be entered in metric or imperial where a unit choice is shown.
+      </p>
       <IntakeForm customers={customers} staff={staff.map((s) => ({ id: s.id, name: s.name }))} />
     </>
   );

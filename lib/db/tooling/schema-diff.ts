@@ -26,7 +26,10 @@ export function schemaFiles(dir = SCHEMA_DIR): { path: string; content: string }
 
 export function migrationsTarget(dir = MIGRATIONS_DIR): DiffTarget {
   const names = existsSync(dir)
-    ? readdirSync(dir, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name).sort()
+    ? readdirSync(dir, { withFileTypes: true })
+        .filter((d) => d.isDirectory())
+        .map((d) => d.name)
+        .sort()
     : [];
   if (names.length === 0) return { tag: 'empty' };
   const lockPath = join(dir, 'migration_lock.toml');
@@ -54,7 +57,9 @@ class PGliteWithExtensions extends PrismaPGlite {
 
 async function loadEngine(pglite: PGlite): Promise<SchemaEngine> {
   const pkgDir = dirname(require.resolve('@prisma/schema-engine-wasm'));
-  const bg = (await import(pathToFileURL(join(pkgDir, 'schema_engine_bg.js')).href)) as typeof import('@prisma/schema-engine-wasm/schema_engine_bg') & {
+  const bg = (await import(
+    pathToFileURL(join(pkgDir, 'schema_engine_bg.js')).href
+  )) as typeof import('@prisma/schema-engine-wasm/schema_engine_bg') & {
     __wbg_set_wasm: (exports: WebAssembly.Exports) => void;
   };
   const bytes = readFileSync(join(pkgDir, 'schema_engine_bg.wasm'));

@@ -68,11 +68,31 @@ const positive = (v: number | undefined): v is number => v !== undefined && Numb
  * Former settings for each coil of a group (spans and turns as the winding lists them). Fails only on
  * impossible inputs; an old MLT shorter than twice the core is ignored (the core estimate is used).
  */
-export function coilDimensions(core: CoreForCoils, spans: number[], turnsPerCoil: number[], old?: OldCoils, straightExtensionMm = DEFAULT_STRAIGHT_EXTENSION_MM): EngineResult<CoilDimensions> {
-  if (![core.boreMm, core.coreLengthMm, core.slotDepthMm, core.slots].every(positive) || !Number.isFinite(straightExtensionMm) || straightExtensionMm < 0)
-    return fail('invalid-input', 'Bore, core length, slot depth and slots must all be positive to estimate the coils.', 'Complete the core section of the as-found sheet.', 'core');
+export function coilDimensions(
+  core: CoreForCoils,
+  spans: number[],
+  turnsPerCoil: number[],
+  old?: OldCoils,
+  straightExtensionMm = DEFAULT_STRAIGHT_EXTENSION_MM,
+): EngineResult<CoilDimensions> {
+  if (
+    ![core.boreMm, core.coreLengthMm, core.slotDepthMm, core.slots].every(positive) ||
+    !Number.isFinite(straightExtensionMm) ||
+    straightExtensionMm < 0
+  )
+    return fail(
+      'invalid-input',
+      'Bore, core length, slot depth and slots must all be positive to estimate the coils.',
+      'Complete the core section of the as-found sheet.',
+      'core',
+    );
   if (spans.length === 0 || spans.length !== turnsPerCoil.length || !spans.every(positive))
-    return fail('invalid-input', 'Give one positive span per coil with its turns.', 'Check the spans and turns of the winding.', 'winding.spans');
+    return fail(
+      'invalid-input',
+      'Give one positive span per coil with its turns.',
+      'Check the spans and turns of the winding.',
+      'winding.spans',
+    );
   const L = core.coreLengthMm;
   const pitch = (y: number): number => (Math.PI * (core.boreMm + core.slotDepthMm) * y) / core.slots;
   const oldSpan = old ? weightedSpan(old.spans, old.turnsPerCoil) : 0;

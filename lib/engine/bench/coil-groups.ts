@@ -81,8 +81,12 @@ const pairs = (u: CoilSide, v: CoilSide, lo: number, hi: number, slots: number):
 /** True when two coils of one phase sit side by side in one group (file comment), either way round. */
 function neighbours(x: [CoilSide, CoilSide], y: [CoilSide, CoilSide], slots: number): boolean {
   const [x1, x2] = x;
-  for (const [y1, y2] of [[y[0], y[1]], [y[1], y[0]]] as const)
-    if ((pairs(x1, y1, 1, 1, slots) && pairs(x2, y2, 1, 2, slots)) || (pairs(x2, y2, 1, 1, slots) && pairs(x1, y1, 1, 2, slots))) return true;
+  for (const [y1, y2] of [
+    [y[0], y[1]],
+    [y[1], y[0]],
+  ] as const)
+    if ((pairs(x1, y1, 1, 1, slots) && pairs(x2, y2, 1, 2, slots)) || (pairs(x2, y2, 1, 1, slots) && pairs(x1, y1, 1, 2, slots)))
+      return true;
   return false;
 }
 
@@ -116,8 +120,14 @@ function orientGroup(members: [CoilSide, CoilSide][], table: SlotTable): Oriente
   const head = plusFirst[0];
   if (table.layers === 2 && head && head[0].layer !== head[1].layer) plusStarts = head[0].layer === 1;
   else {
-    const mp = middleOfRun(plusFirst.map((c) => c[0].slot), table.slots);
-    const mn = middleOfRun(plusFirst.map((c) => c[1].slot), table.slots);
+    const mp = middleOfRun(
+      plusFirst.map((c) => c[0].slot),
+      table.slots,
+    );
+    const mn = middleOfRun(
+      plusFirst.map((c) => c[1].slot),
+      table.slots,
+    );
     const pn = forward(mp, mn, table.slots);
     const np = forward(mn, mp, table.slots);
     plusStarts = Math.abs(pn - np) < 1e-9 ? true : pn < np;
@@ -150,14 +160,24 @@ function phasorOf(coils: Oriented[], slots: number, polePairs: number): { re: nu
  */
 export function coilGroups(table: SlotTable): EngineResult<CoilGroups> {
   if (table.sides.length === 0 || table.sides.some((s) => s.coil === undefined))
-    return fail('not-applicable', 'The slot table has no coil numbers, so the coils and their groups cannot be traced.', 'Number the coil sides in the slot table (two sides per coil), or use the standard layout.', 'winding.slotTable');
+    return fail(
+      'not-applicable',
+      'The slot table has no coil numbers, so the coils and their groups cannot be traced.',
+      'Number the coil sides in the slot table (two sides per coil), or use the standard layout.',
+      'winding.slotTable',
+    );
   const pairs0 = new Map<number, CoilSide[]>();
   for (const s of table.sides) pairs0.set(s.coil ?? 0, [...(pairs0.get(s.coil ?? 0) ?? []), s]);
   const coils: [CoilSide, CoilSide][] = [];
   for (const [id, pair] of pairs0) {
     const [a, b] = pair;
     if (pair.length !== 2 || !a || !b || a.phase !== b.phase || a.polarity === b.polarity)
-      return fail('invalid-input', `Coil ${id} must have two sides of one phase, one going and one returning.`, 'Check the coil numbers in the slot table.', 'winding.slotTable');
+      return fail(
+        'invalid-input',
+        `Coil ${id} must have two sides of one phase, one going and one returning.`,
+        'Check the coil numbers in the slot table.',
+        'winding.slotTable',
+      );
     coils.push([a, b]);
   }
   const parent = coils.map((_, i) => i);
@@ -176,7 +196,10 @@ export function coilGroups(table: SlotTable): EngineResult<CoilGroups> {
   const polePitch = table.slots / table.poles;
   const raw = [...sets.values()].map((set) => {
     const members = orientGroup(set, table);
-    const first = firstOfRun(members.map((c) => c.start.slot), table.slots);
+    const first = firstOfRun(
+      members.map((c) => c.start.slot),
+      table.slots,
+    );
     // Winding order: from the first start slot on round the bore.
     const ordered = [...members].sort((a, b) => forward(first, a.start.slot, table.slots) - forward(first, b.start.slot, table.slots));
     const head = ordered[0];
@@ -187,8 +210,13 @@ export function coilGroups(table: SlotTable): EngineResult<CoilGroups> {
       sense: (head?.start.polarity ?? 1) as Polarity,
       pole: (Math.floor(middle / polePitch) % table.poles) + 1,
       coils: ordered.map((c) => ({
-        coil: c.coil, startSlot: c.start.slot, startLayer: c.start.layer, finishSlot: c.finish.slot, finishLayer: c.finish.layer,
-        span: table.layers === 2 ? ring(c.start.slot, c.finish.slot, table.slots) : forward(c.start.slot, c.finish.slot, table.slots), turns: c.start.turns,
+        coil: c.coil,
+        startSlot: c.start.slot,
+        startLayer: c.start.layer,
+        finishSlot: c.finish.slot,
+        finishLayer: c.finish.layer,
+        span: table.layers === 2 ? ring(c.start.slot, c.finish.slot, table.slots) : forward(c.start.slot, c.finish.slot, table.slots),
+        turns: c.start.turns,
       })),
       turns: ordered.reduce((t, c) => t + c.start.turns, 0),
       phasor: phasorOf(ordered, table.slots, p),
@@ -197,7 +225,14 @@ export function coilGroups(table: SlotTable): EngineResult<CoilGroups> {
   raw.sort((a, b) => a.first - b.first || a.phase.localeCompare(b.phase));
   const count: Record<Phase, number> = { A: 0, B: 0, C: 0 };
   const groups: CoilGroup[] = raw.map((g, i) => ({
-    number: i + 1, phase: g.phase, indexInPhase: ++count[g.phase], sense: g.sense, pole: g.pole, coils: g.coils, turns: g.turns, phasor: g.phasor,
+    number: i + 1,
+    phase: g.phase,
+    indexInPhase: ++count[g.phase],
+    sense: g.sense,
+    pole: g.pole,
+    coils: g.coils,
+    turns: g.turns,
+    phasor: g.phasor,
   }));
   const byPhase: Record<Phase, CoilGroup[]> = { A: [], B: [], C: [] };
   for (const g of groups) byPhase[g.phase].push(g);

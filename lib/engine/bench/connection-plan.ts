@@ -65,7 +65,9 @@ const PHASES: readonly Phase[] = ['A', 'B', 'C'];
 const TOLERANCE = 1e-9;
 
 function chain(phase: Phase, index: number, groups: CoilGroup[]): Circuit {
-  const steps: CircuitStep[] = groups.map((g) => (g.sense > 0 ? { group: g, enter: 'start', leave: 'finish' } : { group: g, enter: 'finish', leave: 'start' }));
+  const steps: CircuitStep[] = groups.map((g) =>
+    g.sense > 0 ? { group: g, enter: 'start', leave: 'finish' } : { group: g, enter: 'finish', leave: 'start' },
+  );
   const jumpers: Jumper[] = [];
   for (let i = 1; i < steps.length; i++) {
     const a = steps[i - 1];
@@ -82,7 +84,9 @@ function matched(circuits: Circuit[]): boolean {
   if (!ref) return false;
   const m = Math.hypot(ref.phasor.re, ref.phasor.im);
   if (!(m > 0)) return false;
-  return circuits.every((c) => c.turns === ref.turns && Math.hypot(c.phasor.re - ref.phasor.re, c.phasor.im - ref.phasor.im) <= TOLERANCE * m);
+  return circuits.every(
+    (c) => c.turns === ref.turns && Math.hypot(c.phasor.re - ref.phasor.re, c.phasor.im - ref.phasor.im) <= TOLERANCE * m,
+  );
 }
 
 function split(phase: Phase, groups: CoilGroup[], paths: number, how: 'blocks' | 'interleaved'): Circuit[] {
@@ -113,21 +117,41 @@ function poleConnectionOf(groups: CoilGroups): PoleConnection {
  */
 export function connectionPlan(table: SlotTable, paths: number, connection: 'star' | 'delta'): EngineResult<ConnectionPlan> {
   if (!Number.isInteger(paths) || paths < 1)
-    return fail('invalid-input', `Parallel circuits must be a whole number of at least 1, not ${paths}.`, 'Count the circuits of one phase.', 'winding.parallelPaths');
+    return fail(
+      'invalid-input',
+      `Parallel circuits must be a whole number of at least 1, not ${paths}.`,
+      'Count the circuits of one phase.',
+      'winding.parallelPaths',
+    );
   const found = coilGroups(table);
   if (!found.ok) return found;
   const groups = found.value;
   const counts = PHASES.map((ph) => groups.byPhase[ph].length);
   if (counts.some((n) => n !== counts[0]))
-    return fail('unbalanced-layout', `The phases have different numbers of coil groups (${counts.join(', ')}).`, 'Check the layout: a balanced winding has as many groups in every phase.', 'winding');
+    return fail(
+      'unbalanced-layout',
+      `The phases have different numbers of coil groups (${counts.join(', ')}).`,
+      'Check the layout: a balanced winding has as many groups in every phase.',
+      'winding',
+    );
   const n = counts[0] ?? 0;
   if (n % paths !== 0)
-    return fail('parallel-paths-not-allowed', `${n} group(s) per phase cannot be shared among ${paths} parallel circuits.`, 'Choose a circuit count that divides the groups per phase.', 'winding.parallelPaths');
+    return fail(
+      'parallel-paths-not-allowed',
+      `${n} group(s) per phase cannot be shared among ${paths} parallel circuits.`,
+      'Choose a circuit count that divides the groups per phase.',
+      'winding.parallelPaths',
+    );
   for (const how of ['blocks', 'interleaved'] as const) {
     const circuits = {} as Record<Phase, Circuit[]>;
     for (const ph of PHASES) circuits[ph] = split(ph, groups.byPhase[ph], paths, how);
     if (PHASES.every((ph) => matched(circuits[ph])))
       return ok({ groups, parallelPaths: paths, connection, circuits, poleConnection: poleConnectionOf(groups), grouping: how });
   }
-  return fail('parallel-paths-not-allowed', `${paths} parallel circuit(s) would not carry identical voltages in this layout; current would circulate between them.`, 'Choose a circuit count the layout allows.', 'winding.parallelPaths');
+  return fail(
+    'parallel-paths-not-allowed',
+    `${paths} parallel circuit(s) would not carry identical voltages in this layout; current would circulate between them.`,
+    'Choose a circuit count the layout allows.',
+    'winding.parallelPaths',
+  );
 }

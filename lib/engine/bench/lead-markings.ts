@@ -93,10 +93,28 @@ export function leadPlan(convention: LeadConvention, leads: LeadCount, connectio
   for (const ph of PHASES) {
     if (count === 12) {
       const half = parallelPaths / 2;
-      sections.push({ phase: ph, section: 1, circuits: all.slice(0, half), startLead: leadMark(convention, ph, 1, 'start'), finishLead: leadMark(convention, ph, 1, 'finish') });
-      sections.push({ phase: ph, section: 2, circuits: all.slice(half), startLead: leadMark(convention, ph, 2, 'start'), finishLead: leadMark(convention, ph, 2, 'finish') });
+      sections.push({
+        phase: ph,
+        section: 1,
+        circuits: all.slice(0, half),
+        startLead: leadMark(convention, ph, 1, 'start'),
+        finishLead: leadMark(convention, ph, 1, 'finish'),
+      });
+      sections.push({
+        phase: ph,
+        section: 2,
+        circuits: all.slice(half),
+        startLead: leadMark(convention, ph, 2, 'start'),
+        finishLead: leadMark(convention, ph, 2, 'finish'),
+      });
     } else if (count === 6) {
-      sections.push({ phase: ph, section: 1, circuits: all, startLead: leadMark(convention, ph, 1, 'start'), finishLead: leadMark(convention, ph, 1, 'finish') });
+      sections.push({
+        phase: ph,
+        section: 1,
+        circuits: all,
+        startLead: leadMark(convention, ph, 1, 'start'),
+        finishLead: leadMark(convention, ph, 1, 'finish'),
+      });
     } else {
       const lead = convention === 'iec' ? IEC_LETTER[ph] : `T${NEMA_INDEX[ph]}`;
       sections.push({ phase: ph, section: 1, circuits: all, startLead: lead, finishLead: null });
@@ -108,8 +126,15 @@ export function leadPlan(convention: LeadConvention, leads: LeadCount, connectio
     sections.filter((s) => s.phase === ph).map((s) => (end === 'start' ? s.startLead : s.finishLead) ?? inner(ph, end));
   if (count === 3) {
     for (const ph of PHASES) lines.push({ line: LINE[ph], leads: ends(ph, 'start') });
-    if (connection === 'star') joints.push({ where: 'inside the motor', role: 'star point', ends: PHASES.map((ph) => inner(ph, 'finish')) });
-    else for (const ph of PHASES) joints.push({ where: 'inside the motor', role: 'delta corner', ends: [`lead ${ends(ph, 'start').join('')}`, inner(BEFORE[ph], 'finish')] });
+    if (connection === 'star')
+      joints.push({ where: 'inside the motor', role: 'star point', ends: PHASES.map((ph) => inner(ph, 'finish')) });
+    else
+      for (const ph of PHASES)
+        joints.push({
+          where: 'inside the motor',
+          role: 'delta corner',
+          ends: [`lead ${ends(ph, 'start').join('')}`, inner(BEFORE[ph], 'finish')],
+        });
   } else if (connection === 'star') {
     for (const ph of PHASES) lines.push({ line: LINE[ph], leads: ends(ph, 'start') });
     for (const section of count === 12 ? ([1, 2] as const) : ([1] as const))

@@ -53,16 +53,33 @@ export interface WireDraw {
 /** Wire per size for the coils of a winding, with the allowance (fraction, 0 … 1). */
 export function wireDraw(coils: CoilTurns[], parts: WirePart[], allowance: number): EngineResult<WireDraw> {
   if (!Number.isFinite(allowance) || allowance < WIRE_ALLOWANCE_RANGE.min || allowance > WIRE_ALLOWANCE_RANGE.max)
-    return fail('invalid-input', `The wire allowance must be from 0 to 100 %, not ${allowance * 100} %.`, 'Set the allowance for leads and waste on the stock page.', 'wireAllowance');
+    return fail(
+      'invalid-input',
+      `The wire allowance must be from 0 to 100 %, not ${allowance * 100} %.`,
+      'Set the allowance for leads and waste on the stock page.',
+      'wireAllowance',
+    );
   if (coils.length === 0 || coils.some((c) => !(c.turns > 0) || !(c.meanTurnLengthMm > 0) || !Number.isFinite(c.meanTurnLengthMm)))
-    return fail('invalid-input', 'Every coil needs positive turns and a positive mean turn length.', 'Check the winding and the core.', 'winding');
+    return fail(
+      'invalid-input',
+      'Every coil needs positive turns and a positive mean turn length.',
+      'Check the winding and the core.',
+      'winding',
+    );
   if (parts.length === 0 || parts.some((p) => !(p.count > 0) || !(p.areaMm2 > 0) || !Number.isFinite(p.areaMm2)))
     return fail('invalid-input', 'Every wire in hand needs a positive count and area.', 'Check the wires in hand.', 'wires');
   const conductorLengthM = coils.reduce((t, c) => t + c.turns * mmToM(c.meanTurnLengthMm), 0);
   const lines = parts.map((p) => {
     const lengthM = p.count * conductorLengthM;
     const copperKg = lengthM * p.areaMm2 * 1e-6 * COPPER_DENSITY_KG_PER_M3;
-    return { label: p.label, count: p.count, lengthM, copperKg, drawKg: copperKg * (1 + allowance), drawLengthM: lengthM * (1 + allowance) };
+    return {
+      label: p.label,
+      count: p.count,
+      lengthM,
+      copperKg,
+      drawKg: copperKg * (1 + allowance),
+      drawLengthM: lengthM * (1 + allowance),
+    };
   });
   const copperKg = lines.reduce((t, l) => t + l.copperKg, 0);
   return ok({ conductorLengthM, allowance, lines, copperKg, drawKg: copperKg * (1 + allowance) });

@@ -24,19 +24,38 @@ const positive = (v: number): boolean => Number.isFinite(v) && v > 0;
 /** Checks a core ring: every dimension positive, stacking factor in (0, 1], back iron and iron length left. */
 export function checkCoreRing(c: CoreRing): EngineResult<CoreRing> {
   const need: [number, string, string][] = [
-    [c.outsideDiameterM, 'core.outsideDiameterMm', 'core outside diameter'], [c.boreM, 'core.boreMm', 'bore'],
-    [c.slotDepthM, 'core.slotDepthMm', 'slot depth'], [c.coreLengthM, 'core.coreLengthMm', 'core length'],
-    [c.slots, 'core.slots', 'slot count'], [c.slotWidthTopM, 'core.slotWidthTopMm', 'slot width at the top'],
+    [c.outsideDiameterM, 'core.outsideDiameterMm', 'core outside diameter'],
+    [c.boreM, 'core.boreMm', 'bore'],
+    [c.slotDepthM, 'core.slotDepthMm', 'slot depth'],
+    [c.coreLengthM, 'core.coreLengthMm', 'core length'],
+    [c.slots, 'core.slots', 'slot count'],
+    [c.slotWidthTopM, 'core.slotWidthTopMm', 'slot width at the top'],
     [c.slotWidthBottomM, 'core.slotWidthBottomMm', 'slot width at the bottom'],
   ];
   for (const [v, field, what] of need)
-    if (!positive(v)) return fail('invalid-input', `The ${what} must be more than zero (got ${v}).`, `Enter the ${what} on the as-found sheet.`, field);
+    if (!positive(v))
+      return fail('invalid-input', `The ${what} must be more than zero (got ${v}).`, `Enter the ${what} on the as-found sheet.`, field);
   if (!(c.stackingFactor > 0 && c.stackingFactor <= 1))
-    return fail('invalid-input', `Stacking factor must be above 0 and at most 1 (got ${c.stackingFactor}).`, 'Typical laminations stack at 0.93–0.97.', 'core.stackingFactor');
+    return fail(
+      'invalid-input',
+      `Stacking factor must be above 0 and at most 1 (got ${c.stackingFactor}).`,
+      'Typical laminations stack at 0.93–0.97.',
+      'core.stackingFactor',
+    );
   if (!((c.outsideDiameterM - c.boreM) / 2 - c.slotDepthM > 0))
-    return fail('invalid-input', 'No back iron is left: (outside diameter − bore)/2 − slot depth is not above zero.', 'Check the bore, outside diameter and slot depth.', 'core.slotDepthMm');
+    return fail(
+      'invalid-input',
+      'No back iron is left: (outside diameter − bore)/2 − slot depth is not above zero.',
+      'Check the bore, outside diameter and slot depth.',
+      'core.slotDepthMm',
+    );
   const ducts = (c.ventDucts ?? 0) * (c.ventDuctWidthM ?? 0);
   if (!(ducts >= 0 && c.coreLengthM - ducts > 0))
-    return fail('invalid-input', 'The vent ducts take up the whole core length.', 'Check the number and width of the vent ducts.', 'core.ventDucts');
+    return fail(
+      'invalid-input',
+      'The vent ducts take up the whole core length.',
+      'Check the number and width of the vent ducts.',
+      'core.ventDucts',
+    );
   return ok(c);
 }

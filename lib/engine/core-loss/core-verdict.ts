@@ -56,8 +56,11 @@ export function coreVerdict(stages: Partial<Record<CoreStage, StageResult>>, lim
   }
   if (before.frequencyHz !== after.frequencyHz) {
     return {
-      ...base, status: 'incomplete',
-      words: [`No verdict: the test ${CORE_STAGE_LABELS[after.stage]} ran at ${after.frequencyHz} Hz and the test before stripping at ${before.frequencyHz} Hz. Iron loss depends on frequency; repeat the test at ${before.frequencyHz} Hz to compare.`],
+      ...base,
+      status: 'incomplete',
+      words: [
+        `No verdict: the test ${CORE_STAGE_LABELS[after.stage]} ran at ${after.frequencyHz} Hz and the test before stripping at ${before.frequencyHz} Hz. Iron loss depends on frequency; repeat the test at ${before.frequencyHz} Hz to compare.`,
+      ],
     };
   }
   const change = after.loss.wattsPerKgAtReference / before.loss.wattsPerKgAtReference - 1;
@@ -67,13 +70,18 @@ export function coreVerdict(stages: Partial<Record<CoreStage, StageResult>>, lim
   const at = `at ${after.loss.referenceFluxDensityT.toFixed(2)} T`;
   words.push(
     `Core loss ${CORE_STAGE_LABELS[after.stage]} ${wkg(after.loss.wattsPerKgAtReference)} against ${wkg(before.loss.wattsPerKgAtReference)} before stripping (${at}): ${pct(change)}, ` +
-    (within ? `within the shop's limit of ${pct(limitFraction)}.` : `more than the shop's limit of ${pct(limitFraction)}.`),
+      (within ? `within the shop's limit of ${pct(limitFraction)}.` : `more than the shop's limit of ${pct(limitFraction)}.`),
   );
-  for (const h of hot) words.push(`Hot spot at slot ${h.slot}, ${(h.axialPositionM * 1000).toFixed(0)} mm from the drive-end face: ${h.riseK.toFixed(1)} K above the core.`);
+  for (const h of hot)
+    words.push(
+      `Hot spot at slot ${h.slot}, ${(h.axialPositionM * 1000).toFixed(0)} mm from the drive-end face: ${h.riseK.toFixed(1)} K above the core.`,
+    );
   if (within && hot.length === 0) {
     words.push('The core is fit to rewind.');
     return { ...base, status: 'acceptable', changeFraction: change, words };
   }
-  words.push('The core is not fit to rewind as it is: the lamination insulation is likely damaged. Repair the hot spots (or restack or replace the core) and test again before rewinding.');
+  words.push(
+    'The core is not fit to rewind as it is: the lamination insulation is likely damaged. Repair the hot spots (or restack or replace the core) and test again before rewinding.',
+  );
   return { ...base, status: 'not-acceptable', changeFraction: change, words };
 }

@@ -65,13 +65,20 @@ export function loopTestPlan(input: LoopPlanInput): EngineResult<LoopPlan> {
   const checked = checkCoreRing(input.ring);
   if (!checked.ok) return checked;
   const need: [number, string, string][] = [
-    [input.testFluxDensityT, 'testFluxDensityT', 'test flux density'], [input.frequencyHz, 'frequencyHz', 'test frequency'],
-    [input.supplyVoltageV, 'supplyVoltageV', 'supply voltage'], [input.fieldStrengthAPerM, 'fieldStrengthAPerM', 'field strength'],
+    [input.testFluxDensityT, 'testFluxDensityT', 'test flux density'],
+    [input.frequencyHz, 'frequencyHz', 'test frequency'],
+    [input.supplyVoltageV, 'supplyVoltageV', 'supply voltage'],
+    [input.fieldStrengthAPerM, 'fieldStrengthAPerM', 'field strength'],
   ];
   for (const [v, field, what] of need)
     if (!positive(v)) return fail('invalid-input', `The ${what} must be more than zero (got ${v}).`, `Enter the ${what}.`, field);
   if (input.turns !== undefined && !(Number.isInteger(input.turns) && input.turns >= 1))
-    return fail('invalid-input', `Loop turns must be a whole number of at least 1 (got ${input.turns}).`, 'Enter the turns of the test loop.', 'turns');
+    return fail(
+      'invalid-input',
+      `Loop turns must be a whole number of at least 1 (got ${input.turns}).`,
+      'Enter the turns of the test loop.',
+      'turns',
+    );
   const rho = input.steelDensityKgPerM3 ?? SILICON_STEEL_DENSITY_KG_PER_M3;
   const r = input.ring;
   const section = backIronSection(r);
@@ -82,14 +89,24 @@ export function loopTestPlan(input: LoopPlanInput): EngineResult<LoopPlan> {
   const voltageAtTargetV = loopVoltageV(input.frequencyHz, turns, input.testFluxDensityT, section.areaM2);
   const currentA = loopCurrentA(input.fieldStrengthAPerM, meanPathM, turns);
   const plan: LoopPlan = {
-    section, meanPathM, backIronMassKg: yokeKg, teethMassKg: teethKg, coreMassKg: yokeKg + teethKg, steelDensityKgPerM3: rho,
-    turns, turnsSuggested: input.turns === undefined,
+    section,
+    meanPathM,
+    backIronMassKg: yokeKg,
+    teethMassKg: teethKg,
+    coreMassKg: yokeKg + teethKg,
+    steelDensityKgPerM3: rho,
+    turns,
+    turnsSuggested: input.turns === undefined,
     voltsPerTurn: loopVoltageV(input.frequencyHz, 1, input.testFluxDensityT, section.areaM2),
     voltageAtTargetV,
     fluxDensityAtSupplyT: loopFluxDensityT(input.supplyVoltageV, input.frequencyHz, turns, section.areaM2),
-    currentA, ampereTurns: currentA * turns, apparentPowerVA: voltageAtTargetV * currentA,
+    currentA,
+    ampereTurns: currentA * turns,
+    apparentPowerVA: voltageAtTargetV * currentA,
     fieldStrengthAPerM: input.fieldStrengthAPerM,
   };
   const numbers = [section.areaM2, meanPathM, yokeKg, teethKg, voltageAtTargetV, plan.fluxDensityAtSupplyT, currentA];
-  return numbers.every(Number.isFinite) ? ok(plan) : fail('non-finite-result', 'The loop-test plan did not come out as finite numbers.', 'Check the core dimensions.');
+  return numbers.every(Number.isFinite)
+    ? ok(plan)
+    : fail('non-finite-result', 'The loop-test plan did not come out as finite numbers.', 'Check the core dimensions.');
 }

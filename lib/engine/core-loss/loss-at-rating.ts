@@ -12,5 +12,9 @@
 import { LOSS_DENSITY_EXPONENT } from './specific-loss';
 
 export const coreLossChangeAtRatingW = (
-  wattsPerKgBefore: number, wattsPerKgAfter: number, backIronMassKg: number, ratedBackIronT: number, referenceT: number,
+  wattsPerKgBefore: number,
+  wattsPerKgAfter: number,
+  backIronMassKg: number,
+  ratedBackIronT: number,
+  referenceT: number,
 ): number => (wattsPerKgAfter - wattsPerKgBefore) * backIronMassKg * (ratedBackIronT / referenceT) ** LOSS_DENSITY_EXPONENT;

@@ -42,22 +42,38 @@ export interface SpecificLoss {
 }
 
 /** W/kg of one reading over the back-iron mass, and at the reference density. */
-export function specificLoss(r: LoopReading, backIronAreaM2: number, backIronMassKg: number, referenceFluxDensityT: number): EngineResult<SpecificLoss> {
+export function specificLoss(
+  r: LoopReading,
+  backIronAreaM2: number,
+  backIronMassKg: number,
+  referenceFluxDensityT: number,
+): EngineResult<SpecificLoss> {
   const need: [number, string][] = [
-    [r.voltageV, 'voltageV'], [r.currentA, 'currentA'], [r.frequencyHz, 'frequencyHz'], [r.turns, 'turns'],
-    [backIronAreaM2, 'backIronAreaM2'], [backIronMassKg, 'backIronMassKg'], [referenceFluxDensityT, 'referenceFluxDensityT'],
+    [r.voltageV, 'voltageV'],
+    [r.currentA, 'currentA'],
+    [r.frequencyHz, 'frequencyHz'],
+    [r.turns, 'turns'],
+    [backIronAreaM2, 'backIronAreaM2'],
+    [backIronMassKg, 'backIronMassKg'],
+    [referenceFluxDensityT, 'referenceFluxDensityT'],
   ];
   for (const [v, field] of need)
-    if (!(Number.isFinite(v) && v > 0)) return fail('invalid-input', `${field} must be more than zero (got ${v}).`, 'Check the test reading and the core data.', field);
-  if (!(Number.isFinite(r.watts) && r.watts >= 0)) return fail('invalid-input', `Watts must be zero or more (got ${r.watts}).`, 'Enter the wattmeter reading.', 'watts');
+    if (!(Number.isFinite(v) && v > 0))
+      return fail('invalid-input', `${field} must be more than zero (got ${v}).`, 'Check the test reading and the core data.', field);
+  if (!(Number.isFinite(r.watts) && r.watts >= 0))
+    return fail('invalid-input', `Watts must be zero or more (got ${r.watts}).`, 'Enter the wattmeter reading.', 'watts');
   const fluxDensityT = loopFluxDensityT(r.voltageV, r.frequencyHz, r.turns, backIronAreaM2);
   const wattsPerKg = r.watts / backIronMassKg;
   const wattsPerKgAtReference = wattsPerKg * (referenceFluxDensityT / fluxDensityT) ** LOSS_DENSITY_EXPONENT;
   const apparentPowerVA = r.voltageV * r.currentA;
   const value: SpecificLoss = {
-    fluxDensityT, wattsPerKg, wattsPerKgAtReference, referenceFluxDensityT,
+    fluxDensityT,
+    wattsPerKg,
+    wattsPerKgAtReference,
+    referenceFluxDensityT,
     farFromReference: Math.abs(fluxDensityT / referenceFluxDensityT - 1) > NORMALISATION_WARNING_FRACTION,
-    apparentPowerVA, powerFactor: r.watts / apparentPowerVA,
+    apparentPowerVA,
+    powerFactor: r.watts / apparentPowerVA,
   };
   return [fluxDensityT, wattsPerKg, wattsPerKgAtReference, value.powerFactor].every(Number.isFinite)
     ? ok(value)

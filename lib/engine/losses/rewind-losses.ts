@@ -71,14 +71,24 @@ export function rewindLosses(input: RewindLossInput): RewindLosses | null {
   const copperChangeW = after.copperLossW - before.copperLossW;
   const copperChangeFraction = copperChangeW / before.copperLossW;
   const coreLossChangeW = input.coreLossChangeW !== undefined && Number.isFinite(input.coreLossChangeW) ? input.coreLossChangeW : null;
-  const efficiency = input.outputKw !== undefined && input.efficiency !== undefined
-    ? efficiencyAfterLossChange(input.outputKw * 1000, input.efficiency, copperChangeW + (coreLossChangeW ?? 0))
-    : null;
-  const finding = copperChangeFraction > limitFraction
-    ? `The rewind raises stator copper loss by ${(copperChangeFraction * 100).toFixed(1)} % (${copperChangeW.toFixed(1)} W), more than the shop's limit of ${(limitFraction * 100).toFixed(1)} %. Check the wire size (copper area per turn: less copper than the original raises the resistance), the turns per coil and the mean turn length against the original data before winding.`
-    : null;
+  const efficiency =
+    input.outputKw !== undefined && input.efficiency !== undefined
+      ? efficiencyAfterLossChange(input.outputKw * 1000, input.efficiency, copperChangeW + (coreLossChangeW ?? 0))
+      : null;
+  const finding =
+    copperChangeFraction > limitFraction
+      ? `The rewind raises stator copper loss by ${(copperChangeFraction * 100).toFixed(1)} % (${copperChangeW.toFixed(1)} W), more than the shop's limit of ${(limitFraction * 100).toFixed(1)} %. Check the wire size (copper area per turn: less copper than the original raises the resistance), the turns per coil and the mean turn length against the original data before winding.`
+      : null;
   return {
-    referenceTemperatureC: SPECIFIED_TEMPERATURE_C[input.thermalClass], thermalClass: input.thermalClass,
-    before, after, copperChangeW, copperChangeFraction, coreLossChangeW, efficiency, limitFraction, finding,
+    referenceTemperatureC: SPECIFIED_TEMPERATURE_C[input.thermalClass],
+    thermalClass: input.thermalClass,
+    before,
+    after,
+    copperChangeW,
+    copperChangeFraction,
+    coreLossChangeW,
+    efficiency,
+    limitFraction,
+    finding,
   };
 }

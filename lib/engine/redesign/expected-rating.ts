@@ -17,7 +17,10 @@ export const RATING_ASSUMPTIONS: readonly string[] = [
 ];
 
 /** Speed, power, current and torque ratios for a supply change (see RATING_ASSUMPTIONS). */
-export function expectedRating(original: RedesignOriginal, target: Pick<RedesignTarget, 'lineVoltageV' | 'frequencyHz' | 'poles'>): ExpectedRating {
+export function expectedRating(
+  original: RedesignOriginal,
+  target: Pick<RedesignTarget, 'lineVoltageV' | 'frequencyHz' | 'poles'>,
+): ExpectedRating {
   const synchronousRpmOld = synchronousSpeedRpm(original.supply.frequencyHz, original.winding.poles);
   const synchronousRpmNew = synchronousSpeedRpm(target.frequencyHz, target.poles);
   const speedRatio = synchronousRpmNew / synchronousRpmOld;

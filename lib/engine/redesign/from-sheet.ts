@@ -51,8 +51,13 @@ export function stockWire(row: StockRow): EngineResult<StockWire> {
   const overall = wireOverallDiameterMm(row);
   if (!overall.ok) return overall;
   return ok({
-    standard: row.standard, size: found.value.size, enamelGrade: row.enamelGrade, label: found.value.label,
-    bareMm: found.value.bareMm, overallMm: overall.value, areaMm2: found.value.areaMm2,
+    standard: row.standard,
+    size: found.value.size,
+    enamelGrade: row.enamelGrade,
+    label: found.value.label,
+    bareMm: found.value.bareMm,
+    overallMm: overall.value,
+    areaMm2: found.value.areaMm2,
   });
 }
 
@@ -60,13 +65,26 @@ export function stockWire(row: StockRow): EngineResult<StockWire> {
 export function originalFromSheet(sheet: WindingSheet, ratedSpeedRpm?: number): EngineResult<RedesignOriginal> {
   const input = windingInputFromSheet(sheet);
   if (!input.core) return fail('invalid-input', 'The sheet has no core dimensions.', 'Complete the core section of the sheet.', 'core');
-  const gross = grossSlotAreaMm2({ depthMm: sheet.core.slotDepthMm, topWidthMm: sheet.core.slotWidthTopMm, bottomWidthMm: sheet.core.slotWidthBottomMm });
+  const gross = grossSlotAreaMm2({
+    depthMm: sheet.core.slotDepthMm,
+    topWidthMm: sheet.core.slotWidthTopMm,
+    bottomWidthMm: sheet.core.slotWidthBottomMm,
+  });
   if (!gross.ok) return fail(gross.error.code, gross.error.message, gross.error.hint, 'core.slotDepthMm');
   const wires: RedesignOriginal['wires'] = [];
   for (const [i, w] of sheet.wires.entries()) {
     const s = stockWire(w);
     if (!s.ok) return fail(s.error.code, s.error.message, s.error.hint, `wires.${i}.size`);
-    wires.push({ label: s.value.label, standard: s.value.standard, size: s.value.size, enamelGrade: w.enamelGrade, bareMm: s.value.bareMm, overallMm: s.value.overallMm, areaMm2: s.value.areaMm2, count: w.count });
+    wires.push({
+      label: s.value.label,
+      standard: s.value.standard,
+      size: s.value.size,
+      enamelGrade: w.enamelGrade,
+      bareMm: s.value.bareMm,
+      overallMm: s.value.overallMm,
+      areaMm2: s.value.areaMm2,
+      count: w.count,
+    });
   }
   return ok({
     winding: input.winding,

@@ -110,13 +110,18 @@ export function effortItems(f: EffortFacts): EffortItem[] {
   if (extra > 0) out.push({ what: `${extra} circuit${extra === 1 ? '' : 's'} more than the original`, points: extra * P.extraCircuit });
   if (f.strands > 1) out.push({ what: `${f.strands} wires in hand`, points: (f.strands - 1) * P.strand });
   if (f.sizes > 1) out.push({ what: `${f.sizes} wire sizes`, points: (f.sizes - 1) * P.extraSize });
-  if (f.thinSizes > 0) out.push({ what: `${f.thinSizes === 1 ? 'a size' : `${f.thinSizes} sizes`} thinner than the shop minimum`, points: f.thinSizes * P.thinWire });
+  if (f.thinSizes > 0)
+    out.push({
+      what: `${f.thinSizes === 1 ? 'a size' : `${f.thinSizes} sizes`} thinner than the shop minimum`,
+      points: f.thinSizes * P.thinWire,
+    });
   if (f.turnsChanged) out.push({ what: 'turns per coil changed', points: P.turnsChanged });
   if (f.connectionChanged) out.push({ what: 'connection changed', points: P.connectionChanged });
   if (f.spanChanged) out.push({ what: 'span changed', points: P.spanChanged });
   if (f.layersChanged) out.push({ what: 'layers or coil style changed', points: P.layersChanged });
   if (f.overPitched) out.push({ what: `over-pitched span (${(f.pitch * 100).toFixed(0)} % of the pole pitch)`, points: P.overPitch });
-  else if (f.layers === 2 && f.pitch < 2 / 3 - EPS) out.push({ what: `short span (${(f.pitch * 100).toFixed(0)} % of the pole pitch)`, points: P.shortSpan });
+  else if (f.layers === 2 && f.pitch < 2 / 3 - EPS)
+    out.push({ what: `short span (${(f.pitch * 100).toFixed(0)} % of the pole pitch)`, points: P.shortSpan });
   const h = harmonicOf(f);
   if (h > 0) out.push({ what: `k_w5/k_w7 up to ${h.toFixed(3)}`, points: h / P.harmonicStep });
   if (f.fractional) out.push({ what: 'fractional-slot layout', points: P.fractional });

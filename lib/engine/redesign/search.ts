@@ -21,7 +21,19 @@ import { meanTurnLengthMm, wireMassKg } from './wire-mass';
 import { largestArea, partsLabel, wireGroups, type WireGroups } from './wire-sets';
 import { pickFromWindow, wireWindow, type WireWindow } from './wire-window';
 import { layoutLabel, spansLabel } from '../notation';
-import type { AsFoundCheck, Candidate, LayoutFamily, RedesignLimits, RedesignOriginal, RedesignRequest, RedesignSearch, RejectedFamily, StockWire, WireNeed, WireSet } from './types';
+import type {
+  AsFoundCheck,
+  Candidate,
+  LayoutFamily,
+  RedesignLimits,
+  RedesignOriginal,
+  RedesignRequest,
+  RedesignSearch,
+  RejectedFamily,
+  StockWire,
+  WireNeed,
+  WireSet,
+} from './types';
 
 /** Turn counts tried per family (closest to the original densities first). */
 const TURNS_PER_FAMILY = 3;
@@ -61,18 +73,30 @@ function groupPoints(g: WireGroups, minWireMm: number): Map<number[], number> {
 
 /** The as-found wires in hand as a wire set, matched to the stock rows of the same sizes (kg on hand) when there are any. */
 function asFoundWireSet(original: RedesignOriginal, stock: readonly StockWire[]): WireSet {
-  const parts = original.wires.map((w) => {
-    const row = stock.find((s) => s.standard === w.standard && s.size === w.size && s.enamelGrade === w.enamelGrade)
-      ?? stock.find((s) => s.label === w.label && s.enamelGrade === w.enamelGrade);
-    const wire: StockWire = row ?? {
-      standard: w.standard ?? 'metric', size: w.size ?? w.label, enamelGrade: w.enamelGrade, label: w.label,
-      bareMm: w.bareMm, overallMm: w.overallMm, areaMm2: w.areaMm2, onHandKg: 0,
-    };
-    return { wire, count: w.count };
-  }).sort((a, b) => b.wire.bareMm - a.wire.bareMm);
+  const parts = original.wires
+    .map((w) => {
+      const row =
+        stock.find((s) => s.standard === w.standard && s.size === w.size && s.enamelGrade === w.enamelGrade) ??
+        stock.find((s) => s.label === w.label && s.enamelGrade === w.enamelGrade);
+      const wire: StockWire = row ?? {
+        standard: w.standard ?? 'metric',
+        size: w.size ?? w.label,
+        enamelGrade: w.enamelGrade,
+        label: w.label,
+        bareMm: w.bareMm,
+        overallMm: w.overallMm,
+        areaMm2: w.areaMm2,
+        onHandKg: 0,
+      };
+      return { wire, count: w.count };
+    })
+    .sort((a, b) => b.wire.bareMm - a.wire.bareMm);
   return {
-    parts, label: partsLabel(parts), areaMm2: parts.reduce((s, p) => s + p.count * p.wire.areaMm2, 0),
-    insulatedAreaMm2: parts.reduce((s, p) => s + p.count * circle(p.wire.overallMm), 0), strands: parts.reduce((s, p) => s + p.count, 0),
+    parts,
+    label: partsLabel(parts),
+    areaMm2: parts.reduce((s, p) => s + p.count * p.wire.areaMm2, 0),
+    insulatedAreaMm2: parts.reduce((s, p) => s + p.count * circle(p.wire.overallMm), 0),
+    strands: parts.reduce((s, p) => s + p.count, 0),
   };
 }
 
@@ -81,7 +105,8 @@ export function narrowingAdvice(request: RedesignRequest): string[] {
   const { target, limits } = request;
   const out: string[] = [];
   if (limits.maxStrandsInHand > 10) out.push(`wires in hand (now ${limits.maxStrandsInHand}; 10 or fewer is usual)`);
-  if (limits.maxWireSizes > 1 && limits.mixedSizeRatioMax > 1.3) out.push(`the mixed-size diameter ratio (now ${limits.mixedSizeRatioMax}; 1.3 is usual)`);
+  if (limits.maxWireSizes > 1 && limits.mixedSizeRatioMax > 1.3)
+    out.push(`the mixed-size diameter ratio (now ${limits.mixedSizeRatioMax}; 1.3 is usual)`);
   if (limits.maxWireSizes === 3 && limits.maxStrandsInHand > 10) out.push('sizes per conductor (now 3; try 2)');
   const dens = Math.max(limits.gap.over, limits.gap.under, limits.tooth.over, limits.tooth.under, limits.yoke.over);
   if (dens > 0.2) out.push(`the flux-density limits (now up to ${pct0(dens)}; 5–10 % is usual)`);
@@ -96,18 +121,29 @@ export function narrowingAdvice(request: RedesignRequest): string[] {
 /** The error of a search that ran past its budget. */
 function tooWide(request: RedesignRequest, budget: number): EngineResult<never> {
   const what = narrowingAdvice(request);
-  return fail('too-wide', `The request is too wide to search in reasonable time (more than ${budget.toLocaleString('en-US')} steps through wire combinations and turn counts).`, `Narrow the request: ${what.join('; ')}.`, what[0]?.startsWith('wires in hand') ? 'limits.maxStrandsInHand' : undefined);
+  return fail(
+    'too-wide',
+    `The request is too wide to search in reasonable time (more than ${budget.toLocaleString('en-US')} steps through wire combinations and turn counts).`,
+    `Narrow the request: ${what.join('; ')}.`,
+    what[0]?.startsWith('wires in hand') ? 'limits.maxStrandsInHand' : undefined,
+  );
 }
 
 /** Searches the candidates for a request (see the file comment). */
-export function searchRedesign(original: RedesignOriginal, request: RedesignRequest, stock: readonly StockWire[], options: { budget?: number } = {}): EngineResult<RedesignSearch> {
+export function searchRedesign(
+  original: RedesignOriginal,
+  request: RedesignRequest,
+  stock: readonly StockWire[],
+  options: { budget?: number } = {},
+): EngineResult<RedesignSearch> {
   const budget = options.budget ?? WORK_BUDGET;
   const checked = checkRedesignInput(original, request);
   if (!checked.ok) return checked;
   const { target, limits } = request;
   const ow = original.winding;
   const old = analyseWinding({ winding: ow, supply: original.supply, core: original.core });
-  if (!old.ok) return fail(old.error.code, `The as-found winding cannot be analysed: ${old.error.message}`, old.error.hint, old.error.field);
+  if (!old.ok)
+    return fail(old.error.code, `The as-found winding cannot be analysed: ${old.error.message}`, old.error.hint, old.error.field);
   const oldKw = old.value.windingFactor;
   const oldNph = old.value.seriesTurnsPerPhase;
   const oldArea = original.wires.reduce((s, w) => s + w.count * w.areaMm2, 0);
@@ -122,14 +158,24 @@ export function searchRedesign(original: RedesignOriginal, request: RedesignRequ
   const minWireMm = Math.min(limits.minWireBareMm, ...original.wires.map((w) => w.bareMm));
   const harmonicLimit = Math.max(limits.harmonicKwMax, harmonicOf(harmonicSummary(old.value)));
   const oldJ = original.ratedCurrentA
-    ? currentDensity({ lineCurrentA: original.ratedCurrentA, connection: ow.connection, parallelPaths: ow.parallelPaths, conductorAreaPerTurnMm2: oldArea }).ampsPerMm2
+    ? currentDensity({
+        lineCurrentA: original.ratedCurrentA,
+        connection: ow.connection,
+        parallelPaths: ow.parallelPaths,
+        conductorAreaPerTurnMm2: oldArea,
+      }).ampsPerMm2
     : null;
 
   const expected = expectedRating(original, target);
   const { families, rejected: layoutRejections, spanNotes } = layoutFamilies(original, target);
   const rejected: RejectedFamily[] = [...layoutRejections];
   const sets = wireGroups(stock, limits);
-  if (sets.wires.length === 0) rejected.push({ family: 'every family', reason: 'The wire stock is empty: add the sizes on hand on the stock page.', binding: 'stock' });
+  if (sets.wires.length === 0)
+    rejected.push({
+      family: 'every family',
+      reason: 'The wire stock is empty: add the sizes on hand on the stock page.',
+      binding: 'stock',
+    });
   const asFoundWires = asFoundWireSet(original, stock);
   const gp = groupPoints(sets, minWireMm);
   // One enumeration per copper-area window: spans and turns that share a current share its sets.
@@ -162,8 +208,13 @@ export function searchRedesign(original: RedesignOriginal, request: RedesignRequ
     const h = harmonicOf(layout.harmonics);
     if (h > harmonicLimit + 1e-9) {
       familiesTried++;
-      rejected.push({ family: describeLayout(layout), reason: `k_w5 ${layout.harmonics.kw5.toFixed(3)} / k_w7 ${layout.harmonics.kw7.toFixed(3)}: the larger, ${h.toFixed(3)}, is over the ${harmonicLimit.toFixed(3)} harmonic limit.`, binding: 'harmonics' });
-      if (layout.asFoundLayout) asFoundReasons.push(`the as-found layout is over the harmonic limit (${h.toFixed(3)} > ${harmonicLimit.toFixed(3)})`);
+      rejected.push({
+        family: describeLayout(layout),
+        reason: `k_w5 ${layout.harmonics.kw5.toFixed(3)} / k_w7 ${layout.harmonics.kw7.toFixed(3)}: the larger, ${h.toFixed(3)}, is over the ${harmonicLimit.toFixed(3)} harmonic limit.`,
+        binding: 'harmonics',
+      });
+      if (layout.asFoundLayout)
+        asFoundReasons.push(`the as-found layout is over the harmonic limit (${h.toFixed(3)} > ${harmonicLimit.toFixed(3)})`);
       continue;
     }
     const paths = target.parallelPaths.length > 0 ? target.parallelPaths : layout.allowedPaths.filter((a) => a <= MAX_DEFAULT_PATHS);
@@ -173,20 +224,34 @@ export function searchRedesign(original: RedesignOriginal, request: RedesignRequ
         const choice: FamilyChoice = { layout, connection, paths: a };
         const family = `${describeLayout(layout)} · ${connection} · ${a} circuit${a === 1 ? '' : 's'}`;
         if (!layout.allowedPaths.includes(a)) {
-          rejected.push({ family, reason: `${a} parallel circuits would not carry identical voltages in this layout; current would circulate (allowed: ${layout.allowedPaths.join(', ')}).`, binding: 'circuits' });
+          rejected.push({
+            family,
+            reason: `${a} parallel circuits would not carry identical voltages in this layout; current would circulate (allowed: ${layout.allowedPaths.join(', ')}).`,
+            binding: 'circuits',
+          });
           continue;
         }
         // Φ ratio at one turn per coil: N_ph = C·N_c/a.
         const vph = connection === 'star' ? vphRatio : vphRatio * Math.sqrt(3);
-        const r1 = vph * (original.supply.frequencyHz / target.frequencyHz) * ((oldNph * oldKw) / ((layout.coilsPerPhase / a) * layout.windingFactor));
+        const r1 =
+          vph *
+          (original.supply.frequencyHz / target.frequencyHz) *
+          ((oldNph * oldKw) / ((layout.coilsPerPhase / a) * layout.windingFactor));
         const range = allowedTurnsRange(r1, poleRatio, limits, LAYOUT_LIMITS.maxTurns);
         if (range.lo > range.hi) {
           turnsChecked++;
           work++;
           const n = bestCompromiseTurns(r1, poleRatio, limits, LAYOUT_LIMITS.maxTurns);
           const why = ratioViolations(ratiosAt(r1, n, poleRatio), limits);
-          rejected.push({ family, reason: `No whole number of turns keeps the flux densities inside the limits: the nearest, ${n} turns per coil, gives ${why.join('; ') || 'densities just outside the limits'}.`, binding: 'flux' });
-          if (layout.asFoundLayout) asFoundReasons.push(`${connection}, ${a} circuit${a === 1 ? '' : 's'}: ${why[0] ?? 'flux densities outside the limits'} at ${n} turns`);
+          rejected.push({
+            family,
+            reason: `No whole number of turns keeps the flux densities inside the limits: the nearest, ${n} turns per coil, gives ${why.join('; ') || 'densities just outside the limits'}.`,
+            binding: 'flux',
+          });
+          if (layout.asFoundLayout)
+            asFoundReasons.push(
+              `${connection}, ${a} circuit${a === 1 ? '' : 's'}: ${why[0] ?? 'flux densities outside the limits'} at ${n} turns`,
+            );
           continue;
         }
         // Current: I_path,new/I_path,old from the expected line current, the connection and the circuits.
@@ -196,9 +261,10 @@ export function searchRedesign(original: RedesignOriginal, request: RedesignRequ
         // I_path,new = J_old·A_old·(path ratio) = J_old·idealArea; it may not exceed the absolute limit.
         const absFloor = oldJ !== null ? (oldJ * idealArea) / limits.currentDensityMaxAPerMm2 : 0;
         const minArea = Math.max(riseFloor, absFloor);
-        const areaWhy = absFloor > riseFloor
-          ? `${minArea.toFixed(3)} mm² per turn (the ${limits.currentDensityMaxAPerMm2} A/mm² current-density limit)`
-          : `${minArea.toFixed(3)} mm² per turn (current density at most ${signedPercent(limits.currentDensityRise)} over the original)`;
+        const areaWhy =
+          absFloor > riseFloor
+            ? `${minArea.toFixed(3)} mm² per turn (the ${limits.currentDensityMaxAPerMm2} A/mm² current-density limit)`
+            : `${minArea.toFixed(3)} mm² per turn (current density at most ${signedPercent(limits.currentDensityRise)} over the original)`;
         const wireFailures: { binding: RejectedFamily['binding']; text: string }[] = [];
         let found = 0;
         for (const turns of turnsToTry(r1, poleRatio, range, TURNS_PER_FAMILY)) {
@@ -226,11 +292,24 @@ export function searchRedesign(original: RedesignOriginal, request: RedesignRequ
             const heavy = window(windowTop, Number.POSITIVE_INFINITY, idealArea);
             if (!heavy) return tooWide(request, budget);
             const far = pickFromWindow(sets, heavy, cap);
-            const lean = [pick.leastFill, far.leastFill].filter((x): x is WireSet => x !== null).sort((p, q) => p.insulatedAreaMm2 - q.insulatedAreaMm2)[0] ?? null;
+            const lean =
+              [pick.leastFill, far.leastFill]
+                .filter((x): x is WireSet => x !== null)
+                .sort((p, q) => p.insulatedAreaMm2 - q.insulatedAreaMm2)[0] ?? null;
             pick = { picks: far.picks, leastFill: lean };
           }
           if (pick.picks.length === 0) {
-            wireFailures.push(wireMisfit(sets, limits, { turns, zs, minArea, areaWhy, fillLimit, gross: original.grossSlotAreaMm2, leastFill: pick.leastFill }));
+            wireFailures.push(
+              wireMisfit(sets, limits, {
+                turns,
+                zs,
+                minArea,
+                areaWhy,
+                fillLimit,
+                gross: original.grossSlotAreaMm2,
+                leastFill: pick.leastFill,
+              }),
+            );
             continue;
           }
           found++;
@@ -263,39 +342,72 @@ export function searchRedesign(original: RedesignOriginal, request: RedesignRequ
     spanNotes,
     expected,
     originalBasis: {
-      seriesTurnsPerPhase: oldNph, windingFactor: oldKw, conductorAreaMm2: oldArea, conductorsPerSlot: oldZs,
-      slotFill: oldFill, slotFillLimit: fillLimit, currentDensityAPerMm2: oldJ,
+      seriesTurnsPerPhase: oldNph,
+      windingFactor: oldKw,
+      conductorAreaMm2: oldArea,
+      conductorsPerSlot: oldZs,
+      slotFill: oldFill,
+      slotFillLimit: fillLimit,
+      currentDensityAPerMm2: oldJ,
     },
   });
 }
 
 /** Why the as-found wires do not fit one winding (null when they do). */
-function asFoundMisfit(w: WireSet, f: { minArea: number; cap: number; zs: number; fillLimit: number; gross: number; areaWhy: string }): string | null {
-  if (w.areaMm2 < f.minArea - 1e-12) return `${w.label} gives ${w.areaMm2.toFixed(3)} mm² per turn; the current needs at least ${f.areaWhy}`;
-  if (w.insulatedAreaMm2 > f.cap + 1e-12) return `${w.label} fills ${pct0((f.zs * w.insulatedAreaMm2) / f.gross)} of the slot (limit ${pct0(f.fillLimit)})`;
+function asFoundMisfit(
+  w: WireSet,
+  f: { minArea: number; cap: number; zs: number; fillLimit: number; gross: number; areaWhy: string },
+): string | null {
+  if (w.areaMm2 < f.minArea - 1e-12)
+    return `${w.label} gives ${w.areaMm2.toFixed(3)} mm² per turn; the current needs at least ${f.areaWhy}`;
+  if (w.insulatedAreaMm2 > f.cap + 1e-12)
+    return `${w.label} fills ${pct0((f.zs * w.insulatedAreaMm2) / f.gross)} of the slot (limit ${pct0(f.fillLimit)})`;
   return null;
 }
 
 /** The sentence for "the as-found wires cannot be kept". */
-function asFoundReason(original: RedesignOriginal, target: RedesignRequest['target'], w: WireSet, families: readonly LayoutFamily[], reasons: readonly string[]): string {
-  if (target.poles !== original.winding.poles) return `The pole count changes (${original.winding.poles} → ${target.poles}): the as-found layout cannot be kept.`;
-  if (!families.some((f) => f.asFoundLayout)) return target.layers !== 'keep' ? 'The request asks for another layout (double-layer lap), so the as-found layout is not tried.' : 'The spans requested are not the as-found spans, so the as-found layout is not tried.';
+function asFoundReason(
+  original: RedesignOriginal,
+  target: RedesignRequest['target'],
+  w: WireSet,
+  families: readonly LayoutFamily[],
+  reasons: readonly string[],
+): string {
+  if (target.poles !== original.winding.poles)
+    return `The pole count changes (${original.winding.poles} → ${target.poles}): the as-found layout cannot be kept.`;
+  if (!families.some((f) => f.asFoundLayout))
+    return target.layers !== 'keep'
+      ? 'The request asks for another layout (double-layer lap), so the as-found layout is not tried.'
+      : 'The spans requested are not the as-found spans, so the as-found layout is not tried.';
   const shown = reasons.slice(0, 4).join('; ');
   return `Keeping ${w.label} on the as-found layout does not meet the limits: ${shown}${reasons.length > 4 ? ` (and ${reasons.length - 4} more)` : ''}.`;
 }
 
 /** Which limit stops every wire set for one winding, with its numbers. */
-function wireMisfit(g: WireGroups, limits: RedesignLimits, f: { turns: number; zs: number; minArea: number; areaWhy: string; fillLimit: number; gross: number; leastFill: WireSet | null }): { binding: RejectedFamily['binding']; text: string } {
+function wireMisfit(
+  g: WireGroups,
+  limits: RedesignLimits,
+  f: { turns: number; zs: number; minArea: number; areaWhy: string; fillLimit: number; gross: number; leastFill: WireSet | null },
+): { binding: RejectedFamily['binding']; text: string } {
   if (f.leastFill) {
     const fill = (f.zs * f.leastFill.insulatedAreaMm2) / f.gross;
-    return { binding: 'slot-fill', text: `at ${f.turns} turns the current needs ${f.areaWhy}; the leanest set from stock that carries it (${f.leastFill.label}, ${f.leastFill.areaMm2.toFixed(3)} mm²) fills ${pct0(fill)} of the slot (limit ${pct0(f.fillLimit)})` };
+    return {
+      binding: 'slot-fill',
+      text: `at ${f.turns} turns the current needs ${f.areaWhy}; the leanest set from stock that carries it (${f.leastFill.label}, ${f.leastFill.areaMm2.toFixed(3)} mm²) fills ${pct0(fill)} of the slot (limit ${pct0(f.fillLimit)})`,
+    };
   }
   const most = largestArea(g);
   if (most < f.minArea) {
     const thick = g.wires[0];
-    return { binding: 'strands', text: `at ${f.turns} turns the current needs ${f.areaWhy}; ${g.maxStrands} wires in hand of the thickest size in stock (${thick?.label ?? '—'}) give only ${most.toFixed(3)} mm² (wires-in-hand limit ${limits.maxStrandsInHand})` };
+    return {
+      binding: 'strands',
+      text: `at ${f.turns} turns the current needs ${f.areaWhy}; ${g.maxStrands} wires in hand of the thickest size in stock (${thick?.label ?? '—'}) give only ${most.toFixed(3)} mm² (wires-in-hand limit ${limits.maxStrandsInHand})`,
+    };
   }
-  return { binding: 'stock-sizes', text: `at ${f.turns} turns no combination of the stock sizes (up to ${g.maxStrands} wires in hand, ${limits.maxWireSizes} size${limits.maxWireSizes === 1 ? '' : 's'}) reaches ${f.areaWhy}` };
+  return {
+    binding: 'stock-sizes',
+    text: `at ${f.turns} turns no combination of the stock sizes (up to ${g.maxStrands} wires in hand, ${limits.maxWireSizes} size${limits.maxWireSizes === 1 ? '' : 's'}) reaches ${f.areaWhy}`,
+  };
 }
 
 interface BuildContext {
@@ -337,10 +449,21 @@ function buildCandidate(x: BuildContext, c: FamilyChoice, turns: number, wires: 
   const keepsAsFoundWire = L.asFoundLayout && oldWires === wires.label;
   const closeness = unforcedDeviation(ratios, poleRatio) + Math.max(0, jRatio - 1);
   const effort = effortItems({
-    circuits: c.paths, originalCircuits: ow.parallelPaths, strands: wires.strands, sizes: wires.parts.length,
+    circuits: c.paths,
+    originalCircuits: ow.parallelPaths,
+    strands: wires.strands,
+    sizes: wires.parts.length,
     thinSizes: wires.parts.filter((p) => p.wire.bareMm < x.minWireMm - 1e-9).length,
-    turnsChanged, connectionChanged: c.connection !== ow.connection, spanChanged: polesKept && !sameSpans, layersChanged: !sameLayers,
-    pitch: L.pitch, layers: L.layers, overPitched: L.overPitched, kw5: L.harmonics.kw5, kw7: L.harmonics.kw7, fractional: L.fractional,
+    turnsChanged,
+    connectionChanged: c.connection !== ow.connection,
+    spanChanged: polesKept && !sameSpans,
+    layersChanged: !sameLayers,
+    pitch: L.pitch,
+    layers: L.layers,
+    overPitched: L.overPitched,
+    kw5: L.harmonics.kw5,
+    kw7: L.harmonics.kw7,
+    fractional: L.fractional,
   });
   const mlt = meanTurnLengthMm(original, L.meanSpan);
   const kg = wireMassKg(wires, L.coilsPerPhase, turns, mlt);
@@ -353,9 +476,15 @@ function buildCandidate(x: BuildContext, c: FamilyChoice, turns: number, wires: 
     key: candidateKey(c, turns, wires),
     rank: 0,
     winding: {
-      slots: ow.slots, poles: Math.round(poleRatio * ow.poles), layers: L.layers, style: L.style,
+      slots: ow.slots,
+      poles: Math.round(poleRatio * ow.poles),
+      layers: L.layers,
+      style: L.style,
       ...(L.singleLayerCoiling ? { singleLayerCoiling: L.singleLayerCoiling } : {}),
-      spans: [...L.spans], turnsPerCoil: L.spans.map(() => turns), parallelPaths: c.paths, connection: c.connection,
+      spans: [...L.spans],
+      turnsPerCoil: L.spans.map(() => turns),
+      parallelPaths: c.paths,
+      connection: c.connection,
     },
     wires,
     seriesTurnsPerPhase: (L.coilsPerPhase * turns) / c.paths,

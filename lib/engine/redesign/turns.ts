@@ -46,7 +46,12 @@ export const unforcedDeviation = (r: DensityRatios, poleRatio: number): number =
   Math.max(Math.abs(r.gap - 1), Math.abs(r.tooth - 1), poleRatio > 1 ? Math.max(0, r.yoke - 1) : Math.abs(r.yoke - 1));
 
 /** The whole-number turns range allowed by every density limit (lo > hi when none). */
-export function allowedTurnsRange(ratioAtOneTurn: number, poleRatio: number, limits: Pick<RedesignLimits, 'gap' | 'tooth' | 'yoke'>, maxTurns: number): { lo: number; hi: number } {
+export function allowedTurnsRange(
+  ratioAtOneTurn: number,
+  poleRatio: number,
+  limits: Pick<RedesignLimits, 'gap' | 'tooth' | 'yoke'>,
+  maxTurns: number,
+): { lo: number; hi: number } {
   let low = 1;
   let high = maxTurns;
   for (const d of DENSITIES) {
@@ -75,7 +80,12 @@ export function turnsToTry(ratioAtOneTurn: number, poleRatio: number, range: { l
 }
 
 /** The turns that come closest to the limits when none fits: the whole numbers around each density's ideal. */
-export function bestCompromiseTurns(ratioAtOneTurn: number, poleRatio: number, limits: Pick<RedesignLimits, 'gap' | 'tooth' | 'yoke'>, maxTurns: number): number {
+export function bestCompromiseTurns(
+  ratioAtOneTurn: number,
+  poleRatio: number,
+  limits: Pick<RedesignLimits, 'gap' | 'tooth' | 'yoke'>,
+  maxTurns: number,
+): number {
   const trial = new Set<number>();
   for (const ideal of [ratioAtOneTurn, ratioAtOneTurn * poleRatio, Math.sqrt(poleRatio) * ratioAtOneTurn])
     for (const n of [Math.floor(ideal), Math.ceil(ideal)]) if (n >= 1 && n <= maxTurns) trial.add(n);

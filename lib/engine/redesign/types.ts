@@ -60,7 +60,16 @@ export interface RedesignOriginal {
   core: CoreGeometry;
   grossSlotAreaMm2: number;
   /** Wires in hand as found (label, diameters, area, count). */
-  wires: { label: string; standard?: WireStandard; size?: string; enamelGrade: EnamelGrade; bareMm: number; overallMm: number; areaMm2: number; count: number }[];
+  wires: {
+    label: string;
+    standard?: WireStandard;
+    size?: string;
+    enamelGrade: EnamelGrade;
+    bareMm: number;
+    overallMm: number;
+    areaMm2: number;
+    count: number;
+  }[];
   meanTurnLengthMm?: number;
   ratedCurrentA?: number;
   ratedOutputKw?: number;

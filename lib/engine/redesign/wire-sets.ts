@@ -23,7 +23,10 @@ export interface WireGroups {
 }
 
 /** The size groups allowed by the limits: every size alone, and pairs and triples of close sizes. */
-export function wireGroups(stock: readonly StockWire[], limits: Pick<RedesignLimits, 'maxStrandsInHand' | 'maxWireSizes' | 'mixedSizeRatioMax'>): WireGroups {
+export function wireGroups(
+  stock: readonly StockWire[],
+  limits: Pick<RedesignLimits, 'maxStrandsInHand' | 'maxWireSizes' | 'mixedSizeRatioMax'>,
+): WireGroups {
   const wires = normaliseStock(stock);
   const maxStrands = Math.max(1, Math.floor(limits.maxStrandsInHand));
   const maxSizes = Math.min(3, Math.max(1, Math.floor(limits.maxWireSizes)), maxStrands);
@@ -78,7 +81,13 @@ export interface WireSetView {
  * visits plus partial counts tried) and whether it stopped at `budget` steps (the caller reports a request
  * too wide). The view's arrays are reused between calls: copy what you keep.
  */
-export function forEachWireSet(g: WireGroups, minArea: number, maxArea: number, visit: (v: WireSetView) => void, budget = Number.POSITIVE_INFINITY): { n: number; steps: number; exhausted: boolean } {
+export function forEachWireSet(
+  g: WireGroups,
+  minArea: number,
+  maxArea: number,
+  visit: (v: WireSetView) => void,
+  budget = Number.POSITIVE_INFINITY,
+): { n: number; steps: number; exhausted: boolean } {
   let n = 0;
   let steps = 0;
   const view: WireSetView = { group: [], counts: [], areaMm2: 0, insulatedAreaMm2: 0, strands: 0 };

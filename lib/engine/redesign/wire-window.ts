@@ -51,24 +51,40 @@ export interface WireWindow {
 }
 
 /** Enumerates the sets with copper area in [minArea, maxArea] once (see the file comment). */
-export function wireWindow(g: WireGroups, groupPoints: Map<number[], number>, minArea: number, maxArea: number, idealArea: number, budget: number): WireWindow {
+export function wireWindow(
+  g: WireGroups,
+  groupPoints: Map<number[], number>,
+  minArea: number,
+  maxArea: number,
+  idealArea: number,
+  budget: number,
+): WireWindow {
   const best: Rec[] = [];
   const closest: Rec[] = [];
   let leastFill: Rec | null = null;
   // One scratch record per window; a set that is kept gets its own copy (the view's arrays are reused).
   const r: Rec = { group: [], counts: [], ins: 0, points: 0, dev: 0 };
-  const { n, steps, exhausted } = forEachWireSet(g, minArea, maxArea, (v: WireSetView) => {
-    const ratio = idealArea / v.areaMm2;
-    r.group = v.group;
-    r.ins = v.insulatedAreaMm2;
-    r.points = (ratio > 1 ? (ratio - 1) / RANKING_POINTS.closenessStep : 0) + (v.strands - 1) * RANKING_POINTS.strand + (groupPoints.get(v.group) ?? 0);
-    r.dev = Math.abs(ratio - 1);
-    let copy: Rec | null = null;
-    const keep = (): Rec => (copy ??= { group: v.group, counts: [...v.counts], ins: r.ins, points: r.points, dev: r.dev });
-    if (!leastFill || r.ins < leastFill.ins - 1e-12) leastFill = keep();
-    offer(best, r, bestAtLeast, keep);
-    offer(closest, r, closestAtLeast, keep);
-  }, budget);
+  const { n, steps, exhausted } = forEachWireSet(
+    g,
+    minArea,
+    maxArea,
+    (v: WireSetView) => {
+      const ratio = idealArea / v.areaMm2;
+      r.group = v.group;
+      r.ins = v.insulatedAreaMm2;
+      r.points =
+        (ratio > 1 ? (ratio - 1) / RANKING_POINTS.closenessStep : 0) +
+        (v.strands - 1) * RANKING_POINTS.strand +
+        (groupPoints.get(v.group) ?? 0);
+      r.dev = Math.abs(ratio - 1);
+      let copy: Rec | null = null;
+      const keep = (): Rec => (copy ??= { group: v.group, counts: [...v.counts], ins: r.ins, points: r.points, dev: r.dev });
+      if (!leastFill || r.ins < leastFill.ins - 1e-12) leastFill = keep();
+      offer(best, r, bestAtLeast, keep);
+      offer(closest, r, closestAtLeast, keep);
+    },
+    budget,
+  );
   return { looked: n, steps, exhausted, leastFill, best, closest };
 }
 
@@ -82,6 +98,8 @@ const fitting = (front: readonly Rec[], cap: number): Rec | null => {
 /** The picks for one slot capacity (insulated area per conductor), and the leanest set that carries the current. */
 export function pickFromWindow(g: WireGroups, w: WireWindow, capInsulated: number): { picks: WireSet[]; leastFill: WireSet | null } {
   const build = (r: Rec | null): WireSet | null => (r ? makeWireSet(g.wires, r.group, r.counts) : null);
-  const picks = [build(fitting(w.best, capInsulated)), build(fitting(w.closest, capInsulated))].filter((s, i, all): s is WireSet => s !== null && all.findIndex((t) => t?.label === s.label) === i);
+  const picks = [build(fitting(w.best, capInsulated)), build(fitting(w.closest, capInsulated))].filter(
+    (s, i, all): s is WireSet => s !== null && all.findIndex((t) => t?.label === s.label) === i,
+  );
   return { picks, leastFill: build(w.leastFill) };
 }

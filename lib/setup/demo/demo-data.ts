@@ -27,7 +27,14 @@ export const DEMO_CUSTOMERS = [
   { company: 'Port Ilsley Marine Services', contact: 'Nadia Corran', phone: '+44 1632 960 559', email: 'workshop@portilsley.example' },
 ] as const;
 
-export const DEMO_MANUFACTURERS = ['Aldwick Electric', 'Brunel & Rook', 'Corvina Motors', 'Deverell Drives', 'Elmstead Machines', 'Fairholm Power'] as const;
+export const DEMO_MANUFACTURERS = [
+  'Aldwick Electric',
+  'Brunel & Rook',
+  'Corvina Motors',
+  'Deverell Drives',
+  'Elmstead Machines',
+  'Fairholm Power',
+] as const;
 
 /** [output kW, line V, Hz, poles, rated rpm, connection, frame] */
 export const DEMO_RATINGS: [number, number, number, number, number, string, string][] = [

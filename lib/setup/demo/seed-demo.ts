@@ -27,10 +27,46 @@ function rng(seed: number) {
 }
 
 const STATUS_SPREAD: JobStatus[] = [
-  'RECEIVED', 'RECEIVED', 'RECEIVED', 'RECEIVED', 'INSPECTION', 'INSPECTION', 'INSPECTION', 'INSPECTION', 'QUOTE_SENT', 'QUOTE_SENT',
-  'QUOTE_SENT', 'CUSTOMER_APPROVED', 'CUSTOMER_APPROVED', 'CUSTOMER_APPROVED', 'WINDING', 'WINDING', 'WINDING', 'WINDING', 'WINDING',
-  'TESTING', 'TESTING', 'TESTING', 'READY', 'READY', 'READY', 'SHIPPED', 'SHIPPED', 'SHIPPED', 'SHIPPED', 'ON_HOLD', 'ON_HOLD',
-  'RETURNED_UNREPAIRED', 'INSPECTION', 'WINDING', 'RECEIVED', 'TESTING', 'QUOTE_SENT', 'READY', 'CUSTOMER_APPROVED', 'WINDING',
+  'RECEIVED',
+  'RECEIVED',
+  'RECEIVED',
+  'RECEIVED',
+  'INSPECTION',
+  'INSPECTION',
+  'INSPECTION',
+  'INSPECTION',
+  'QUOTE_SENT',
+  'QUOTE_SENT',
+  'QUOTE_SENT',
+  'CUSTOMER_APPROVED',
+  'CUSTOMER_APPROVED',
+  'CUSTOMER_APPROVED',
+  'WINDING',
+  'WINDING',
+  'WINDING',
+  'WINDING',
+  'WINDING',
+  'TESTING',
+  'TESTING',
+  'TESTING',
+  'READY',
+  'READY',
+  'READY',
+  'SHIPPED',
+  'SHIPPED',
+  'SHIPPED',
+  'SHIPPED',
+  'ON_HOLD',
+  'ON_HOLD',
+  'RETURNED_UNREPAIRED',
+  'INSPECTION',
+  'WINDING',
+  'RECEIVED',
+  'TESTING',
+  'QUOTE_SENT',
+  'READY',
+  'CUSTOMER_APPROVED',
+  'WINDING',
 ];
 /** Jobs past inspection have had their winding recorded. */
 const SHEET_STATUSES: JobStatus[] = ['QUOTE_SENT', 'CUSTOMER_APPROVED', 'WINDING', 'TESTING', 'READY', 'SHIPPED'];
@@ -91,21 +127,30 @@ async function seedInside(tx: Prisma.TransactionClient, hashes: string[], now: D
     customers.push(
       existing ??
         (await tx.customer.create({
-          data: { company: c.company, phone: c.phone, email: c.email, contacts: { create: { name: c.contact, phone: c.phone, email: c.email } } },
+          data: {
+            company: c.company,
+            phone: c.phone,
+            email: c.email,
+            contacts: { create: { name: c.contact, phone: c.phone, email: c.email } },
+          },
         })),
     );
   }
   const seeded = new Map(
-    (await tx.job.findMany({ where: { number: { gte: FIRST_JOB_NUMBER, lt: FIRST_JOB_NUMBER + STATUS_SPREAD.length } }, select: { id: true, number: true, windingSheet: { select: { id: true } } } }))
-      .map((j) => [j.number, j]),
+    (
+      await tx.job.findMany({
+        where: { number: { gte: FIRST_JOB_NUMBER, lt: FIRST_JOB_NUMBER + STATUS_SPREAD.length } },
+        select: { id: true, number: true, windingSheet: { select: { id: true } } },
+      })
+    ).map((j) => [j.number, j]),
   );
   const day = 86_400_000;
   for (let i = 0; i < STATUS_SPREAD.length; i++) {
     // Every random draw happens whether or not the job exists, so a completed seed equals a fresh one.
     const status = STATUS_SPREAD[i] as JobStatus;
     const [kw, volts, hz, poles, rpm, connection, frame] = DEMO_RATINGS[i % DEMO_RATINGS.length] as (typeof DEMO_RATINGS)[number];
-    const eff = 0.82 + Math.min(kw, 55) / 55 * 0.13;
-    const pf = 0.78 + Math.min(kw, 55) / 55 * 0.08;
+    const eff = 0.82 + (Math.min(kw, 55) / 55) * 0.13;
+    const pf = 0.78 + (Math.min(kw, 55) / 55) * 0.08;
     const amps = Math.round(((kw * 1000) / (Math.sqrt(3) * volts * eff * pf)) * 10) / 10;
     const customer = customers[i % customers.length]!;
     const manufacturer = pick(DEMO_MANUFACTURERS);
@@ -125,7 +170,14 @@ async function seedInside(tx: Prisma.TransactionClient, hashes: string[], now: D
     // An on-hold job was held from QUOTE_SENT; its history says so, and it resumes there.
     const heldFrom: JobStatus | null = status === 'ON_HOLD' ? 'QUOTE_SENT' : null;
     const moves: { from: JobStatus; to: JobStatus }[] =
-      status === 'RECEIVED' ? [] : heldFrom ? [{ from: 'RECEIVED', to: heldFrom }, { from: heldFrom, to: status }] : [{ from: 'RECEIVED', to: status }];
+      status === 'RECEIVED'
+        ? []
+        : heldFrom
+          ? [
+              { from: 'RECEIVED', to: heldFrom },
+              { from: heldFrom, to: status },
+            ]
+          : [{ from: 'RECEIVED', to: status }];
     const model = `${manufacturer.slice(0, 2).toUpperCase()}-${frame}-${poles}P`;
 
     let jobId = seeded.get(number)?.id;
@@ -171,10 +223,21 @@ async function seedInside(tx: Prisma.TransactionClient, hashes: string[], now: D
           assigneeId,
           events: {
             create: [
-              { userId: desk?.id ?? null, at: receivedAt, kind: 'CREATED', toStatus: 'RECEIVED', message: `Job ${number} logged at intake.` },
+              {
+                userId: desk?.id ?? null,
+                at: receivedAt,
+                kind: 'CREATED',
+                toStatus: 'RECEIVED',
+                message: `Job ${number} logged at intake.`,
+              },
               ...moves.map((m, k) => ({
-                userId: moverId, at: at(k + 1), kind: 'STATUS', fromStatus: m.from, toStatus: m.to,
-                message: m.to === 'ON_HOLD' ? 'Demo history: put on hold.' : `Demo history: moved to ${m.to.toLowerCase().replace(/_/g, ' ')}.`,
+                userId: moverId,
+                at: at(k + 1),
+                kind: 'STATUS',
+                fromStatus: m.from,
+                toStatus: m.to,
+                message:
+                  m.to === 'ON_HOLD' ? 'Demo history: put on hold.' : `Demo history: moved to ${m.to.toLowerCase().replace(/_/g, ' ')}.`,
               })),
             ],
           },
@@ -187,8 +250,17 @@ async function seedInside(tx: Prisma.TransactionClient, hashes: string[], now: D
       const savedAt = at(moves.length + 1);
       await tx.windingSheet.create({
         data: {
-          jobId, data: sheet as object, slots: sheet.core.slots, poles: sheet.supply.poles, boreMm: sheet.core.boreMm,
-          coreLengthMm: sheet.core.coreLengthMm, lineVoltageV: volts, frequencyHz: hz, outputKw: kw, manufacturer, model,
+          jobId,
+          data: sheet as object,
+          slots: sheet.core.slots,
+          poles: sheet.supply.poles,
+          boreMm: sheet.core.boreMm,
+          coreLengthMm: sheet.core.coreLengthMm,
+          lineVoltageV: volts,
+          frequencyHz: hz,
+          outputKw: kw,
+          manufacturer,
+          model,
           updatedById: sheetById,
           // Revision 1 in the history, as a sheet saved through the form has.
           revisions: { create: { revision: 1, data: sheet as object, savedById: sheetById, savedAt } },

@@ -44,7 +44,11 @@ describe('the layers', () => {
 });
 
 describe('the tests', () => {
-  const testFiles = [...sourceFiles(join('tests', 'integration')), ...sourceFiles(join('tests', 'e2e')), ...sourceFiles(join('tests', 'support'))];
+  const testFiles = [
+    ...sourceFiles(join('tests', 'integration')),
+    ...sourceFiles(join('tests', 'e2e')),
+    ...sourceFiles(join('tests', 'support')),
+  ];
   it.each(testFiles)('%s shares fixtures through tests/support, not the unit tests', (file) => {
     const src = readFileSync(file, 'utf8');
     expect([...src.matchAll(/from\s+['"]([^'"]*\/unit\/[^'"]*)['"]/g)].map((m) => m[1])).toEqual([]);

@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { windingSheetSchema } from '@/lib/as-found/winding-sheet-schema';
-import { emptySheetForm, savedLengthMemory, switchFormLengths, formToSheetInput, sheetPathToFormPath, sheetToForm } from '@/lib/as-found/as-found-form';
+import {
+  emptySheetForm,
+  savedLengthMemory,
+  switchFormLengths,
+  formToSheetInput,
+  sheetPathToFormPath,
+  sheetToForm,
+} from '@/lib/as-found/as-found-form';
 import { restoreDraftValues } from '@/lib/as-found/draft-values';
 import { prefillFromNameplate } from '@/lib/as-found/prefill';
 import { EXAMPLE_A_SHEET } from '../../support/fixtures/winding-fixtures';
@@ -38,10 +45,17 @@ describe('the sheet form model', () => {
   it('turns coil rows into spans and turns, and blanks into missing optional fields', () => {
     const f = sheetToForm(EXAMPLE_A_SHEET, 'mm');
     f.winding.style = 'concentric';
-    f.winding.coils = [{ span: '11', turns: '20' }, { span: '9', turns: '21' }];
+    f.winding.coils = [
+      { span: '11', turns: '20' },
+      { span: '9', turns: '21' },
+    ];
     f.core.ventDucts = '';
     f.resistance = { readings: ['', '', ''], temperatureC: '', between: 'line-to-line' };
-    const input = formToSheetInput(f, 'mm') as { winding: { spans: unknown; turnsPerCoil: unknown }; core: Record<string, unknown>; resistance?: unknown };
+    const input = formToSheetInput(f, 'mm') as {
+      winding: { spans: unknown; turnsPerCoil: unknown };
+      core: Record<string, unknown>;
+      resistance?: unknown;
+    };
     expect(input.winding.spans).toEqual([11, 9]);
     expect(input.winding.turnsPerCoil).toEqual([20, 21]);
     expect('ventDucts' in input.core).toBe(false);
@@ -49,7 +63,11 @@ describe('the sheet form model', () => {
   });
 
   // Issue 9: a span written the way the label shows it is accepted as well as the number of pitches.
-  it.each([['1–8', 7], ['1-8', 7], ['7', 7]])('reads the span "%s" as %i slot pitches', (text, pitches) => {
+  it.each([
+    ['1–8', 7],
+    ['1-8', 7],
+    ['7', 7],
+  ])('reads the span "%s" as %i slot pitches', (text, pitches) => {
     const f = sheetToForm(EXAMPLE_A_SHEET, 'mm');
     f.winding.coils = [{ span: text as string, turns: '14' }];
     expect((formToSheetInput(f, 'mm') as { winding: { spans: unknown } }).winding.spans).toEqual([pitches]);
@@ -75,7 +93,12 @@ describe('the sheet form model', () => {
   });
 
   it('restores a draft, filling anything missing or misshapen from the blank form', () => {
-    const v = restoreDraftValues({ core: { boreMm: '150', slots: 36 }, winding: { coils: [{ span: '7', turns: 'x' }] }, wires: 'nonsense', notes: 'n' });
+    const v = restoreDraftValues({
+      core: { boreMm: '150', slots: 36 },
+      winding: { coils: [{ span: '7', turns: 'x' }] },
+      wires: 'nonsense',
+      notes: 'n',
+    });
     expect(v.core.boreMm).toBe('150');
     expect(v.core.slots).toBe('');
     expect(v.winding.coils).toEqual([{ span: '7', turns: 'x' }]);
@@ -88,14 +111,30 @@ describe('the sheet form model', () => {
 describe('prefill from the nameplate', () => {
   // docs/engineering/nameplate-and-speed.md: poles from speed, 60 Hz 1750 rpm → 4 poles [derived].
   it('takes voltage, frequency, poles from speed, current, output, connection and class', () => {
-    const f = prefillFromNameplate({ ratedVoltageV: 460, frequencyHz: 60, speedRpm: 1750, currentA: 18.5, outputKw: 11.1855, connection: 'delta', insulationClass: 'f' });
+    const f = prefillFromNameplate({
+      ratedVoltageV: 460,
+      frequencyHz: 60,
+      speedRpm: 1750,
+      currentA: 18.5,
+      outputKw: 11.1855,
+      connection: 'delta',
+      insulationClass: 'f',
+    });
     expect(f.supply).toEqual({ lineVoltageV: '460', frequencyHz: '60', poles: '4', ratedCurrentA: '18.5', ratedOutputKw: '11.186' });
     expect(f.winding.connection).toBe('delta');
     expect(f.insulation.thermalClass).toBe('F');
   });
 
   it('leaves what the plate does not say blank', () => {
-    const f = prefillFromNameplate({ ratedVoltageV: null, frequencyHz: 50, speedRpm: null, currentA: null, outputKw: null, connection: 'star-delta', insulationClass: null });
+    const f = prefillFromNameplate({
+      ratedVoltageV: null,
+      frequencyHz: 50,
+      speedRpm: null,
+      currentA: null,
+      outputKw: null,
+      connection: 'star-delta',
+      insulationClass: null,
+    });
     expect(f.supply.poles).toBe('');
     expect(f.winding.connection).toBe('');
   });

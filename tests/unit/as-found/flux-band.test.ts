@@ -9,19 +9,28 @@ describe('flux density labels show the band the verdict used', () => {
     expect(fluxBandText(1.204, DEFAULT_FLUX_LIMITS.yoke)).toEqual({ verdict: 'in the conservative range', band: '1.2–1.5 T' });
   });
   it('names the band for each verdict', () => {
-    expect(fluxBandText(1.6, DEFAULT_FLUX_LIMITS.yoke)).toEqual({ verdict: 'above conservative', band: 'conservative 1.2–1.5 T; typical up to 1.7 T' });
+    expect(fluxBandText(1.6, DEFAULT_FLUX_LIMITS.yoke)).toEqual({
+      verdict: 'above conservative',
+      band: 'conservative 1.2–1.5 T; typical up to 1.7 T',
+    });
     expect(fluxBandText(1.8, DEFAULT_FLUX_LIMITS.yoke).band).toBe('above the typical 1.4–1.7 T');
     expect(fluxBandText(1.0, DEFAULT_FLUX_LIMITS.yoke).band).toBe('below 1.2 T');
     expect(fluxBandText(0.45, DEFAULT_FLUX_LIMITS.gapAverage)).toEqual({ verdict: 'in the typical range', band: '0.3–0.6 T' });
   });
   it('never says a value is in a band it lies outside [property]', () => {
-    fc.assert(fc.property(fc.double({ min: 0.01, max: 3, noNaN: true }), fc.constantFrom('yoke', 'tooth', 'gapAverage', 'gapPeak') , (tesla, key) => {
-      const r = fluxBandText(tesla, DEFAULT_FLUX_LIMITS[key as keyof typeof DEFAULT_FLUX_LIMITS]);
-      const m = /^(\d+(?:\.\d+)?)–(\d+(?:\.\d+)?) T$/.exec(r.band);
-      if (r.verdict.startsWith('in ') && m) {
-        expect(tesla).toBeGreaterThanOrEqual(Number(m[1]));
-        expect(tesla).toBeLessThanOrEqual(Number(m[2]));
-      }
-    }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0.01, max: 3, noNaN: true }),
+        fc.constantFrom('yoke', 'tooth', 'gapAverage', 'gapPeak'),
+        (tesla, key) => {
+          const r = fluxBandText(tesla, DEFAULT_FLUX_LIMITS[key as keyof typeof DEFAULT_FLUX_LIMITS]);
+          const m = /^(\d+(?:\.\d+)?)–(\d+(?:\.\d+)?) T$/.exec(r.band);
+          if (r.verdict.startsWith('in ') && m) {
+            expect(tesla).toBeGreaterThanOrEqual(Number(m[1]));
+            expect(tesla).toBeLessThanOrEqual(Number(m[2]));
+          }
+        },
+      ),
+    );
   });
 });

@@ -1,6 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { convertTypedLength, lengthToMm, mmToLength, parseTypedNumber, switchTypedLength, typedLengthToMm, type LengthUnit, type TypedLength } from '@/lib/as-found/length-entry';
+import {
+  convertTypedLength,
+  lengthToMm,
+  mmToLength,
+  parseTypedNumber,
+  switchTypedLength,
+  typedLengthToMm,
+  type LengthUnit,
+  type TypedLength,
+} from '@/lib/as-found/length-entry';
 import { parseDecimal } from '@/lib/validation/number-text';
 
 describe('lengths typed in mm or inches, stored in mm', () => {
@@ -72,13 +81,20 @@ describe('the mm/in toggle never changes a stored value (issue 9)', () => {
   });
 
   it('stores what was typed, converted once, after any number of toggles [property]', () => {
-    const typed = fc.tuple(fc.integer({ min: 1, max: 5_000_000 }), fc.integer({ min: 0, max: 4 })).map(([n, d]) => (n / 10 ** d).toString());
+    const typed = fc
+      .tuple(fc.integer({ min: 1, max: 5_000_000 }), fc.integer({ min: 0, max: 4 }))
+      .map(([n, d]) => (n / 10 ** d).toString());
     fc.assert(
-      fc.property(typed, fc.constantFrom<LengthUnit>('mm', 'in'), fc.array(fc.constantFrom<LengthUnit>('mm', 'in'), { maxLength: 8 }), (text, start, path) => {
-        const r = toggle(text, start, path);
-        expect(r.storedMm).toBe(lengthToMm(Number(text), start));
-        if ((path.at(-1) ?? start) === start) expect(r.shown).toBe(text);
-      }),
+      fc.property(
+        typed,
+        fc.constantFrom<LengthUnit>('mm', 'in'),
+        fc.array(fc.constantFrom<LengthUnit>('mm', 'in'), { maxLength: 8 }),
+        (text, start, path) => {
+          const r = toggle(text, start, path);
+          expect(r.storedMm).toBe(lengthToMm(Number(text), start));
+          if ((path.at(-1) ?? start) === start) expect(r.shown).toBe(text);
+        },
+      ),
     );
   });
 

@@ -43,15 +43,19 @@ describe('safeNextPath: after sign-in only paths on the app itself', () => {
     const origin = 'https://shop.example';
     const piece = fc.constantFrom('/', '\\', '\t', '\n', '%2F', '%5C', '%09', 'evil.example', '.', '..', ':', '@', '?', '#', 'x');
     fc.assert(
-      fc.property(fc.array(piece, { maxLength: 12 }).map((a) => a.join('')), fc.string({ maxLength: 30 }), (built, random) => {
-        for (const next of [built, `/${built}`, random, `/${random}`]) {
-          const out = safeNextPath(next);
-          expect(out.startsWith('/')).toBe(true);
-          expect(new URL(out, origin).origin).toBe(origin);
-          // resolving twice changes nothing: the browser and the server read the same path
-          expect(safeNextPath(out)).toBe(out);
-        }
-      }),
+      fc.property(
+        fc.array(piece, { maxLength: 12 }).map((a) => a.join('')),
+        fc.string({ maxLength: 30 }),
+        (built, random) => {
+          for (const next of [built, `/${built}`, random, `/${random}`]) {
+            const out = safeNextPath(next);
+            expect(out.startsWith('/')).toBe(true);
+            expect(new URL(out, origin).origin).toBe(origin);
+            // resolving twice changes nothing: the browser and the server read the same path
+            expect(safeNextPath(out)).toBe(out);
+          }
+        },
+      ),
       { numRuns: 2000 },
     );
   });

@@ -3,16 +3,40 @@ import { buildBenchPack, type BenchPackInput } from '@/lib/bench-pack/bench-pack
 import { connectionDiagram } from '@/lib/bench-pack/connection-diagram';
 import type { WindingSpec } from '@/lib/engine/winding-layout';
 
-const LAP: WindingSpec = { slots: 36, poles: 4, layers: 2, style: 'lap', spans: [7], turnsPerCoil: [14], parallelPaths: 1, connection: 'star' };
+const LAP: WindingSpec = {
+  slots: 36,
+  poles: 4,
+  layers: 2,
+  style: 'lap',
+  spans: [7],
+  turnsPerCoil: [14],
+  parallelPaths: 1,
+  connection: 'star',
+};
 
 function input(over: Partial<BenchPackInput> = {}): BenchPackInput {
   return {
     job: { number: 1, customer: 'C', motor: 'M' },
-    basis: { kind: 'redesign', revision: 2, approvedBy: 'E', approvedAt: new Date('2026-11-30T10:00:00Z'), note: 'ok', current: true, currentRevision: 2 },
-    supply: { lineVoltageV: 400, frequencyHz: 50 }, winding: LAP, core: { boreMm: 150, coreLengthMm: 120, slotDepthMm: 20, slots: 36 },
+    basis: {
+      kind: 'redesign',
+      revision: 2,
+      approvedBy: 'E',
+      approvedAt: new Date('2026-11-30T10:00:00Z'),
+      note: 'ok',
+      current: true,
+      currentRevision: 2,
+    },
+    supply: { lineVoltageV: 400, frequencyHz: 50 },
+    winding: LAP,
+    core: { boreMm: 150, coreLengthMm: 120, slotDepthMm: 20, slots: 36 },
     oldCoils: { spans: [7], turnsPerCoil: [14], meanTurnLengthMm: 560 },
     wires: [{ label: '0.850 mm', enamelGrade: 2, count: 2, areaMm2: (Math.PI / 4) * 0.85 ** 2, onHandKg: 3 }],
-    insulation: [], cautions: ['Redesign caution.'], wireAllowance: 0.1, marking: 'iec', leads: 6, ...over,
+    insulation: [],
+    cautions: ['Redesign caution.'],
+    wireAllowance: 0.1,
+    marking: 'iec',
+    leads: 6,
+    ...over,
   };
 }
 
@@ -33,7 +57,9 @@ describe('the bench pack, assembled', () => {
   });
 
   it('a superseded revision says so in the approval block', () => {
-    const d = built({ basis: { kind: 'redesign', revision: 1, approvedBy: 'E', approvedAt: new Date(), note: '', current: false, currentRevision: 3 } });
+    const d = built({
+      basis: { kind: 'redesign', revision: 1, approvedBy: 'E', approvedAt: new Date(), note: '', current: false, currentRevision: 3 },
+    });
     expect(d.approval[0]?.value).toContain('SUPERSEDED by revision 3');
   });
 
@@ -59,6 +85,8 @@ describe('the bench pack, assembled', () => {
     const labels = shapes.flatMap((s) => (s.kind === 'text' && /· pole/.test(s.text) ? [s.text.split(' ')[0]] : []));
     expect(labels.sort()).toEqual(d.groups.map((g) => g.label).sort());
     expect(shapes.filter((s) => s.kind === 'arrow')).toHaveLength(d.groups.length);
-    expect(shapes.filter((s) => s.kind === 'text' && s.text === 'reversed')).toHaveLength(d.groups.filter((g) => g.sense === 'reversed').length);
+    expect(shapes.filter((s) => s.kind === 'text' && s.text === 'reversed')).toHaveLength(
+      d.groups.filter((g) => g.sense === 'reversed').length,
+    );
   });
 });

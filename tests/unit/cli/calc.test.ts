@@ -93,7 +93,11 @@ describe('calc sheet', { timeout: 30_000 }, () => {
   it.each([
     { name: 'a missing file', path: () => join(dir, 'nope.json'), text: /cannot read/ },
     { name: 'bad JSON', path: () => file('c.json', '{ nope'), text: /not valid JSON/ },
-    { name: 'a sheet with problems', path: () => file('d.json', exported.replace('"boreMm":150', '"boreMm":-150')), text: /sheet\.core\.boreMm: Bore must be more than 0 mm/ },
+    {
+      name: 'a sheet with problems',
+      path: () => file('d.json', exported.replace('"boreMm":150', '"boreMm":-150')),
+      text: /sheet\.core\.boreMm: Bore must be more than 0 mm/,
+    },
     { name: 'another file format', path: () => file('e.json', JSON.stringify({ format: 'x', version: 1 })), text: /format/ },
   ])('exits 2 with one line on stderr for $name', ({ path, text }) => {
     const r = calc('sheet', path());
@@ -108,7 +112,12 @@ describe('calc rescale', { timeout: 30_000 }, () => {
 
   // Ratio checks on example A, ±0.001 [derived, docs/engineering/redesign.md].
   it.each([
-    { name: '400 V Y 50 Hz → 460 V Y 60 Hz, same winding', extra: ['--to-voltage', '460', '--to-frequency', '60'], ratio: 0.9583, verdict: 'ok' },
+    {
+      name: '400 V Y 50 Hz → 460 V Y 60 Hz, same winding',
+      extra: ['--to-voltage', '460', '--to-frequency', '60'],
+      ratio: 0.9583,
+      verdict: 'ok',
+    },
     { name: 'Y → Δ at 400 V, same winding', extra: ['--to-connection', 'delta'], ratio: 1.7321, verdict: 'over-fluxed' },
     { name: 'Y → Δ with N_c 14 → 24', extra: ['--to-connection', 'delta', '--to-turns', '24'], ratio: 1.0104, verdict: 'ok' },
     { name: '50 → 60 Hz at 400 V with N_c 14 → 12', extra: ['--to-frequency', '60', '--to-turns', '12'], ratio: 0.9722, verdict: 'ok' },

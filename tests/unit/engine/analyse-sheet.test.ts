@@ -24,7 +24,10 @@ describe('analyseSheet on example A as a data sheet', () => {
   it('compares the readings with the prediction and judges their unbalance (ANSI/EASA AR100-2020)', () => {
     const m = a.resistance?.measured;
     expect(m?.phaseOhm20).toBeCloseTo(2.86 / 2, 12);
-    expect(m?.differencePercent).toBeCloseTo(((1.43 - (a.resistance?.predictedPhaseOhm20 ?? NaN)) / (a.resistance?.predictedPhaseOhm20 ?? NaN)) * 100, 9);
+    expect(m?.differencePercent).toBeCloseTo(
+      ((1.43 - (a.resistance?.predictedPhaseOhm20 ?? NaN)) / (a.resistance?.predictedPhaseOhm20 ?? NaN)) * 100,
+      9,
+    );
     expect(m?.unbalance.pass).toBe(true);
   });
 
@@ -42,7 +45,10 @@ describe('analyseSheet on example A as a data sheet', () => {
   it('gives current density in A/mm² and CM/A = 1973.5/J, beside the textbook ranges', () => {
     const j = a.currentDensity;
     expect((j?.circularMilsPerAmp ?? NaN) * (j?.ampsPerMm2 ?? NaN)).toBeCloseTo(1973.5, 1);
-    expect(j?.typical.map((t) => [t.minAPerMm2, t.maxAPerMm2])).toEqual([[3, 5], [3, 8]]);
+    expect(j?.typical.map((t) => [t.minAPerMm2, t.maxAPerMm2])).toEqual([
+      [3, 5],
+      [3, 8],
+    ]);
     expect(j?.typical.map((t) => t.source).join(' ')).toMatch(/Sawhney.*Pyrhönen/);
   });
 
@@ -54,7 +60,10 @@ describe('analyseSheet on example A as a data sheet', () => {
   });
 
   it('finds a resistance unbalance over the limit', () => {
-    const sheet = { ...EXAMPLE_A_SHEET, resistance: { readings: [2.7, 2.86, 2.9] as [number, number, number], temperatureC: 20, between: 'line-to-line' as const } };
+    const sheet = {
+      ...EXAMPLE_A_SHEET,
+      resistance: { readings: [2.7, 2.86, 2.9] as [number, number, number], temperatureC: 20, between: 'line-to-line' as const },
+    };
     expect(sheetFindings(sheet, value(analyseSheet(sheet))).map((f) => f.id)).toContain('resistance-unbalance');
   });
 

@@ -1,10 +1,22 @@
 import { describe, expect, it } from 'vitest';
 import { analyseWinding, type AnalyseWindingInput } from '@/lib/engine/analyse-winding';
 import type { WindingSpec } from '@/lib/engine/winding-layout';
-import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, singleLayer, value } from '../../support/fixtures/winding-fixtures';
+import {
+  EXAMPLE_A_CORE,
+  EXAMPLE_A_SPEC,
+  EXAMPLE_A_SUPPLY,
+  errorOf,
+  lap,
+  layoutOf,
+  singleLayer,
+  value,
+} from '../../support/fixtures/winding-fixtures';
 
 const input = (over: Partial<AnalyseWindingInput> = {}): AnalyseWindingInput => ({
-  winding: EXAMPLE_A_SPEC, supply: EXAMPLE_A_SUPPLY, core: EXAMPLE_A_CORE, ...over,
+  winding: EXAMPLE_A_SPEC,
+  supply: EXAMPLE_A_SUPPLY,
+  core: EXAMPLE_A_CORE,
+  ...over,
 });
 
 describe('analyseWinding on worked example A (docs/engineering/winding-factor.md and flux-density.md, [derived])', () => {
@@ -78,8 +90,16 @@ describe('analyseWinding findings and errors', () => {
 
 describe('closed-form cross-check by winding style (docs/engineering/winding-factor.md)', () => {
   it.each([
-    ['double-layer concentric 9, 7, 5 (coils on one centre line) [derived]', lap(36, 4, 7, { style: 'concentric', spans: [9, 7, 5], turnsPerCoil: [10, 10, 10] }), 25],
-    ['double-layer concentric 9, 9, 6 (no common centre): no closed form', lap(36, 4, 7, { style: 'concentric', spans: [9, 9, 6], turnsPerCoil: [10, 10, 10] }), 0],
+    [
+      'double-layer concentric 9, 7, 5 (coils on one centre line) [derived]',
+      lap(36, 4, 7, { style: 'concentric', spans: [9, 7, 5], turnsPerCoil: [10, 10, 10] }),
+      25,
+    ],
+    [
+      'double-layer concentric 9, 9, 6 (no common centre): no closed form',
+      lap(36, 4, 7, { style: 'concentric', spans: [9, 9, 6], turnsPerCoil: [10, 10, 10] }),
+      0,
+    ],
     ['single-layer concentric, k_w = k_d [derived]', singleLayer(36, 4, [11, 9, 7]), 25],
   ] as [string, WindingSpec, number][])('%s', (_name, winding, count) => {
     const a = value(analyseWinding({ winding, supply: EXAMPLE_A_SUPPLY }));

@@ -59,13 +59,31 @@ describe('finite outputs for finite positive inputs', () => {
   it('resistance, current density and slot fill stay finite', () => {
     fc.assert(
       fc.property(count, count, pos, count, pos, count, temp, (c, n, mlt, a, area, s, t) => {
-        const r = phaseResistanceOhm({ coilsPerPhase: c, turnsPerCoil: n, meanTurnLengthM: mlt, parallelPaths: a, strands: [{ areaMm2: area, count: s }], temperatureC: t });
+        const r = phaseResistanceOhm({
+          coilsPerPhase: c,
+          turnsPerCoil: n,
+          meanTurnLengthM: mlt,
+          parallelPaths: a,
+          strands: [{ areaMm2: area, count: s }],
+          temperatureC: t,
+        });
         expect(Number.isFinite(r)).toBe(true);
         expect(Number.isFinite(lineToLineFromPhaseOhm(r, 'delta'))).toBe(true);
         expect(Number.isFinite(correctResistanceOhm(r, t, 75))).toBe(true);
         expect(Number.isFinite(compareResistance(r, mlt))).toBe(true);
-        expect(allFinite(currentDensity({ lineCurrentA: mlt, connection: 'delta', parallelPaths: a, conductorAreaPerTurnMm2: area }))).toBe(true);
-        expect(allFinite(slotFill({ conductorsPerSlot: n, strands: [{ bareDiameterMm: area, overallDiameterMm: area * 1.1, count: s }], grossSlotAreaMm2: mlt, netSlotAreaMm2: mlt / 2 }))).toBe(true);
+        expect(allFinite(currentDensity({ lineCurrentA: mlt, connection: 'delta', parallelPaths: a, conductorAreaPerTurnMm2: area }))).toBe(
+          true,
+        );
+        expect(
+          allFinite(
+            slotFill({
+              conductorsPerSlot: n,
+              strands: [{ bareDiameterMm: area, overallDiameterMm: area * 1.1, count: s }],
+              grossSlotAreaMm2: mlt,
+              netSlotAreaMm2: mlt / 2,
+            }),
+          ),
+        ).toBe(true);
         expect(allFinite(resistanceUnbalance([r, mlt, area]))).toBe(true);
       }),
     );
@@ -104,10 +122,21 @@ describe('EngineResult functions never throw on random input', () => {
   it('resistance, current density and slot geometry', () => {
     fc.assert(
       fc.property(anyNumber, anyNumber, anyNumber, anyNumber, anyNumber, fc.boolean(), (a, b, c, d, e, round) => {
-        expectSound(phaseResistance({ coilsPerPhase: a, turnsPerCoil: b, meanTurnLengthM: c, parallelPaths: d, strands: [{ areaMm2: e, count: a }], temperatureC: b }));
+        expectSound(
+          phaseResistance({
+            coilsPerPhase: a,
+            turnsPerCoil: b,
+            meanTurnLengthM: c,
+            parallelPaths: d,
+            strands: [{ areaMm2: e, count: a }],
+            temperatureC: b,
+          }),
+        );
         expectSound(currentDensityChecked({ lineCurrentA: a, connection: 'star', parallelPaths: b, conductorAreaPerTurnMm2: c }));
         expectSound(grossSlotAreaMm2({ depthMm: a, topWidthMm: b, bottomWidthMm: c, roundBottom: round }));
-        expectSound(netSlotAreaMm2({ depthMm: a, topWidthMm: b, bottomWidthMm: c, roundBottom: round }, { linerThicknessMm: d, wedgeDepthMm: e }));
+        expectSound(
+          netSlotAreaMm2({ depthMm: a, topWidthMm: b, bottomWidthMm: c, roundBottom: round }, { linerThicknessMm: d, wedgeDepthMm: e }),
+        );
         expectSound(resistanceUnbalanceVerdict([a, b, c], 'random'));
       }),
     );

@@ -1,11 +1,28 @@
 import { describe, expect, it } from 'vitest';
 import { analyseWinding } from '@/lib/engine/analyse-winding';
 import {
-  DEFAULT_FLUX_LIMITS, EMF_CONSTANT, fluxAnalysis, fluxDensities, judgeFlux, phaseVoltage, seriesTurnsFromCoils, seriesTurnsPerPhase,
+  DEFAULT_FLUX_LIMITS,
+  EMF_CONSTANT,
+  fluxAnalysis,
+  fluxDensities,
+  judgeFlux,
+  phaseVoltage,
+  seriesTurnsFromCoils,
+  seriesTurnsPerPhase,
   type FluxInput,
 } from '@/lib/engine/flux';
 import { KILOLINES_PER_IN2_PER_TESLA, teslaToKilolinesPerIn2 } from '@/lib/engine/units';
-import { EXAMPLE_A_CORE, EXAMPLE_A_SPEC, EXAMPLE_A_SUPPLY, errorOf, lap, layoutOf, rel, singleLayer, value } from '../../support/fixtures/winding-fixtures';
+import {
+  EXAMPLE_A_CORE,
+  EXAMPLE_A_SPEC,
+  EXAMPLE_A_SUPPLY,
+  errorOf,
+  lap,
+  layoutOf,
+  rel,
+  singleLayer,
+  value,
+} from '../../support/fixtures/winding-fixtures';
 
 const exampleA = () => value(analyseWinding({ winding: EXAMPLE_A_SPEC, supply: EXAMPLE_A_SUPPLY, core: EXAMPLE_A_CORE }));
 
@@ -101,13 +118,23 @@ describe('flux limits and verdicts', () => {
 
   it('takes shop limits instead of the defaults', () => {
     const tight = { ...DEFAULT_FLUX_LIMITS, yoke: { typical: { low: 0.5, high: 1.1 } } };
-    const r = value(analyseWinding({ winding: EXAMPLE_A_SPEC, supply: EXAMPLE_A_SUPPLY, core: EXAMPLE_A_CORE, options: { limits: tight } }));
+    const r = value(
+      analyseWinding({ winding: EXAMPLE_A_SPEC, supply: EXAMPLE_A_SUPPLY, core: EXAMPLE_A_CORE, options: { limits: tight } }),
+    );
     expect(r.flux?.yoke.verdict).toBe('high');
     expect(r.warnings.some((w) => w.startsWith('Yoke'))).toBe(true);
   });
 
   it('scales flux by the air-gap EMF fraction when given (stator drop, [common practice] 0.95–0.98)', () => {
-    const base: FluxInput = { core: EXAMPLE_A_CORE, poles: 4, lineVoltageV: 400, frequencyHz: 50, connection: 'star', seriesTurnsPerPhase: 168, windingFactor: 0.9019 };
+    const base: FluxInput = {
+      core: EXAMPLE_A_CORE,
+      poles: 4,
+      lineVoltageV: 400,
+      frequencyHz: 50,
+      connection: 'star',
+      seriesTurnsPerPhase: 168,
+      windingFactor: 0.9019,
+    };
     const full = value(fluxAnalysis(base));
     const dropped = value(fluxAnalysis({ ...base, emfFraction: 0.97 }));
     expect(dropped.fluxPerPoleWb / full.fluxPerPoleWb).toBeCloseTo(0.97, 12);
@@ -115,7 +142,15 @@ describe('flux limits and verdicts', () => {
   });
 
   it('subtracts vent ducts from the iron length for teeth and yoke', () => {
-    const base: FluxInput = { core: EXAMPLE_A_CORE, poles: 4, lineVoltageV: 400, frequencyHz: 50, connection: 'star', seriesTurnsPerPhase: 168, windingFactor: 0.9019 };
+    const base: FluxInput = {
+      core: EXAMPLE_A_CORE,
+      poles: 4,
+      lineVoltageV: 400,
+      frequencyHz: 50,
+      connection: 'star',
+      seriesTurnsPerPhase: 168,
+      windingFactor: 0.9019,
+    };
     const ducted = value(fluxAnalysis({ ...base, core: { ...EXAMPLE_A_CORE, ventDucts: 2, ventDuctWidthM: 0.01 } }));
     const plain = value(fluxAnalysis(base));
     expect(ducted.yoke.tesla / plain.yoke.tesla).toBeCloseTo(0.12 / 0.1, 12);
@@ -128,7 +163,17 @@ describe('flux limits and verdicts', () => {
     { name: 'no back iron', core: { slotDepthM: 0.05 }, field: 'core.slotDepthMm' },
     { name: 'ducts longer than the core', core: { ventDucts: 20, ventDuctWidthM: 0.01 }, field: 'core.ventDucts' },
   ])('rejects $name at $field', ({ core, field }) => {
-    const e = errorOf(fluxAnalysis({ core: { ...EXAMPLE_A_CORE, ...core }, poles: 4, lineVoltageV: 400, frequencyHz: 50, connection: 'star', seriesTurnsPerPhase: 168, windingFactor: 0.9 }));
+    const e = errorOf(
+      fluxAnalysis({
+        core: { ...EXAMPLE_A_CORE, ...core },
+        poles: 4,
+        lineVoltageV: 400,
+        frequencyHz: 50,
+        connection: 'star',
+        seriesTurnsPerPhase: 168,
+        windingFactor: 0.9,
+      }),
+    );
     expect(e.code).toBe('invalid-input');
     expect(e.field).toBe(field);
   });

@@ -69,7 +69,9 @@ describe('IEEE 43 insulation resistance', () => {
 
   it('refuses a negative or missing reading', () => {
     expect(insulationResistanceVerdict({ ir1MinMOhm: -1, temperatureC: 20, category: 'older', ratedLineVoltageV: 460 }).ok).toBe(false);
-    expect(insulationResistanceVerdict({ ir1MinMOhm: Number.NaN, temperatureC: 20, category: 'older', ratedLineVoltageV: 460 }).ok).toBe(false);
+    expect(insulationResistanceVerdict({ ir1MinMOhm: Number.NaN, temperatureC: 20, category: 'older', ratedLineVoltageV: 460 }).ok).toBe(
+      false,
+    );
   });
 
   it('raises IR towards 40 °C from below and lowers it from above', () => {

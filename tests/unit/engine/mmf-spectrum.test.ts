@@ -33,7 +33,7 @@ describe('balanced three-phase MMF (docs/engineering/winding-factor.md, [derived
     const kw = new Map(harmonicWindingFactors(layout, 25).map((f) => [f.order, f.kw]));
     const kw1 = kw.get(1) ?? NaN;
     for (const h of mmfSpectrum(layout, { frequencyHz: 50 }, 25).harmonics) {
-      const expected = ((kw.get(h.order) ?? NaN) / h.order) / kw1;
+      const expected = (kw.get(h.order) ?? NaN) / h.order / kw1;
       if (h.direction === 'cancelled') expect(h.relativeAmplitude).toBe(0);
       else expect(h.relativeAmplitude).toBeCloseTo(expected, 12);
       expect(h.singlePhaseRelative).toBeCloseTo(expected, 12);

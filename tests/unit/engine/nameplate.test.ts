@@ -15,10 +15,25 @@ import {
 describe('NEMA locked-rotor code letters', () => {
   // MG 1 10.37.2: kVA/hp, lower bound included, upper bound not.
   it.each([
-    ['A', 0, 3.15], ['B', 3.15, 3.55], ['C', 3.55, 4.0], ['D', 4.0, 4.5], ['E', 4.5, 5.0], ['F', 5.0, 5.6],
-    ['G', 5.6, 6.3], ['H', 6.3, 7.1], ['J', 7.1, 8.0], ['K', 8.0, 9.0], ['L', 9.0, 10.0], ['M', 10.0, 11.2],
-    ['N', 11.2, 12.5], ['P', 12.5, 14.0], ['R', 14.0, 16.0], ['S', 16.0, 18.0], ['T', 18.0, 20.0],
-    ['U', 20.0, 22.4], ['V', 22.4, null],
+    ['A', 0, 3.15],
+    ['B', 3.15, 3.55],
+    ['C', 3.55, 4.0],
+    ['D', 4.0, 4.5],
+    ['E', 4.5, 5.0],
+    ['F', 5.0, 5.6],
+    ['G', 5.6, 6.3],
+    ['H', 6.3, 7.1],
+    ['J', 7.1, 8.0],
+    ['K', 8.0, 9.0],
+    ['L', 9.0, 10.0],
+    ['M', 10.0, 11.2],
+    ['N', 11.2, 12.5],
+    ['P', 12.5, 14.0],
+    ['R', 14.0, 16.0],
+    ['S', 16.0, 18.0],
+    ['T', 18.0, 20.0],
+    ['U', 20.0, 22.4],
+    ['V', 22.4, null],
   ] as const)('%s covers %f to %s kVA/hp', (letter, min, max) => {
     expect(codeLetterRange(letter)).toEqual({ minKvaPerHp: min, maxKvaPerHp: max }); // MG 1 10.37.2
     expect(codeLetterForKvaPerHp(min)).toEqual({ ok: true, value: letter }); // MG 1 10.37.2

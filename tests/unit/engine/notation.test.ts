@@ -12,7 +12,13 @@ describe('winding notation', () => {
   });
 
   it.each([
-    ['7', 7], ['1–8', 7], ['1-8', 7], [' 1 - 8 ', 7], ['1 to 8', 7], ['3–10', 7], ['1—9', 8],
+    ['7', 7],
+    ['1–8', 7],
+    ['1-8', 7],
+    [' 1 - 8 ', 7],
+    ['1 to 8', 7],
+    ['3–10', 7],
+    ['1—9', 8],
   ])('reads "%s" as %i slot pitches', (text, pitches) => {
     expect(parseSpan(text)).toBe(pitches);
   });

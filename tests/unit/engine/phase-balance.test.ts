@@ -9,8 +9,12 @@ const balanceOf = (t: SlotTable) => phaseBalance(new SlotStar(t).phasors(t.poles
 // Source: docs/engineering/winding-factor.md, slot-star sums prove balance (B and C at ±120° from A, equal magnitude) [derived].
 describe('phase balance from the slot-star sums (docs/engineering/winding-factor.md, [derived])', () => {
   it.each([
-    ['36/4 lap', lap(36, 4, 7)], ['30/4 lap (q = 5/2)', lap(30, 4, 7)], ['27/4 lap (q = 9/4)', lap(27, 4, 6)],
-    ['42/4 lap (q = 7/2)', lap(42, 4, 9)], ['36/4 single layer', singleLayer(36, 4, [11, 9, 7])], ['96/4 lap', lap(96, 4, 20)],
+    ['36/4 lap', lap(36, 4, 7)],
+    ['30/4 lap (q = 5/2)', lap(30, 4, 7)],
+    ['27/4 lap (q = 9/4)', lap(27, 4, 6)],
+    ['42/4 lap (q = 7/2)', lap(42, 4, 9)],
+    ['36/4 single layer', singleLayer(36, 4, [11, 9, 7])],
+    ['96/4 lap', lap(96, 4, 20)],
   ] as [string, WindingSpec][])('%s is balanced: equal magnitudes, 120° apart', (_n, spec) => {
     const b = balanceOf(layoutOf(spec));
     expect(b.verdict).toBe('balanced');
@@ -23,7 +27,10 @@ describe('phase balance from the slot-star sums (docs/engineering/winding-factor
 
   it('reports sequence ACB when the winder labels B and C the other way round', () => {
     const t = layoutOf(lap(36, 4, 7));
-    const swapped = { ...t, sides: t.sides.map((s) => ({ ...s, phase: s.phase === 'B' ? ('C' as const) : s.phase === 'C' ? ('B' as const) : s.phase })) };
+    const swapped = {
+      ...t,
+      sides: t.sides.map((s) => ({ ...s, phase: s.phase === 'B' ? ('C' as const) : s.phase === 'C' ? ('B' as const) : s.phase })),
+    };
     expect(balanceOf(t).sequence).toBe('ABC');
     expect(balanceOf(swapped).sequence).toBe('ACB');
     expect(balanceOf(swapped).verdict).toBe('balanced');

@@ -26,7 +26,13 @@ describe('redesign search invariants (fast-check)', { timeout: 120_000 }, () => 
     fc.assert(
       fc.property(target, limits, (t, l) => {
         const d = { over: l.over, under: l.under };
-        const r = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor(t, { gap: d, tooth: d, yoke: d, slotFillMax: l.slotFillMax, currentDensityRise: l.currentDensityRise }), METRIC_STOCK));
+        const r = value(
+          searchRedesign(
+            EXAMPLE_A_ORIGINAL,
+            requestFor(t, { gap: d, tooth: d, yoke: d, slotFillMax: l.slotFillMax, currentDensityRise: l.currentDensityRise }),
+            METRIC_STOCK,
+          ),
+        );
         for (const c of r.candidates) {
           for (const k of ['gap', 'tooth', 'yoke'] as const) {
             expect(c.ratios[k]).toBeLessThanOrEqual(1 + l.over + 1e-9);
@@ -44,7 +50,13 @@ describe('redesign search invariants (fast-check)', { timeout: 120_000 }, () => 
   it('more turns never raise the flux: within one family the flux ratio falls as turns rise', () => {
     fc.assert(
       fc.property(target, (t) => {
-        const r = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor(t, { gap: { over: 0.1, under: 0.2 }, tooth: { over: 0.1, under: 0.2 }, yoke: { over: 0.1, under: 0.2 } }), METRIC_STOCK));
+        const r = value(
+          searchRedesign(
+            EXAMPLE_A_ORIGINAL,
+            requestFor(t, { gap: { over: 0.1, under: 0.2 }, tooth: { over: 0.1, under: 0.2 }, yoke: { over: 0.1, under: 0.2 } }),
+            METRIC_STOCK,
+          ),
+        );
         const byFamily = new Map<string, { turns: number; flux: number }[]>();
         for (const c of r.candidates) {
           const w = c.winding;
@@ -67,7 +79,9 @@ describe('redesign search invariants (fast-check)', { timeout: 120_000 }, () => 
   it('ranking is deterministic: the same request in any stock order gives the same candidates in the same order', () => {
     fc.assert(
       fc.property(target, fc.array(fc.nat(), { minLength: METRIC_STOCK.length, maxLength: METRIC_STOCK.length }), (t, keys) => {
-        const shuffled = METRIC_STOCK.map((w, i) => ({ w, k: keys[i] ?? 0 })).sort((a, b) => a.k - b.k).map((x) => x.w);
+        const shuffled = METRIC_STOCK.map((w, i) => ({ w, k: keys[i] ?? 0 }))
+          .sort((a, b) => a.k - b.k)
+          .map((x) => x.w);
         const a = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor(t), METRIC_STOCK));
         const b = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor(t), shuffled));
         expect(b.candidates.map((c) => c.key)).toEqual(a.candidates.map((c) => c.key));
@@ -81,7 +95,16 @@ describe('redesign search invariants (fast-check)', { timeout: 120_000 }, () => 
     fc.assert(
       fc.property(target, limits, (t, l) => {
         const d = { over: l.over, under: l.under };
-        const r = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor({ ...t, poles: 4 }, { gap: d, tooth: d, yoke: d, slotFillMax: l.slotFillMax, currentDensityRise: l.currentDensityRise }), METRIC_STOCK));
+        const r = value(
+          searchRedesign(
+            EXAMPLE_A_ORIGINAL,
+            requestFor(
+              { ...t, poles: 4 },
+              { gap: d, tooth: d, yoke: d, slotFillMax: l.slotFillMax, currentDensityRise: l.currentDensityRise },
+            ),
+            METRIC_STOCK,
+          ),
+        );
         const keeps = r.candidates.filter((c) => c.keepsAsFoundWire);
         if (keeps.length > 0) {
           expect(r.candidates[0]?.keepsAsFoundWire).toBe(true);
@@ -94,12 +117,19 @@ describe('redesign search invariants (fast-check)', { timeout: 120_000 }, () => 
 
   it('no over-pitched span ranks above a feasible short-pitched one', () => {
     fc.assert(
-      fc.property(fc.constantFrom(4, 6), fc.subarray([4, 5, 6, 7, 8, 9, 10], { minLength: 1 }), fc.integer({ min: 300, max: 700 }), (poles, spans, v) => {
-        const r = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor({ poles, spans, lineVoltageV: v, allowOverPitch: true }), METRIC_STOCK));
-        const tau = 36 / poles;
-        const firstOver = r.candidates.find((c) => c.overPitched)?.rank ?? Infinity;
-        for (const c of r.candidates) if ((c.winding.spans[0] ?? 0) < tau) expect(c.rank).toBeLessThan(firstOver);
-      }),
+      fc.property(
+        fc.constantFrom(4, 6),
+        fc.subarray([4, 5, 6, 7, 8, 9, 10], { minLength: 1 }),
+        fc.integer({ min: 300, max: 700 }),
+        (poles, spans, v) => {
+          const r = value(
+            searchRedesign(EXAMPLE_A_ORIGINAL, requestFor({ poles, spans, lineVoltageV: v, allowOverPitch: true }), METRIC_STOCK),
+          );
+          const tau = 36 / poles;
+          const firstOver = r.candidates.find((c) => c.overPitched)?.rank ?? Infinity;
+          for (const c of r.candidates) if ((c.winding.spans[0] ?? 0) < tau) expect(c.rank).toBeLessThan(firstOver);
+        },
+      ),
       { numRuns: 25 },
     );
   });
@@ -107,10 +137,15 @@ describe('redesign search invariants (fast-check)', { timeout: 120_000 }, () => 
   it('the ranking is invariant to stock order, including the as-found marks and the rejection reasons', () => {
     fc.assert(
       fc.property(target, fc.array(fc.nat(), { minLength: METRIC_STOCK.length, maxLength: METRIC_STOCK.length }), (t, keys) => {
-        const shuffled = METRIC_STOCK.map((w, i) => ({ w, k: keys[i] ?? 0 })).sort((a, b) => a.k - b.k).map((x) => x.w).reverse();
+        const shuffled = METRIC_STOCK.map((w, i) => ({ w, k: keys[i] ?? 0 }))
+          .sort((a, b) => a.k - b.k)
+          .map((x) => x.w)
+          .reverse();
         const a = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor(t), METRIC_STOCK));
         const b = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor(t), shuffled));
-        expect(b.candidates.map((c) => [c.key, c.rank, c.keepsAsFoundWire])).toEqual(a.candidates.map((c) => [c.key, c.rank, c.keepsAsFoundWire]));
+        expect(b.candidates.map((c) => [c.key, c.rank, c.keepsAsFoundWire])).toEqual(
+          a.candidates.map((c) => [c.key, c.rank, c.keepsAsFoundWire]),
+        );
         expect(b.asFound).toEqual(a.asFound);
         expect(b.rejected).toEqual(a.rejected);
       }),
@@ -135,7 +170,16 @@ describe('redesign search invariants (fast-check)', { timeout: 120_000 }, () => 
   type Facts = typeof facts extends fc.Arbitrary<infer T> ? T : never;
   const toRank = (f: Facts, circuits: number, strands: number): RankFacts => {
     const score = f.closeness / 0.05 + f.extraEffort + 3 * Math.max(0, circuits - f.originalCircuits) + (strands - 1);
-    return { key: f.key, score, closeness: f.closeness, overPitched: f.overPitched, keepsAsFoundWire: f.keepsAsFoundWire, harmonics: { kw5: f.kw5, kw7: f.kw7, mmfDistortion: 0 }, winding: { parallelPaths: circuits }, wires: { strands } };
+    return {
+      key: f.key,
+      score,
+      closeness: f.closeness,
+      overPitched: f.overPitched,
+      keepsAsFoundWire: f.keepsAsFoundWire,
+      harmonics: { kw5: f.kw5, kw7: f.kw7, mmfDistortion: 0 },
+      winding: { parallelPaths: circuits },
+      wires: { strands },
+    };
   };
 
   it('fewer circuits and strands never rank below an otherwise equal winding with more', () => {

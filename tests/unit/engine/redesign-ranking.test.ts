@@ -13,21 +13,31 @@ describe('issue 10 cases: rank 1 is what an experienced winder would choose', ()
   it('400 V Y 50 Hz → 460 V 60 Hz: rewinding as found (14 turns, 1 circuit, 2 × 0.85 mm, star) ranks 1, marked as keeping the wire', () => {
     const r = search({ lineVoltageV: 460, frequencyHz: 60 });
     const first = r.candidates[0];
-    expect(first).toMatchObject({ keepsAsFoundWire: true, winding: { turnsPerCoil: [14], parallelPaths: 1, connection: 'star', spans: [7] }, wires: { label: '2 × 0.850 mm' } });
+    expect(first).toMatchObject({
+      keepsAsFoundWire: true,
+      winding: { turnsPerCoil: [14], parallelPaths: 1, connection: 'star', spans: [7] },
+      wires: { label: '2 × 0.850 mm' },
+    });
     expect(first?.changes).toEqual([]);
     // Φ ratio 0.9583 (reference §3 check value, ±0.001); current density × 1.2·400/460 = 1.0435 (inside +5 %).
     expect(Math.abs((first?.ratios.flux ?? 0) - 0.9583)).toBeLessThanOrEqual(0.001);
     expect(first?.currentDensity.ratio).toBeCloseTo((1.2 * 400) / 460, 9);
     expect(r.asFound).toEqual({ key: first?.key, reason: null });
     // The 28-turn, 2-circuit, 1 × 0.85 mm equivalent is a candidate but ranks below it (an extra circuit).
-    const equivalent = r.candidates.find((c) => c.winding.turnsPerCoil[0] === 28 && c.winding.parallelPaths === 2 && c.wires.label === '1 × 0.850 mm');
+    const equivalent = r.candidates.find(
+      (c) => c.winding.turnsPerCoil[0] === 28 && c.winding.parallelPaths === 2 && c.wires.label === '1 × 0.850 mm',
+    );
     if (equivalent) expect(equivalent.rank).toBeGreaterThan(1);
   });
 
   it('4 → 6 poles: rank 1 is the 5/6-pitch span 1–6, 20 turns, 1 circuit, 1 × 1.00 mm, gap +1.5 %, k_w5 0.067', () => {
     const r = search({ poles: 6 });
     const first = r.candidates[0];
-    expect(first).toMatchObject({ winding: { spans: [5], turnsPerCoil: [20], parallelPaths: 1, connection: 'star' }, wires: { label: '1 × 1.000 mm' }, overPitched: false });
+    expect(first).toMatchObject({
+      winding: { spans: [5], turnsPerCoil: [20], parallelPaths: 1, connection: 'star' },
+      wires: { label: '1 × 1.000 mm' },
+      overPitched: false,
+    });
     expect(first?.ratios.gap).toBeCloseTo(1.015, 3);
     // 36 slots, 6 poles, 5/6 pitch: k_w5 = k_d5·k_p5 = 0.2588·0.2588 = 0.0670 (reference §1 table, 24/4 row has the same q and pitch).
     expect(first?.harmonics.kw5).toBeCloseTo(0.067, 3);
@@ -55,14 +65,25 @@ describe('issue 10 cases: rank 1 is what an experienced winder would choose', ()
   });
 
   it('a 4 → 6 pole change states that the as-found layout cannot be kept', () => {
-    expect(search({ poles: 6 }).asFound).toEqual({ key: null, reason: 'The pole count changes (4 → 6): the as-found layout cannot be kept.' });
+    expect(search({ poles: 6 }).asFound).toEqual({
+      key: null,
+      reason: 'The pole count changes (4 → 6): the as-found layout cannot be kept.',
+    });
   });
 });
 
 describe('the rule as written', () => {
   it('is one sentence that names the as-found wire, the forced falls and the effort items', () => {
     expect(RANKING_RULE.split('. ').length).toBe(1);
-    for (const w of ['as-found wire', 'back-iron fall', 'lower current density', 'extra circuits', 'thinner than the shop minimum', 'over-pitched']) expect(RANKING_RULE).toContain(w);
+    for (const w of [
+      'as-found wire',
+      'back-iron fall',
+      'lower current density',
+      'extra circuits',
+      'thinner than the shop minimum',
+      'over-pitched',
+    ])
+      expect(RANKING_RULE).toContain(w);
     expect(RANKING_RULE).toContain(`${RANKING_POINTS.closenessStep * 100} %`);
   });
 
@@ -70,7 +91,10 @@ describe('the rule as written', () => {
     const r = search({ lineVoltageV: 690 }, { minWireBareMm: 1.0 });
     const thin = r.candidates.filter((c) => c.effort.some((e) => /thinner than the shop minimum/.test(e.what)));
     expect(thin.length).toBeGreaterThan(0);
-    for (const c of thin) expect(c.effort.find((e) => /thinner/.test(e.what))?.points).toBe(RANKING_POINTS.thinWire * c.wires.parts.filter((p) => p.wire.bareMm < 0.85 - 1e-9 && p.wire.bareMm < 1.0).length);
+    for (const c of thin)
+      expect(c.effort.find((e) => /thinner/.test(e.what))?.points).toBe(
+        RANKING_POINTS.thinWire * c.wires.parts.filter((p) => p.wire.bareMm < 0.85 - 1e-9 && p.wire.bareMm < 1.0).length,
+      );
   });
 
   it('a harmonic limit below the layout’s k_w7 refuses the layout and says so with numbers', () => {
@@ -89,7 +113,9 @@ describe('rejections say the binding limit, truthfully', () => {
     const r = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor({ parallelPaths: [2] }, { slotFillMax: 0.1 }), only150));
     const x = r.rejected.find((f) => /2 circuits/.test(f.family));
     expect(x?.binding).toBe('slot-fill');
-    expect(x?.reason).toMatch(/the leanest set from stock that carries it \(\d × 1\.500 mm, \d\.\d{3} mm²\) fills \d+ % of the slot \(limit 23 %\)/);
+    expect(x?.reason).toMatch(
+      /the leanest set from stock that carries it \(\d × 1\.500 mm, \d\.\d{3} mm²\) fills \d+ % of the slot \(limit 23 %\)/,
+    );
     expect(x?.reason).not.toMatch(/cannot make/);
   });
 
@@ -105,7 +131,11 @@ describe('rejections say the binding limit, truthfully', () => {
 
   it('a flux limit that no whole number of turns meets names the density and its numbers', () => {
     const r = search({ poles: 2 });
-    expect(r.rejected.every((x) => x.binding === 'flux' && /yoke \(back-iron\) flux density \+\d+\.\d % is over the \+5\.0 % limit/.test(x.reason))).toBe(true);
+    expect(
+      r.rejected.every(
+        (x) => x.binding === 'flux' && /yoke \(back-iron\) flux density \+\d+\.\d % is over the \+5\.0 % limit/.test(x.reason),
+      ),
+    ).toBe(true);
   });
 });
 
@@ -125,8 +155,25 @@ describe('the work budget', () => {
   it('stops a search past its budget with a "narrow the request" message naming what to narrow (the widest request the schema allows, budget 2 000)', () => {
     const d = { over: 1, under: 0.99 };
     const wide = requestFor(
-      { lineVoltageV: 460, frequencyHz: 60, connection: 'either', spans: [5, 6, 7, 8, 9, 10, 11, 12], parallelPaths: [1, 2, 3, 4, 6, 8, 12, 24], allowOverPitch: true },
-      { gap: d, tooth: d, yoke: d, currentDensityRise: 1, currentDensityMaxAPerMm2: 30, slotFillMax: 1, maxStrandsInHand: 40, maxWireSizes: 3, mixedSizeRatioMax: 3 },
+      {
+        lineVoltageV: 460,
+        frequencyHz: 60,
+        connection: 'either',
+        spans: [5, 6, 7, 8, 9, 10, 11, 12],
+        parallelPaths: [1, 2, 3, 4, 6, 8, 12, 24],
+        allowOverPitch: true,
+      },
+      {
+        gap: d,
+        tooth: d,
+        yoke: d,
+        currentDensityRise: 1,
+        currentDensityMaxAPerMm2: 30,
+        slotFillMax: 1,
+        maxStrandsInHand: 40,
+        maxWireSizes: 3,
+        mixedSizeRatioMax: 3,
+      },
     );
     const e = errorOf(searchRedesign(EXAMPLE_A_ORIGINAL, wide, METRIC_STOCK, { budget: 2000 }));
     expect(e.code).toBe('too-wide');
@@ -138,13 +185,33 @@ describe('the work budget', () => {
   it('the widest request the schema allows finishes inside the default budget on example A', () => {
     const d = { over: 1, under: 0.99 };
     const wide = requestFor(
-      { lineVoltageV: 460, frequencyHz: 60, connection: 'either', spans: [5, 6, 7, 8, 9, 10, 11, 12], parallelPaths: [1, 2, 3, 4, 6, 8, 12, 24], allowOverPitch: true },
-      { gap: d, tooth: d, yoke: d, currentDensityRise: 1, currentDensityMaxAPerMm2: 30, slotFillMax: 1, maxStrandsInHand: 40, maxWireSizes: 3, mixedSizeRatioMax: 3 },
+      {
+        lineVoltageV: 460,
+        frequencyHz: 60,
+        connection: 'either',
+        spans: [5, 6, 7, 8, 9, 10, 11, 12],
+        parallelPaths: [1, 2, 3, 4, 6, 8, 12, 24],
+        allowOverPitch: true,
+      },
+      {
+        gap: d,
+        tooth: d,
+        yoke: d,
+        currentDensityRise: 1,
+        currentDensityMaxAPerMm2: 30,
+        slotFillMax: 1,
+        maxStrandsInHand: 40,
+        maxWireSizes: 3,
+        mixedSizeRatioMax: 3,
+      },
     );
     expect(value(searchRedesign(EXAMPLE_A_ORIGINAL, wide, METRIC_STOCK, { budget: WORK_BUDGET })).candidates.length).toBeGreaterThan(0);
   }, 30_000);
 
   it('names the connection and lists when those are what is wide', () => {
-    expect(narrowingAdvice(requestFor({ connection: 'either', spans: [5, 6, 7, 8] }))).toEqual(['the spans listed (now 4)', 'the connection (star or delta instead of either)']);
+    expect(narrowingAdvice(requestFor({ connection: 'either', spans: [5, 6, 7, 8] }))).toEqual([
+      'the spans listed (now 4)',
+      'the connection (star or delta instead of either)',
+    ]);
   });
 });

@@ -12,7 +12,8 @@ function reportFor(target: Parameters<typeof requestFor>[0], judgeLimits: Parame
   if (!best) throw new Error('no candidate');
   return value(redesignReport(EXAMPLE_A_ORIGINAL, requestFor(target, judgeLimits), search, best));
 }
-const within = (actual: number | null, expected: number, tol = 0.005) => expect(Math.abs((actual ?? NaN) / expected - 1)).toBeLessThanOrEqual(tol);
+const within = (actual: number | null, expected: number, tol = 0.005) =>
+  expect(Math.abs((actual ?? NaN) / expected - 1)).toBeLessThanOrEqual(tol);
 const rowOf = (r: ReturnType<typeof reportFor>, key: string) => {
   const row = r.rows.find((x) => x.key === key);
   if (!row) throw new Error(`no row ${key}`);
@@ -55,7 +56,7 @@ describe('side-by-side report', () => {
     expect(p.lineVoltageV).toBe(460);
     expect(p.synchronousRpm).toBe(1800);
     expect(p.speedRpm).toBeCloseTo(1440 * 1.2, 6);
-    expect(p.currentA).toBeCloseTo(5 * 1.2 * 400 / 460, 6);
+    expect(p.currentA).toBeCloseTo((5 * 1.2 * 400) / 460, 6);
   });
 });
 
@@ -73,7 +74,9 @@ describe('cautions', () => {
   });
 
   it('always names IEC 60079-19 and defers to local codes', () => {
-    const text = redesignWarnings(EXAMPLE_A_ORIGINAL, requestFor({}).target, null).map((w) => w.text).join(' ');
+    const text = redesignWarnings(EXAMPLE_A_ORIGINAL, requestFor({}).target, null)
+      .map((w) => w.text)
+      .join(' ');
     expect(text).toMatch(/IEC 60079-19/);
     expect(text).toMatch(/local codes/);
   });

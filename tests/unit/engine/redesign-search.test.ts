@@ -82,20 +82,30 @@ describe('families that fail say why', () => {
 
   it('when only thin, thick-enamelled wire is on hand and the fill is tight, no wire combination fits, and the reason gives the fill', () => {
     // Thin grade-3 wire packs less copper per insulated area than the original 2 × 0.85 mm grade 2.
-    const grade3 = METRIC_STOCK.filter((w) => w.bareMm <= 0.6).map((w) => value(stockWire({ standard: w.standard, size: w.size, enamelGrade: 3 })));
+    const grade3 = METRIC_STOCK.filter((w) => w.bareMm <= 0.6).map((w) =>
+      value(stockWire({ standard: w.standard, size: w.size, enamelGrade: 3 })),
+    );
     // Two circuits: twice the turns, so even the as-found wires (always tried) overfill the slot.
     const r = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor({ parallelPaths: [2] }, { slotFillMax: 0.1 }), grade3));
     expect(r.candidates).toHaveLength(0);
-    expect(r.asFound.reason).toMatch(/Keeping 2 × 0\.850 mm on the as-found layout does not meet the limits: star, 2 circuits, \d+ turns: 2 × 0\.850 mm fills \d+ % of the slot \(limit 23 %\)/);
+    expect(r.asFound.reason).toMatch(
+      /Keeping 2 × 0\.850 mm on the as-found layout does not meet the limits: star, 2 circuits, \d+ turns: 2 × 0\.850 mm fills \d+ % of the slot \(limit 23 %\)/,
+    );
     expect(r.rejected[0]?.binding).toBe('slot-fill');
-    expect(r.rejected[0]?.reason).toMatch(/No wire combination from stock fits: at \d+ turns the current needs .* the leanest set from stock that carries it \(.*\) fills \d+ % of the slot \(limit 23 %\)/);
+    expect(r.rejected[0]?.reason).toMatch(
+      /No wire combination from stock fits: at \d+ turns the current needs .* the leanest set from stock that carries it \(.*\) fills \d+ % of the slot \(limit 23 %\)/,
+    );
   });
 
   it('a stock too thin for the current says it cannot make the area', () => {
     const thin = METRIC_STOCK.filter((w) => w.bareMm <= 0.42);
     const r = value(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor({}, { maxStrandsInHand: 2 }), thin));
     expect(r.candidates.every((c) => c.keepsAsFoundWire)).toBe(true);
-    expect(r.rejected.some((x) => x.binding === 'strands' && /2 wires in hand of the thickest size in stock \(0\.400 mm\) give only 0\.251 mm²/.test(x.reason))).toBe(true);
+    expect(
+      r.rejected.some(
+        (x) => x.binding === 'strands' && /2 wires in hand of the thickest size in stock \(0\.400 mm\) give only 0\.251 mm²/.test(x.reason),
+      ),
+    ).toBe(true);
   });
 
   it('an empty stock is reported, not a crash', () => {
@@ -115,14 +125,20 @@ describe('families that fail say why', () => {
   });
 
   it('a bad limit names its field', () => {
-    expect(errorOf(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor({}, { slotFillMax: 1.5 }), METRIC_STOCK)).field).toBe('limits.slotFillMax');
+    expect(errorOf(searchRedesign(EXAMPLE_A_ORIGINAL, requestFor({}, { slotFillMax: 1.5 }), METRIC_STOCK)).field).toBe(
+      'limits.slotFillMax',
+    );
   });
 });
 
 describe('ranking', () => {
   it('400 V Y → 690 V Y: the as-found wires re-turned to 24 first, then one 0.95 mm wire (a lower current density costs nothing)', () => {
     const r = search({ lineVoltageV: 690 });
-    expect(r.candidates[0]).toMatchObject({ keepsAsFoundWire: true, winding: { turnsPerCoil: [24], parallelPaths: 1 }, wires: { label: '2 × 0.850 mm' } });
+    expect(r.candidates[0]).toMatchObject({
+      keepsAsFoundWire: true,
+      winding: { turnsPerCoil: [24], parallelPaths: 1 },
+      wires: { label: '2 × 0.850 mm' },
+    });
     const other = r.candidates.find((c) => !c.keepsAsFoundWire);
     expect(other?.winding.turnsPerCoil).toEqual([24]);
     expect(other?.wires.label).toBe('1 × 0.950 mm');

@@ -51,7 +51,14 @@ describe('phase resistance, worked example A', () => {
 
   it('uses ρ20 = 1/58 Ω·mm²/m: 58 m of 1 mm² is 1 Ω', () => {
     // IEC 60028
-    const r = phaseResistanceOhm({ coilsPerPhase: 1, turnsPerCoil: 1, meanTurnLengthM: 58, parallelPaths: 1, strands: [{ areaMm2: 1, count: 1 }], temperatureC: 20 });
+    const r = phaseResistanceOhm({
+      coilsPerPhase: 1,
+      turnsPerCoil: 1,
+      meanTurnLengthM: 58,
+      parallelPaths: 1,
+      strands: [{ areaMm2: 1, count: 1 }],
+      temperatureC: 20,
+    });
     expect(r).toBeCloseTo(1, 12);
   });
 
@@ -60,7 +67,13 @@ describe('phase resistance, worked example A', () => {
   });
 
   it('adds the areas of mixed wires in hand', () => {
-    const mixed = phaseResistanceOhm({ ...exampleA, strands: [{ areaMm2: 0.5, count: 1 }, { areaMm2: 0.3, count: 2 }] });
+    const mixed = phaseResistanceOhm({
+      ...exampleA,
+      strands: [
+        { areaMm2: 0.5, count: 1 },
+        { areaMm2: 0.3, count: 2 },
+      ],
+    });
     const single = phaseResistanceOhm({ ...exampleA, strands: [{ areaMm2: 1.1, count: 1 }] });
     expect(mixed).toBeCloseTo(single, 12);
   });
@@ -87,7 +100,9 @@ describe('phase resistance properties', () => {
         const base = phaseResistanceOhm(exampleA);
         expect(relativelyClose(phaseResistanceOhm({ ...exampleA, meanTurnLengthM: exampleA.meanTurnLengthM * k }), base * k)).toBe(true);
         expect(relativelyClose(phaseResistanceOhm({ ...exampleA, turnsPerCoil: exampleA.turnsPerCoil * k }), base * k)).toBe(true);
-        expect(relativelyClose(phaseResistanceOhm({ ...exampleA, strands: [{ areaMm2: strandAreaMm2 * k, count: 2 }] }), base / k)).toBe(true);
+        expect(relativelyClose(phaseResistanceOhm({ ...exampleA, strands: [{ areaMm2: strandAreaMm2 * k, count: 2 }] }), base / k)).toBe(
+          true,
+        );
         expect(relativelyClose(phaseResistanceOhm({ ...exampleA, parallelPaths: a }), base / (a * a))).toBe(true);
       }),
     );
@@ -95,9 +110,15 @@ describe('phase resistance properties', () => {
 
   it('round-trips a temperature correction', () => {
     fc.assert(
-      fc.property(positive, fc.double({ min: -40, max: 250, noNaN: true }), fc.double({ min: -40, max: 250, noNaN: true }), fc.constantFrom(234.5, 235), (r, t1, t2, k) => {
-        expect(relativelyClose(correctResistanceOhm(correctResistanceOhm(r, t1, t2, k), t2, t1, k), r)).toBe(true);
-      }),
+      fc.property(
+        positive,
+        fc.double({ min: -40, max: 250, noNaN: true }),
+        fc.double({ min: -40, max: 250, noNaN: true }),
+        fc.constantFrom(234.5, 235),
+        (r, t1, t2, k) => {
+          expect(relativelyClose(correctResistanceOhm(correctResistanceOhm(r, t1, t2, k), t2, t1, k), r)).toBe(true);
+        },
+      ),
     );
   });
 

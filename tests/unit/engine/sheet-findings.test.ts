@@ -10,7 +10,17 @@ const ids = (s: WindingSheet) => findings(s).map((f) => f.id);
 /** 36 slots, 4 poles, single-layer concentric half-coiled, spans 11/9/7 (usual τ+q−1, −2 …) [derived, docs/engineering/winding-factor.md]. */
 const CONCENTRIC: WindingSheet = {
   ...EXAMPLE_A_SHEET,
-  winding: { layers: 1, style: 'concentric', singleLayerCoiling: 'half', spans: [11, 9, 7], turnsPerCoil: [28, 28, 28], parallelPaths: 1, connection: 'star', coilsPerGroup: 3, groups: 6 },
+  winding: {
+    layers: 1,
+    style: 'concentric',
+    singleLayerCoiling: 'half',
+    spans: [11, 9, 7],
+    turnsPerCoil: [28, 28, 28],
+    parallelPaths: 1,
+    connection: 'star',
+    coilsPerGroup: 3,
+    groups: 6,
+  },
   resistance: undefined,
 };
 
@@ -25,7 +35,9 @@ describe('consistency checks of an as-found sheet', () => {
     [4, 1, 'half', 6],
     [4, 1, 'whole', 12],
     [6, 2, undefined, 18],
-  ] as const)('%s poles, %s layer(s), %s coiling → %s groups', (poles, layers, coiling, groups) => expect(expectedGroups(poles, layers, coiling)).toBe(groups));
+  ] as const)('%s poles, %s layer(s), %s coiling → %s groups', (poles, layers, coiling, groups) =>
+    expect(expectedGroups(poles, layers, coiling)).toBe(groups),
+  );
 
   it('accepts a counted single-layer concentric winding whose groups and coils agree', () => {
     expect(ids(CONCENTRIC)).toEqual([]);

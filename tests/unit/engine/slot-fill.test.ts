@@ -1,12 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-  grossSlotAreaMm2,
-  HAND_INSERTION_FILL_LIMIT,
-  netSlotAreaMm2,
-  slotFill,
-  type SlotShape,
-} from '@/lib/engine/slot-fill';
+import { grossSlotAreaMm2, HAND_INSERTION_FILL_LIMIT, netSlotAreaMm2, slotFill, type SlotShape } from '@/lib/engine/slot-fill';
 import type { EngineResult } from '@/lib/engine/result';
 
 function value<T>(r: EngineResult<T>): T {
@@ -28,7 +22,10 @@ describe('slot area [derived: plane geometry]', () => {
     // 6 × 20 mm: wedge 2 mm × 6 = 12; liner 0.25 × (18 + 18 + 6) = 10.5; separator 0.3 × 6 = 1.8.
     const shape: SlotShape = { depthMm: 20, topWidthMm: 6, bottomWidthMm: 6 };
     expect(value(netSlotAreaMm2(shape, { linerThicknessMm: 0.25, wedgeDepthMm: 2 }))).toBeCloseTo(120 - 12 - 10.5, 9);
-    expect(value(netSlotAreaMm2(shape, { linerThicknessMm: 0.25, wedgeDepthMm: 2, separatorThicknessMm: 0.3 }))).toBeCloseTo(120 - 12 - 10.5 - 1.8, 9);
+    expect(value(netSlotAreaMm2(shape, { linerThicknessMm: 0.25, wedgeDepthMm: 2, separatorThicknessMm: 0.3 }))).toBeCloseTo(
+      120 - 12 - 10.5 - 1.8,
+      9,
+    );
   });
 
   it('lines a round bottom along its half circumference', () => {

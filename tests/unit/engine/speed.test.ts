@@ -1,13 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import {
-  POLES_FROM_SPEED_MESSAGES,
-  polesFromSpeed,
-  slip,
-  synchronousSpeedRpm,
-  torqueNm,
-  torqueNmFromHp,
-} from '@/lib/engine/speed';
+import { POLES_FROM_SPEED_MESSAGES, polesFromSpeed, slip, synchronousSpeedRpm, torqueNm, torqueNmFromHp } from '@/lib/engine/speed';
 
 describe('speed and poles', () => {
   // docs/engineering/nameplate-and-speed.md check values.

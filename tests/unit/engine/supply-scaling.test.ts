@@ -5,15 +5,26 @@ import { EXAMPLE_A_SPEC, errorOf, value } from '../../support/fixtures/winding-f
 
 const baseline: ScalingCase = { winding: EXAMPLE_A_SPEC, supply: { lineVoltageV: 400, frequencyHz: 50 } };
 const moved = (winding: Partial<WindingSpec>, supply: Partial<ScalingCase['supply']> = {}): ScalingCase => ({
-  winding: { ...EXAMPLE_A_SPEC, ...winding }, supply: { ...baseline.supply, ...supply },
+  winding: { ...EXAMPLE_A_SPEC, ...winding },
+  supply: { ...baseline.supply, ...supply },
 });
 
 describe('flux ratio check values, baseline example A (docs/engineering/redesign.md, [derived], ±0.001)', () => {
   it.each([
-    { name: '400 V Y 50 Hz → 460 V Y 60 Hz, same winding', next: moved({}, { lineVoltageV: 460, frequencyHz: 60 }), ratio: 0.9583, verdict: 'ok' },
+    {
+      name: '400 V Y 50 Hz → 460 V Y 60 Hz, same winding',
+      next: moved({}, { lineVoltageV: 460, frequencyHz: 60 }),
+      ratio: 0.9583,
+      verdict: 'ok',
+    },
     { name: '400 V Y → 400 V Δ, same winding (reject)', next: moved({ connection: 'delta' }), ratio: 1.7321, verdict: 'over-fluxed' },
     { name: 'Y → Δ with N_c 14 → 24', next: moved({ connection: 'delta', turnsPerCoil: [24] }), ratio: 1.0104, verdict: 'ok' },
-    { name: '50 → 60 Hz at 400 V with N_c 14 → 12', next: moved({ turnsPerCoil: [12] }, { frequencyHz: 60 }), ratio: 0.9722, verdict: 'ok' },
+    {
+      name: '50 → 60 Hz at 400 V with N_c 14 → 12',
+      next: moved({ turnsPerCoil: [12] }, { frequencyHz: 60 }),
+      ratio: 0.9722,
+      verdict: 'ok',
+    },
     { name: 'span 1–8 → 1–9, same turns', next: moved({ spans: [8] }), ratio: 0.9542, verdict: 'ok' },
   ])('$name: Φ_new/Φ_old = $ratio', ({ next, ratio, verdict }) => {
     const r = value(supplyScaling(baseline, next));
@@ -26,18 +37,29 @@ describe('flux ratio check values, baseline example A (docs/engineering/redesign
 
 describe('redesign rules keep the flux (docs/engineering/redesign.md table, [derived])', () => {
   it.each([
-    { change: 'voltage 400 → 460 V, turns ×460/400', next: moved({ turnsPerCoil: [14 * 460 / 400] }, { lineVoltageV: 460 }) },
+    { change: 'voltage 400 → 460 V, turns ×460/400', next: moved({ turnsPerCoil: [(14 * 460) / 400] }, { lineVoltageV: 460 }) },
     { change: 'star → delta at the same line voltage, turns ×√3', next: moved({ connection: 'delta', turnsPerCoil: [14 * Math.sqrt(3)] }) },
-    { change: '50 → 60 Hz at the same voltage, turns ×5/6', next: moved({ turnsPerCoil: [14 * 5 / 6] }, { frequencyHz: 60 }) },
-    { change: '60 → 50 Hz at the same voltage, turns ×6/5', next: moved({ turnsPerCoil: [14 * 6 / 5] }, { frequencyHz: 50 }), oldHz: 60 },
+    { change: '50 → 60 Hz at the same voltage, turns ×5/6', next: moved({ turnsPerCoil: [(14 * 5) / 6] }, { frequencyHz: 60 }) },
+    { change: '60 → 50 Hz at the same voltage, turns ×6/5', next: moved({ turnsPerCoil: [(14 * 6) / 5] }, { frequencyHz: 50 }), oldHz: 60 },
     { change: 'parallel paths 1 → 2, turns ×2', next: moved({ parallelPaths: 2, turnsPerCoil: [28] }) },
   ])('$change', ({ next, oldHz }) => {
     // Turns counts are whole in a real winding: compare the formula with the fractional turns it asks for.
-    const old = { lineVoltageV: 400, frequencyHz: oldHz ?? 50, connection: 'star' as const, seriesTurnsPerPhase: 168, windingFactor: 0.9019, poles: 4 };
+    const old = {
+      lineVoltageV: 400,
+      frequencyHz: oldHz ?? 50,
+      connection: 'star' as const,
+      seriesTurnsPerPhase: 168,
+      windingFactor: 0.9019,
+      poles: 4,
+    };
     const w = next.winding;
     const r = fluxRatio(old, {
-      lineVoltageV: next.supply.lineVoltageV, frequencyHz: next.supply.frequencyHz, connection: w.connection,
-      seriesTurnsPerPhase: (12 * (w.turnsPerCoil[0] ?? NaN)) / w.parallelPaths, windingFactor: 0.9019, poles: 4,
+      lineVoltageV: next.supply.lineVoltageV,
+      frequencyHz: next.supply.frequencyHz,
+      connection: w.connection,
+      seriesTurnsPerPhase: (12 * (w.turnsPerCoil[0] ?? NaN)) / w.parallelPaths,
+      windingFactor: 0.9019,
+      poles: 4,
     });
     expect(r.fluxRatio).toBeCloseTo(1, 12);
   });

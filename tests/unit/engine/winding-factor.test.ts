@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import {
-  canBalance, closedFormFactors, concentricPitchFactor, distributionFactor, pitchFactor, slotsPerPolePerPhase,
+  canBalance,
+  closedFormFactors,
+  concentricPitchFactor,
+  distributionFactor,
+  pitchFactor,
+  slotsPerPolePerPhase,
 } from '@/lib/engine/closed-form';
 import { harmonicWindingFactors, SlotStar } from '@/lib/engine/slot-star';
 import { lap, layoutOf, singleLayer } from '../../support/fixtures/winding-fixtures';
@@ -24,7 +29,11 @@ describe('double-layer 60°-belt lap check values (docs/engineering/winding-fact
     const factors = harmonicWindingFactors(layoutOf(lap(s, p, y)), 7);
     const at = (nu: number) => factors.find((f) => f.order === nu);
     // Slot-star sum over the actual coil sides [derived], every phase.
-    for (const [nu, expected] of [[1, kw1], [5, kw5], [7, kw7]] as const) {
+    for (const [nu, expected] of [
+      [1, kw1],
+      [5, kw5],
+      [7, kw7],
+    ] as const) {
       for (const ph of ['A', 'B', 'C'] as const) expect(at(nu)?.phases[ph].kw).toBeCloseTo(expected, 3);
       expect(Math.abs((at(nu)?.kw ?? NaN) - expected)).toBeLessThanOrEqual(TOL);
       // Closed form k_d·k_p (Say, Alternating Current Machines; Fitzgerald & Kingsley; fractional q = z/d [derived]).
@@ -47,8 +56,7 @@ describe('slot harmonics ν = k·S/p ± 1 keep the working |k_w| (docs/engineeri
     const kw1 = factors.find((f) => f.order === 1)?.kw ?? NaN;
     const pp = p / 2;
     for (let k = 1; (k * s) / pp + 1 <= 49; k++)
-      for (const nu of [(k * s) / pp - 1, (k * s) / pp + 1])
-        expect(factors.find((f) => f.order === nu)?.kw).toBeCloseTo(kw1, 12);
+      for (const nu of [(k * s) / pp - 1, (k * s) / pp + 1]) expect(factors.find((f) => f.order === nu)?.kw).toBeCloseTo(kw1, 12);
     // Chording cannot reduce them: the same orders at full pitch carry the full-pitch k_w1.
     const full = harmonicWindingFactors(layoutOf(lap(s, p, s / p)), 49);
     const kw1Full = full.find((f) => f.order === 1)?.kw ?? NaN;
@@ -79,7 +87,12 @@ describe('single-layer 60°-belt windings have k_w = k_d whatever the end-turn s
 
 describe('closed forms (docs/engineering/winding-factor.md)', () => {
   it('k_d for integral q matches sin(ν q α/2)/(q sin(ν α/2)) with α = 180°·P/S (Say; Fitzgerald & Kingsley)', () => {
-    for (const [s, p] of [[36, 4], [48, 4], [72, 4], [54, 6]] as const) {
+    for (const [s, p] of [
+      [36, 4],
+      [48, 4],
+      [72, 4],
+      [54, 6],
+    ] as const) {
       const q = s / (3 * p);
       const alpha = ((180 * p) / s) * (Math.PI / 180);
       for (const nu of [1, 5, 7, 11, 13]) {
@@ -107,8 +120,13 @@ describe('closed forms (docs/engineering/winding-factor.md)', () => {
   });
 
   it.each([
-    { s: 36, p: 4, ok: true }, { s: 30, p: 4, ok: true }, { s: 27, p: 4, ok: true },
-    { s: 36, p: 8, ok: true }, { s: 35, p: 4, ok: false }, { s: 32, p: 4, ok: false }, { s: 24, p: 6, ok: false },
+    { s: 36, p: 4, ok: true },
+    { s: 30, p: 4, ok: true },
+    { s: 27, p: 4, ok: true },
+    { s: 36, p: 8, ok: true },
+    { s: 35, p: 4, ok: false },
+    { s: 32, p: 4, ok: false },
+    { s: 24, p: 6, ok: false },
   ])('balanced only when S/(3·gcd(S, p)) is whole: $s/$p → $ok [derived]', ({ s, p, ok }) => {
     expect(canBalance(s, p)).toBe(ok);
     // Equivalent statement: d (denominator of q) is not a multiple of 3.

@@ -1,6 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import {
-  buildStandardLayout, checkSlotTable, slotRow, usualSingleLayerSpans, windingLayout, type CoilSide, type SlotTable, type WindingSpec,
+  buildStandardLayout,
+  checkSlotTable,
+  slotRow,
+  usualSingleLayerSpans,
+  windingLayout,
+  type CoilSide,
+  type SlotTable,
+  type WindingSpec,
 } from '@/lib/engine/winding-layout';
 import { errorOf, lap, layoutOf, singleLayer, value } from '../../support/fixtures/winding-fixtures';
 
@@ -18,13 +25,38 @@ describe('the standard layout builder rejects what cannot be wound', () => {
     { name: 'odd poles', spec: lap(36, 5, 7), code: 'invalid-input', field: 'supply.poles' },
     { name: 'zero poles', spec: lap(36, 0, 7), code: 'invalid-input', field: 'supply.poles' },
     { name: 'zero turns', spec: lap(36, 4, 7, { turnsPerCoil: [0] }), code: 'invalid-input', field: 'winding.turnsPerCoil.0' },
-    { name: 'turns list shorter than spans', spec: lap(36, 4, 7, { style: 'concentric', spans: [11, 9, 7], turnsPerCoil: [10] }), code: 'invalid-input', field: 'winding.turnsPerCoil' },
-    { name: 'lap with two spans', spec: lap(36, 4, 7, { spans: [7, 8], turnsPerCoil: [1, 1] }), code: 'invalid-input', field: 'winding.spans' },
+    {
+      name: 'turns list shorter than spans',
+      spec: lap(36, 4, 7, { style: 'concentric', spans: [11, 9, 7], turnsPerCoil: [10] }),
+      code: 'invalid-input',
+      field: 'winding.turnsPerCoil',
+    },
+    {
+      name: 'lap with two spans',
+      spec: lap(36, 4, 7, { spans: [7, 8], turnsPerCoil: [1, 1] }),
+      code: 'invalid-input',
+      field: 'winding.spans',
+    },
     { name: 'single layer with fractional q', spec: singleLayer(30, 4, [7]), code: 'not-applicable', field: 'winding.layers' },
-    { name: 'whole-coiled single layer with odd q', spec: singleLayer(36, 4, [8], 'whole'), code: 'not-applicable', field: 'winding.singleLayerCoiling' },
-    { name: 'concentric spans that miss the return belt', spec: singleLayer(48, 4, [13, 11, 9, 7]), code: 'invalid-input', field: 'winding.spans' },
+    {
+      name: 'whole-coiled single layer with odd q',
+      spec: singleLayer(36, 4, [8], 'whole'),
+      code: 'not-applicable',
+      field: 'winding.singleLayerCoiling',
+    },
+    {
+      name: 'concentric spans that miss the return belt',
+      spec: singleLayer(48, 4, [13, 11, 9, 7]),
+      code: 'invalid-input',
+      field: 'winding.spans',
+    },
     { name: 'concentric group of the wrong size', spec: singleLayer(36, 4, [11, 9]), code: 'invalid-input', field: 'winding.spans' },
-    { name: 'double-layer concentric on a fractional winding', spec: lap(30, 4, 7, { style: 'concentric', spans: [9, 7, 5], turnsPerCoil: [1, 1, 1] }), code: 'not-applicable', field: 'winding.spans' },
+    {
+      name: 'double-layer concentric on a fractional winding',
+      spec: lap(30, 4, 7, { style: 'concentric', spans: [9, 7, 5], turnsPerCoil: [1, 1, 1] }),
+      code: 'not-applicable',
+      field: 'winding.spans',
+    },
   ])('$name → $code at $field', ({ spec, code, field }) => {
     const e = errorOf(buildStandardLayout(spec));
     expect(e.code).toBe(code);
@@ -70,7 +102,12 @@ describe('standard layouts fill every slot layer once and share coils evenly bet
     expect(top).toBe('AAAcccBBBaaaCCCbbb'.repeat(2));
     // The bottom layer is the top layer moved on by the span.
     const bottom = slotRow(layoutOf(lap(36, 4, 7)), 2).join('');
-    expect(bottom).toBe([...top].map((_, i) => top[(i - 7 + 36) % 36]).map((c) => (c === c?.toUpperCase() ? c?.toLowerCase() : c?.toUpperCase())).join(''));
+    expect(bottom).toBe(
+      [...top]
+        .map((_, i) => top[(i - 7 + 36) % 36])
+        .map((c) => (c === c?.toUpperCase() ? c?.toLowerCase() : c?.toUpperCase()))
+        .join(''),
+    );
   });
 
   it('alternates belts of 3 and 2 slots for 30/4 (q = 5/2)', () => {
@@ -98,12 +135,29 @@ describe('slot tables drawn by the winder', () => {
   });
 
   it.each([
-    { name: 'slot beyond the core', change: (s: CoilSide[]) => s.map((x, i) => (i === 3 ? { ...x, slot: 37 } : x)), field: 'winding.slotTable.3.slot' },
-    { name: 'two sides in one slot layer', change: (s: CoilSide[]) => s.map((x, i) => (i === 2 ? { ...x, slot: s[0]?.slot ?? 1, layer: s[0]?.layer ?? 1 } : x)), field: 'winding.slotTable.2.slot' },
-    { name: 'zero turns', change: (s: CoilSide[]) => s.map((x, i) => (i === 5 ? { ...x, turns: 0 } : x)), field: 'winding.slotTable.5.turns' },
+    {
+      name: 'slot beyond the core',
+      change: (s: CoilSide[]) => s.map((x, i) => (i === 3 ? { ...x, slot: 37 } : x)),
+      field: 'winding.slotTable.3.slot',
+    },
+    {
+      name: 'two sides in one slot layer',
+      change: (s: CoilSide[]) => s.map((x, i) => (i === 2 ? { ...x, slot: s[0]?.slot ?? 1, layer: s[0]?.layer ?? 1 } : x)),
+      field: 'winding.slotTable.2.slot',
+    },
+    {
+      name: 'zero turns',
+      change: (s: CoilSide[]) => s.map((x, i) => (i === 5 ? { ...x, turns: 0 } : x)),
+      field: 'winding.slotTable.5.turns',
+    },
     { name: 'a phase missing', change: (s: CoilSide[]) => s.filter((x) => x.phase !== 'C'), field: 'winding.slotTable' },
     { name: 'a coil with one side', change: (s: CoilSide[]) => s.slice(1), field: 'winding.slotTable' },
-    { name: 'coil numbers on some sides only', change: (s: CoilSide[]) => s.map((x, i) => (i === 0 ? { slot: x.slot, layer: x.layer, phase: x.phase, polarity: x.polarity, turns: x.turns } : x)), field: 'winding.slotTable' },
+    {
+      name: 'coil numbers on some sides only',
+      change: (s: CoilSide[]) =>
+        s.map((x, i) => (i === 0 ? { slot: x.slot, layer: x.layer, phase: x.phase, polarity: x.polarity, turns: x.turns } : x)),
+      field: 'winding.slotTable',
+    },
   ])('rejects $name at $field', ({ change, field }) => {
     const e = errorOf(checkSlotTable(table(change(standard.sides))));
     expect(e.code === 'invalid-input' || e.code === 'unbalanced-layout').toBe(true);

@@ -67,8 +67,18 @@ describe('AWG check values', () => {
   });
 
   it.each([
-    ['4/0', -3], ['0000', -3], ['3/0', -2], ['000', -2], ['2/0', -1], ['00', -1], ['1/0', 0], ['0', 0],
-    ['1', 1], ['AWG 10', 10], ['#12', 12], ['44', 44],
+    ['4/0', -3],
+    ['0000', -3],
+    ['3/0', -2],
+    ['000', -2],
+    ['2/0', -1],
+    ['00', -1],
+    ['1/0', 0],
+    ['0', 0],
+    ['1', 1],
+    ['AWG 10', 10],
+    ['#12', 12],
+    ['44', 44],
   ])('reads "%s" as gauge number %i', (label, n) => {
     expect(parseAwg(label)).toBe(n);
   });
@@ -137,9 +147,21 @@ describe('metric nominal diameters [from memory]', () => {
   });
 
   it('marks every second size as R20', () => {
-    expect(sizes.filter((s) => s.bareMm >= 0.5 && s.bareMm <= 1).map((s) => s.series)).toEqual(
-      ['R20', 'R40', 'R20', 'R40', 'R20', 'R40', 'R20', 'R40', 'R20', 'R40', 'R20', 'R40', 'R20'],
-    );
+    expect(sizes.filter((s) => s.bareMm >= 0.5 && s.bareMm <= 1).map((s) => s.series)).toEqual([
+      'R20',
+      'R40',
+      'R20',
+      'R40',
+      'R20',
+      'R40',
+      'R20',
+      'R40',
+      'R20',
+      'R40',
+      'R20',
+      'R40',
+      'R20',
+    ]);
   });
 
   it('steps by about 10^(1/40) from one size to the next', () => {

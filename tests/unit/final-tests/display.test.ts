@@ -1,7 +1,16 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { fahrenheitToCelsius } from '@/lib/engine/units';
-import { leakageText, megohmText, mmPerSecondToInchesPerSecond, overallText, percentText, statusText, temperatureText, velocityText } from '@/lib/final-tests/display';
+import {
+  leakageText,
+  megohmText,
+  mmPerSecondToInchesPerSecond,
+  overallText,
+  percentText,
+  statusText,
+  temperatureText,
+  velocityText,
+} from '@/lib/final-tests/display';
 
 describe('units shown beside the metric values', () => {
   it.each([
@@ -27,14 +36,22 @@ describe('units shown beside the metric values', () => {
   });
 
   it('round-trips °F and °C for any temperature a winding sees', () => {
-    fc.assert(fc.property(fc.double({ min: -40, max: 250, noNaN: true }), (c) => {
-      const f = Number(temperatureText(c).match(/\((-?[\d,.]+) °F\)/)![1]!.replace(/,/g, ''));
-      expect(Math.abs(fahrenheitToCelsius(f) - c)).toBeLessThan(0.06); // °F shown to 0.1
-    }));
+    fc.assert(
+      fc.property(fc.double({ min: -40, max: 250, noNaN: true }), (c) => {
+        const f = Number(
+          temperatureText(c)
+            .match(/\((-?[\d,.]+) °F\)/)![1]!
+            .replace(/,/g, ''),
+        );
+        expect(Math.abs(fahrenheitToCelsius(f) - c)).toBeLessThan(0.06); // °F shown to 0.1
+      }),
+    );
   });
 
   it.each([
-    [0.85, '0.85 MΩ'], [12.44, '12.4 MΩ'], [2400, '2,400 MΩ'],
+    [0.85, '0.85 MΩ'],
+    [12.44, '12.4 MΩ'],
+    [2400, '2,400 MΩ'],
   ])('megohms %f → %s', (v, text) => expect(megohmText(v)).toBe(text));
 
   it('shows leakage below 1 mA in µA too', () => {
@@ -52,7 +69,10 @@ describe('units shown beside the metric values', () => {
 
 describe('verdict words carry a symbol, not colour alone', () => {
   it.each([
-    ['pass', '✓'], ['fail', '⚠'], ['missing', '…'], ['incomplete', '…'],
+    ['pass', '✓'],
+    ['fail', '⚠'],
+    ['missing', '…'],
+    ['incomplete', '…'],
   ] as const)('%s has the symbol %s', (s, sym) => expect(statusText(s).startsWith(sym)).toBe(true));
 
   it('says FAIL in capitals on a failed record', () => expect(overallText('FAIL')).toBe('⚠ FAIL'));

@@ -24,7 +24,9 @@ describe('final resistance against the prediction', () => {
 
   it('says nothing until all three readings and the temperature are in', () => {
     expect(compareFinalResistance(EXAMPLE_A, { readings: [2.86, undefined, 2.86], temperatureC: 20, between: 'line-to-line' })).toBeNull();
-    expect(compareFinalResistance(EXAMPLE_A, { readings: [2.86, 2.86, 2.86], temperatureC: undefined, between: 'line-to-line' })).toBeNull();
+    expect(
+      compareFinalResistance(EXAMPLE_A, { readings: [2.86, 2.86, 2.86], temperatureC: undefined, between: 'line-to-line' }),
+    ).toBeNull();
   });
 
   it('the difference is the same whatever temperature the readings were taken at (property)', () => {

@@ -20,13 +20,56 @@ describe('test record schema', () => {
   });
 
   it.each([
-    ['an IR reading without its temperature and test voltage', (d: typeof PASSING) => { d.ir.temperatureC = ''; d.ir.testVoltageV = ''; }, ['ir.temperatureC', 'ir.testVoltageV']],
-    ['a 10-minute reading without the 1-minute one', (d: typeof PASSING) => { d.ir.ir1MinMOhm = ''; }, ['ir.ir1MinMOhm']],
-    ['a hipot result without the voltage applied', (d: typeof PASSING) => { d.hipot.appliedV = ''; }, ['hipot.appliedV']],
-    ['two resistance readings of three', (d: typeof PASSING) => { d.resistance.readings = [1, '', 1]; }, ['resistance.readings.1']],
-    ['run measurements without a result', (d: typeof PASSING) => { d.run.result = ''; }, ['run.result']],
-    ['a negative megohm reading', (d: typeof PASSING) => { d.ir.ir1MinMOhm = -3; }, ['ir.ir1MinMOhm']],
-    ['text in a number field', (d: typeof PASSING) => { d.run.speedRpm = 'fast'; }, ['run.speedRpm']],
+    [
+      'an IR reading without its temperature and test voltage',
+      (d: typeof PASSING) => {
+        d.ir.temperatureC = '';
+        d.ir.testVoltageV = '';
+      },
+      ['ir.temperatureC', 'ir.testVoltageV'],
+    ],
+    [
+      'a 10-minute reading without the 1-minute one',
+      (d: typeof PASSING) => {
+        d.ir.ir1MinMOhm = '';
+      },
+      ['ir.ir1MinMOhm'],
+    ],
+    [
+      'a hipot result without the voltage applied',
+      (d: typeof PASSING) => {
+        d.hipot.appliedV = '';
+      },
+      ['hipot.appliedV'],
+    ],
+    [
+      'two resistance readings of three',
+      (d: typeof PASSING) => {
+        d.resistance.readings = [1, '', 1];
+      },
+      ['resistance.readings.1'],
+    ],
+    [
+      'run measurements without a result',
+      (d: typeof PASSING) => {
+        d.run.result = '';
+      },
+      ['run.result'],
+    ],
+    [
+      'a negative megohm reading',
+      (d: typeof PASSING) => {
+        d.ir.ir1MinMOhm = -3;
+      },
+      ['ir.ir1MinMOhm'],
+    ],
+    [
+      'text in a number field',
+      (d: typeof PASSING) => {
+        d.run.speedRpm = 'fast';
+      },
+      ['run.speedRpm'],
+    ],
   ])('refuses %s, naming the field', (_n, patch, expected) => {
     const d = structuredClone(PASSING);
     patch(d);
@@ -46,11 +89,20 @@ describe('test record schema', () => {
   });
 
   it('lists each instrument serial once', () => {
-    expect(instrumentSerials(record((d) => { d.run.instrumentSerial = 'MEG-1001'; }))).toEqual(['MEG-1001', 'HP-77', 'SG-5', 'LR-2']);
+    expect(
+      instrumentSerials(
+        record((d) => {
+          d.run.instrumentSerial = 'MEG-1001';
+        }),
+      ),
+    ).toEqual(['MEG-1001', 'HP-77', 'SG-5', 'LR-2']);
   });
 
   it('round-trips a saved record through the form values', () => {
-    const saved = record((d) => { d.ir.ir10MinMOhm = ''; d.notes = 'retest after re-varnish'; });
+    const saved = record((d) => {
+      d.ir.ir10MinMOhm = '';
+      d.notes = 'retest after re-varnish';
+    });
     expect(testDataSchema.parse(recordToFormData(saved))).toEqual(saved);
   });
 });
@@ -69,7 +121,9 @@ describe('defaults from the nameplate and the as-found sheet', () => {
   });
 
   it('starts a retest from the previous basis with the 80 % repeat hipot', () => {
-    const prev = record((d) => { d.basis.insulationClass = 'H'; });
+    const prev = record((d) => {
+      d.basis.insulationClass = 'H';
+    });
     const next = newRecordDefaults(plate(460, 'F', 3.7, 60), null, prev);
     expect(next.basis.insulationClass).toBe('H');
     expect(next.hipot.case).toBe('repeat');
@@ -96,7 +150,10 @@ describe('live verdicts while typing', () => {
 });
 
 describe('impossible readings are refused with a field error (issue 9)', () => {
-  const rated = (d: typeof PASSING) => { d.basis.frequencyHz = 60; d.basis.poles = 4; };
+  const rated = (d: typeof PASSING) => {
+    d.basis.frequencyHz = 60;
+    d.basis.poles = 4;
+  };
   it('refuses a speed above synchronous without a note (120·60/4 = 1800 rpm)', () => {
     const d = structuredClone(PASSING);
     rated(d);
@@ -108,10 +165,34 @@ describe('impossible readings are refused with a field error (issue 9)', () => {
     expect(testDataSchema.safeParse(d).success).toBe(true);
   });
   it.each([
-    ['a winding temperature below −40 °C', (d: typeof PASSING) => { d.ir.temperatureC = -80; }, 'ir.temperatureC'],
-    ['a bearing temperature above 250 °C', (d: typeof PASSING) => { d.run.bearingDeC = 400; }, 'run.bearingDeC'],
-    ['a negative phase current', (d: typeof PASSING) => { d.run.currentsA = [-1, 3, 3]; }, 'run.currentsA.0'],
-    ['a hipot voltage without its duration', (d: typeof PASSING) => { d.hipot.durationS = ''; }, 'hipot.durationS'],
+    [
+      'a winding temperature below −40 °C',
+      (d: typeof PASSING) => {
+        d.ir.temperatureC = -80;
+      },
+      'ir.temperatureC',
+    ],
+    [
+      'a bearing temperature above 250 °C',
+      (d: typeof PASSING) => {
+        d.run.bearingDeC = 400;
+      },
+      'run.bearingDeC',
+    ],
+    [
+      'a negative phase current',
+      (d: typeof PASSING) => {
+        d.run.currentsA = [-1, 3, 3];
+      },
+      'run.currentsA.0',
+    ],
+    [
+      'a hipot voltage without its duration',
+      (d: typeof PASSING) => {
+        d.hipot.durationS = '';
+      },
+      'hipot.durationS',
+    ],
   ])('refuses %s', (_n, patch, path) => {
     const d = structuredClone(PASSING);
     patch(d);
@@ -123,10 +204,20 @@ describe('defaults follow the as-repaired rating', () => {
   it('takes 460 V 60 Hz from an approved redesign of a 400 V 50 Hz motor, and says so', () => {
     const rating = asRepairedRating(
       { ratedVoltageV: 400, frequencyHz: 50, speedRpm: 1460, currentA: 21, outputKw: 11, connection: 'delta' },
-      { revision: 1, nameplate: { lineVoltageV: 460, connection: 'star', frequencyHz: 60, poles: 4, speedRpm: 1752, currentA: 18.4, outputKw: 11 } },
+      {
+        revision: 1,
+        nameplate: { lineVoltageV: 460, connection: 'star', frequencyHz: 60, poles: 4, speedRpm: 1752, currentA: 18.4, outputKw: 11 },
+      },
     );
     const { basis, practice, sources } = basisDefaults({ rating, insulationClass: 'F' }, null);
-    expect(basis).toMatchObject({ ratedVoltageV: 460, frequencyHz: 60, poles: 4, ratedCurrentA: 18.4, ratingSource: 'redesign', redesignRevision: 1 });
+    expect(basis).toMatchObject({
+      ratedVoltageV: 460,
+      frequencyHz: 60,
+      poles: 4,
+      ratedCurrentA: 18.4,
+      ratingSource: 'redesign',
+      redesignRevision: 1,
+    });
     expect(practice).toBe('nema');
     expect(sources.rating).toBe('from the approved redesign, revision 1');
   });

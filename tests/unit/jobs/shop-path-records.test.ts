@@ -5,9 +5,21 @@ import { editLine } from '@/lib/jobs/job-writes';
 import { statementOfWork } from '@/lib/job-sheet/job-sheet-data';
 
 const facts = (over: Partial<GateFacts> = {}): GateFacts => ({
-  latestTest: null, readyOverride: null, keepOriginal: null, otherSupplyAsked: null, approvedRedesign: null, hasAsFoundSheet: true, ...over,
+  latestTest: null,
+  readyOverride: null,
+  keepOriginal: null,
+  otherSupplyAsked: null,
+  approvedRedesign: null,
+  hasAsFoundSheet: true,
+  ...over,
 });
-const decision = (kind: 'ready-override' | 'keep-original-winding', recordSequence: number | null) => ({ kind, reason: 'written reason', by: 'E', at: new Date(), recordSequence });
+const decision = (kind: 'ready-override' | 'keep-original-winding', recordSequence: number | null) => ({
+  kind,
+  reason: 'written reason',
+  by: 'E',
+  at: new Date(),
+  recordSequence,
+});
 
 // The gates are our rules for the shop path (issue 9; docs/engineering/final-tests.md).
 describe('shop-path gates', () => {
@@ -15,8 +27,20 @@ describe('shop-path gates', () => {
     expect(gateRefusal('TESTING', 'READY', facts())).toBe(GATE_MESSAGES.ready(null));
     expect(gateRefusal('TESTING', 'READY', facts({ latestTest: { sequence: 2, verdict: 'FAIL' } }))).toContain('#2, is FAIL');
     expect(gateRefusal('TESTING', 'READY', facts({ latestTest: { sequence: 2, verdict: 'PASS' } }))).toBeNull();
-    expect(gateRefusal('TESTING', 'READY', facts({ latestTest: { sequence: 2, verdict: 'FAIL' }, readyOverride: decision('ready-override', 2) }))).toBeNull();
-    expect(gateRefusal('TESTING', 'READY', facts({ latestTest: { sequence: 3, verdict: 'FAIL' }, readyOverride: decision('ready-override', 2) }))).not.toBeNull();
+    expect(
+      gateRefusal(
+        'TESTING',
+        'READY',
+        facts({ latestTest: { sequence: 2, verdict: 'FAIL' }, readyOverride: decision('ready-override', 2) }),
+      ),
+    ).toBeNull();
+    expect(
+      gateRefusal(
+        'TESTING',
+        'READY',
+        facts({ latestTest: { sequence: 3, verdict: 'FAIL' }, readyOverride: decision('ready-override', 2) }),
+      ),
+    ).not.toBeNull();
   });
   it('holds the start of winding while another supply was asked for', () => {
     const asked = facts({ otherSupplyAsked: 'a redesign request, revision 1' });
@@ -33,7 +57,9 @@ describe('shop-path gates', () => {
 
 describe('statement of work', () => {
   it('claims only what the records support', () => {
-    expect(statementOfWork('READY', null, { revision: 1, approvedBy: 'Ravi Castellano', approvedAt: '2026-12-01' }, true, null)).toBe('Rewound to redesign revision 1 approved by Ravi Castellano on 2026-12-01.');
+    expect(statementOfWork('READY', null, { revision: 1, approvedBy: 'Ravi Castellano', approvedAt: '2026-12-01' }, true, null)).toBe(
+      'Rewound to redesign revision 1 approved by Ravi Castellano on 2026-12-01.',
+    );
     expect(statementOfWork('SHIPPED', null, null, true, null)).toBe('Rewound to the as-found winding data.');
     expect(statementOfWork('READY', null, null, false, null)).toBe('No winding data recorded.');
     expect(statementOfWork('INSPECTION', null, null, true, null)).toBe('To be rewound to the as-found winding data.');

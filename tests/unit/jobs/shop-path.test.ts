@@ -6,7 +6,14 @@ const states = (...a: Parameters<typeof shopPathSteps>) => shopPathSteps(...a).m
 describe('the shop path steps', () => {
   it('marks the steps before the current one done, the one after it next and the rest later', () => {
     expect(states('QUOTE_SENT', null)).toEqual([
-      'RECEIVED:done', 'INSPECTION:done', 'QUOTE_SENT:current', 'CUSTOMER_APPROVED:next', 'WINDING:later', 'TESTING:later', 'READY:later', 'SHIPPED:later',
+      'RECEIVED:done',
+      'INSPECTION:done',
+      'QUOTE_SENT:current',
+      'CUSTOMER_APPROVED:next',
+      'WINDING:later',
+      'TESTING:later',
+      'READY:later',
+      'SHIPPED:later',
     ]);
   });
 

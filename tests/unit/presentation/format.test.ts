@@ -1,5 +1,15 @@
 import { afterEach, describe, expect, it } from 'vitest';
-import { dateTimeFormat, displaySettings, fmt, fromZonedLocal, isoDayInZone, numberFormat, serverTimeZone, setDisplaySettings, toZonedLocal } from '@/lib/presentation/format';
+import {
+  dateTimeFormat,
+  displaySettings,
+  fmt,
+  fromZonedLocal,
+  isoDayInZone,
+  numberFormat,
+  serverTimeZone,
+  setDisplaySettings,
+  toZonedLocal,
+} from '@/lib/presentation/format';
 
 afterEach(() => setDisplaySettings({ timeZone: null, dateFormat: 'iso' }));
 

@@ -27,10 +27,23 @@ function files(dir: string): string[] {
 }
 
 function strings(path: string): { text: string; line: number }[] {
-  const source = ts.createSourceFile(path, readFileSync(path, 'utf8'), ts.ScriptTarget.Latest, true, path.endsWith('x') ? ts.ScriptKind.TSX : ts.ScriptKind.TS);
+  const source = ts.createSourceFile(
+    path,
+    readFileSync(path, 'utf8'),
+    ts.ScriptTarget.Latest,
+    true,
+    path.endsWith('x') ? ts.ScriptKind.TSX : ts.ScriptKind.TS,
+  );
   const out: { text: string; line: number }[] = [];
   const visit = (node: ts.Node) => {
-    if (ts.isStringLiteral(node) || ts.isNoSubstitutionTemplateLiteral(node) || ts.isTemplateHead(node) || ts.isTemplateMiddle(node) || ts.isTemplateTail(node) || ts.isJsxText(node)) {
+    if (
+      ts.isStringLiteral(node) ||
+      ts.isNoSubstitutionTemplateLiteral(node) ||
+      ts.isTemplateHead(node) ||
+      ts.isTemplateMiddle(node) ||
+      ts.isTemplateTail(node) ||
+      ts.isJsxText(node)
+    ) {
       out.push({ text: node.text, line: source.getLineAndCharacterOfPosition(node.getStart()).line + 1 });
     }
     // Import paths are not text anyone reads.
@@ -53,7 +66,11 @@ describe('customer-facing text carries no provenance markers', () => {
   it('finds none in any string of app/ or lib/', () => {
     const all = SCANNED.flatMap((d) => files(join(ROOT, d)));
     expect(all.length).toBeGreaterThan(50);
-    const hits = all.flatMap((f) => strings(f).filter((s) => PROVENANCE_MARKER.test(s.text)).map((s) => `${relative(ROOT, f)}:${s.line}: ${s.text.trim().slice(0, 100)}`));
+    const hits = all.flatMap((f) =>
+      strings(f)
+        .filter((s) => PROVENANCE_MARKER.test(s.text))
+        .map((s) => `${relative(ROOT, f)}:${s.line}: ${s.text.trim().slice(0, 100)}`),
+    );
     expect(hits).toEqual([]);
   }, 120_000);
 });

@@ -39,34 +39,60 @@ describe('wire size parsers are linear', () => {
   });
 
   it.each([
-    ['18', 18], ['AWG 18', 18], ['awg18', 18], ['18 AWG', 18], ['18awg', 18], ['#18', 18], ['# 18', 18], ['4/0', -3],
+    ['18', 18],
+    ['AWG 18', 18],
+    ['awg18', 18],
+    ['18 AWG', 18],
+    ['18awg', 18],
+    ['#18', 18],
+    ['# 18', 18],
+    ['4/0', -3],
   ])('still reads AWG "%s"', (label, n) => expect(parseAwg(label)).toBe(n));
 
-  it.each([['0.85', 0.85], ['0,85', 0.85], ['0.85 mm', 0.85], ['0.85mm', 0.85], ['.85', 0.85], ['1.06', 1.06]])(
-    'still reads metric "%s"',
-    (label, d) => expect(parseMetricSize(label)?.diameterMm).toBeCloseTo(d, 6),
+  it.each([
+    ['0.85', 0.85],
+    ['0,85', 0.85],
+    ['0.85 mm', 0.85],
+    ['0.85mm', 0.85],
+    ['.85', 0.85],
+    ['1.06', 1.06],
+  ])('still reads metric "%s"', (label, d) => expect(parseMetricSize(label)?.diameterMm).toBeCloseTo(d, 6));
+
+  it.each(['0.85.1', '1.', '.', '', 'mm', '0.85 m m', '-0.85'])('refuses metric "%s"', (label) =>
+    expect(parseMetricSize(label)).toBeNull(),
   );
 
-  it.each(['0.85.1', '1.', '.', '', 'mm', '0.85 m m', '-0.85'])('refuses metric "%s"', (label) => expect(parseMetricSize(label)).toBeNull());
-
   it('accepts exactly what the old patterns accepted on short labels (property)', () => {
-    const oldAwg = (size: string) => size.trim().toLowerCase().replace(/^awg\s*/, '').replace(/^#\s*/, '').replace(/\s*awg$/, '');
+    const oldAwg = (size: string) =>
+      size
+        .trim()
+        .toLowerCase()
+        .replace(/^awg\s*/, '')
+        .replace(/^#\s*/, '')
+        .replace(/\s*awg$/, '');
     const oldMetric = (size: string) => {
-      const s = size.trim().toLowerCase().replace(/\s*mm$/, '').replace(',', '.');
+      const s = size
+        .trim()
+        .toLowerCase()
+        .replace(/\s*mm$/, '')
+        .replace(',', '.');
       return /^\d*\.?\d+$/.test(s) ? Number(s) : null;
     };
     const piece = fc.constantFrom('1', '8', '0', '.', ',', ' ', 'awg', 'AWG', '#', 'mm', '/', '4', '5');
     fc.assert(
-      fc.property(fc.array(piece, { maxLength: 8 }).map((a) => a.join('')), (label) => {
-        const o = oldAwg(label);
-        // the rest of parseAwg is unchanged: what is left after the old stripping must be a bare gauge
-        const expectedAwg = /awg|#|\s/.test(o) ? null : parseAwg(o);
-        expect(parseAwg(label)).toBe(expectedAwg);
-        const m = oldMetric(label);
-        const got = parseMetricSize(label);
-        if (m === null) expect(got).toBeNull();
-        else expect(got?.diameterMm ?? null).toBe(parseMetricSize(String(m))?.diameterMm ?? null);
-      }),
+      fc.property(
+        fc.array(piece, { maxLength: 8 }).map((a) => a.join('')),
+        (label) => {
+          const o = oldAwg(label);
+          // the rest of parseAwg is unchanged: what is left after the old stripping must be a bare gauge
+          const expectedAwg = /awg|#|\s/.test(o) ? null : parseAwg(o);
+          expect(parseAwg(label)).toBe(expectedAwg);
+          const m = oldMetric(label);
+          const got = parseMetricSize(label);
+          if (m === null) expect(got).toBeNull();
+          else expect(got?.diameterMm ?? null).toBe(parseMetricSize(String(m))?.diameterMm ?? null);
+        },
+      ),
       { numRuns: 3000 },
     );
   });
@@ -91,7 +117,11 @@ describe('NUL bytes are refused with a field error', () => {
     expect(findNul({ a: 'clean', b: [1, 2, 'x'] })).toBeNull();
     const deep: unknown[] = [];
     let cur = deep;
-    for (let i = 0; i < 100_000; i++) { const next: unknown[] = []; cur.push(next); cur = next; }
+    for (let i = 0; i < 100_000; i++) {
+      const next: unknown[] = [];
+      cur.push(next);
+      cur = next;
+    }
     const wide = Array.from({ length: 1_000_000 }, () => 'x');
     const t0 = performance.now();
     expect(findNul(deep)).toBeNull();

@@ -10,5 +10,12 @@ export async function JobLosses(props: Props) {
   const jobId = 'jobId' in props ? props.jobId : (await findJobRef(props.jobNumber))?.id;
   if (!jobId) return null;
   const result = await lossStatementForJob(jobId, props.comparing);
-  return <LossStatementView result={result} headingId={props.headingId} level={props.level ?? 'h3'} title={props.comparing ? 'Copper loss and efficiency with this redesign' : undefined} />;
+  return (
+    <LossStatementView
+      result={result}
+      headingId={props.headingId}
+      level={props.level ?? 'h3'}
+      title={props.comparing ? 'Copper loss and efficiency with this redesign' : undefined}
+    />
+  );
 }

@@ -11,13 +11,27 @@ import { useRouter } from 'next/navigation';
 import { FormProvider, useFieldArray, useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { saveCoreTestAction } from '@/lib/core-test/core-test-actions';
-import { CORE_TEST_STAGES, CORE_TEST_STAGE_LABELS, MAX_HOT_SPOTS, coreTestFormSchema, type CoreTestForm, type CoreTestFormInput } from '@/lib/core-test/core-test-schema';
+import {
+  CORE_TEST_STAGES,
+  CORE_TEST_STAGE_LABELS,
+  MAX_HOT_SPOTS,
+  coreTestFormSchema,
+  type CoreTestForm,
+  type CoreTestFormInput,
+} from '@/lib/core-test/core-test-schema';
 import { FIX_FIELDS_SUMMARY, showActionFailure } from '@/lib/errors/form-errors';
 import { FormStatus } from '@/app/_components/form-status';
 import { jobRoutes } from '@/lib/routes';
 import { NumberField, SelectField, TextField } from '../final-tests/test-fields';
 
-export function CoreTestFormView({ values, editing, staff, jobNumber, slots, coreLengthMm }: {
+export function CoreTestFormView({
+  values,
+  editing,
+  staff,
+  jobNumber,
+  slots,
+  coreLengthMm,
+}: {
   values: CoreTestFormInput;
   editing: { recordId: string; version: number; label: string } | null;
   staff: { id: string; name: string }[];
@@ -34,25 +48,32 @@ export function CoreTestFormView({ values, editing, staff, jobNumber, slots, cor
   const spots = useFieldArray({ control, name: 'data.hotSpots' });
 
   const onSubmit = handleSubmit(
-    (v) => startTransition(async () => {
-      const result = await saveCoreTestAction({ ...v, recordId: target?.recordId ?? '', version: target?.version ?? '' });
-      if (result.ok) {
-        setSummary({ tone: 'ok', text: result.message ?? 'Saved.' });
-        if (target) setTarget({ recordId: result.data.recordId, version: result.data.version });
-        else reset(values);
-        router.refresh();
-      } else {
-        showActionFailure(result, { setError, setSummary, onStale: () => router.refresh() });
-      }
-    }),
+    (v) =>
+      startTransition(async () => {
+        const result = await saveCoreTestAction({ ...v, recordId: target?.recordId ?? '', version: target?.version ?? '' });
+        if (result.ok) {
+          setSummary({ tone: 'ok', text: result.message ?? 'Saved.' });
+          if (target) setTarget({ recordId: result.data.recordId, version: result.data.version });
+          else reset(values);
+          router.refresh();
+        } else {
+          showActionFailure(result, { setError, setSummary, onStale: () => router.refresh() });
+        }
+      }),
     () => setSummary({ tone: 'bad', text: FIX_FIELDS_SUMMARY }),
   );
 
   return (
     <FormProvider {...methods}>
       <form onSubmit={onSubmit} noValidate aria-labelledby="core-form-h">
-        <h2 id="core-form-h" style={{ marginTop: 0 }}>{editing ? `Edit the test ${editing.label}` : 'Record a core-loss test'}</h2>
-        {editing && <p className="small"><Link href={jobRoutes(jobNumber).coreTest}>Record a new test instead</Link></p>}
+        <h2 id="core-form-h" style={{ marginTop: 0 }}>
+          {editing ? `Edit the test ${editing.label}` : 'Record a core-loss test'}
+        </h2>
+        {editing && (
+          <p className="small">
+            <Link href={jobRoutes(jobNumber).coreTest}>Record a new test instead</Link>
+          </p>
+        )}
         <div className="grid">
           <SelectField path="stage" label="When" options={CORE_TEST_STAGES.map((s) => [s, CORE_TEST_STAGE_LABELS[s]] as const)} />
           <TextField path="testedAt" label="Tested at (UTC, YYYY-MM-DDTHH:MM)" />
@@ -79,17 +100,24 @@ export function CoreTestFormView({ values, editing, staff, jobNumber, slots, cor
         </fieldset>
         <fieldset>
           <legend>Hot spots</legend>
-          <p className="hint">Slot number{slots ? ` (1–${slots})` : ''}, distance from the drive-end face of the core{coreLengthMm ? ` (0–${coreLengthMm} mm)` : ''}, and the rise above the surrounding core.</p>
+          <p className="hint">
+            Slot number{slots ? ` (1–${slots})` : ''}, distance from the drive-end face of the core
+            {coreLengthMm ? ` (0–${coreLengthMm} mm)` : ''}, and the rise above the surrounding core.
+          </p>
           {spots.fields.map((field, i) => (
             <div key={field.id} className="grid hotspot-row" role="group" aria-label={`Hot spot ${i + 1}`}>
               <NumberField path={`data.hotSpots.${i}.slot`} label={`Hot spot ${i + 1}: slot`} />
               <NumberField path={`data.hotSpots.${i}.axialPositionMm`} label="From the drive end" unit="mm" />
               <NumberField path={`data.hotSpots.${i}.riseK`} label="Rise" unit="K" />
-              <button type="button" className="btn secondary" onClick={() => spots.remove(i)}>Remove hot spot {i + 1}</button>
+              <button type="button" className="btn secondary" onClick={() => spots.remove(i)}>
+                Remove hot spot {i + 1}
+              </button>
             </div>
           ))}
           {spots.fields.length < MAX_HOT_SPOTS && (
-            <button type="button" className="btn secondary" onClick={() => spots.append({ slot: '', axialPositionMm: '', riseK: '' })}>Add a hot spot</button>
+            <button type="button" className="btn secondary" onClick={() => spots.append({ slot: '', axialPositionMm: '', riseK: '' })}>
+              Add a hot spot
+            </button>
           )}
         </fieldset>
         <div className="grid">
@@ -97,7 +125,9 @@ export function CoreTestFormView({ values, editing, staff, jobNumber, slots, cor
           <TextField path="data.notes" label="Notes" />
         </div>
         <FormStatus message={summary?.text} tone={summary?.tone ?? 'ok'} />
-        <button type="submit" className="btn" disabled={pending}>{pending ? 'Saving…' : editing ? 'Save changes' : 'Save test'}</button>
+        <button type="submit" className="btn" disabled={pending}>
+          {pending ? 'Saving…' : editing ? 'Save changes' : 'Save test'}
+        </button>
       </form>
     </FormProvider>
   );

@@ -22,7 +22,6 @@ import { loadJobRoute } from '@/lib/jobs/job-route';
 import { JobLosses } from '../_losses/job-losses';
 import { isRecordLocked } from '@/lib/jobs/record-locks';
 
-
 export async function generateMetadata({ params }: { params: Promise<{ number: string }> }) {
   return { title: `Final tests · job ${(await params).number}` };
 }
@@ -44,24 +43,44 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
   const me = staff.find((s) => s.id === user.id)?.id ?? '';
 
   const newValues: TestRecordFormInput = {
-    jobId: job.id, recordId: '', version: '', previousSequence: current?.sequence ?? 0,
-    testedAt: nowLocal(), testedById: me, data: newRecordDefaults(motor, sheet?.sheet ?? null, current?.data ?? null),
+    jobId: job.id,
+    recordId: '',
+    version: '',
+    previousSequence: current?.sequence ?? 0,
+    testedAt: nowLocal(),
+    testedById: me,
+    data: newRecordDefaults(motor, sheet?.sheet ?? null, current?.data ?? null),
   };
   const editValues: TestRecordFormInput | null = current
     ? {
-        jobId: job.id, recordId: current.id, version: current.version, previousSequence: current.sequence,
-        testedAt: toZonedLocal(current.testedAt), testedById: current.testedBy?.id ?? '', data: recordToFormData(current.data),
+        jobId: job.id,
+        recordId: current.id,
+        version: current.version,
+        previousSequence: current.sequence,
+        testedAt: toZonedLocal(current.testedAt),
+        testedById: current.testedBy?.id ?? '',
+        data: recordToFormData(current.data),
       }
     : null;
 
   return (
     <>
-      <p className="no-print"><Link href={`/jobs/${job.number}`}>← Job {job.number}</Link></p>
-      <h1>Final tests · job {job.number} · {job.customer.company}</h1>
+      <p className="no-print">
+        <Link href={`/jobs/${job.number}`}>← Job {job.number}</Link>
+      </p>
+      <h1>
+        Final tests · job {job.number} · {job.customer.company}
+      </h1>
 
       <section className="notice warn cautions" aria-labelledby="cautions-h">
-        <h2 id="cautions-h" style={{ marginTop: 0 }}>⚠ Test hazards</h2>
-        <ul>{TEST_HAZARD_CAUTIONS.map((c) => <li key={c}>{c}</li>)}</ul>
+        <h2 id="cautions-h" style={{ marginTop: 0 }}>
+          ⚠ Test hazards
+        </h2>
+        <ul>
+          {TEST_HAZARD_CAUTIONS.map((c) => (
+            <li key={c}>{c}</li>
+          ))}
+        </ul>
       </section>
 
       {!sheet && <p className="notice">No as-found sheet is saved for this job: the basis below comes from the nameplate alone.</p>}
@@ -78,9 +97,12 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
         {current && (
           <>
             <p className="muted small">
-              Tested {fmt.dateTime(current.testedAt)} by {current.testedBy?.name ?? '—'} · instruments {current.instrumentSerials.join(', ') || '—'} · version {current.version}
+              Tested {fmt.dateTime(current.testedAt)} by {current.testedBy?.name ?? '—'} · instruments{' '}
+              {current.instrumentSerials.join(', ') || '—'} · version {current.version}
             </p>
-            <p data-testid="current-rating"><strong>Verdicts {ratingSentence(current.data.basis)}.</strong></p>
+            <p data-testid="current-rating">
+              <strong>Verdicts {ratingSentence(current.data.basis)}.</strong>
+            </p>
             <CurrentJudgement data={current.data} />
             <ResistanceAgainstPrediction expected={expected} data={current.data} />
             <RecordReadings data={current.data} />
@@ -88,7 +110,9 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
         )}
         {closed && <p className="notice">This job is {STATUS_LABELS[job.status].toLowerCase()}: its test records are kept as they were.</p>}
       </section>
-      <section className="card"><JobLosses jobId={job.id} headingId="losses-h" level="h2" /></section>
+      <section className="card">
+        <JobLosses jobId={job.id} headingId="losses-h" level="h2" />
+      </section>
 
       {mayRecord && (
         <section className="card">
@@ -106,10 +130,14 @@ export default async function TestsPage({ params }: { params: Promise<{ number: 
 
       {records.length > 1 && (
         <section className="card history" aria-labelledby="history-h">
-          <h2 id="history-h" style={{ marginTop: 0 }}>Earlier records</h2>
+          <h2 id="history-h" style={{ marginTop: 0 }}>
+            Earlier records
+          </h2>
           {records.slice(1).map((r) => (
             <details key={r.id}>
-              <summary>#{r.sequence} · {fmt.dateTime(r.testedAt)} · {r.testedBy?.name ?? '—'} · {r.verdict}</summary>
+              <summary>
+                #{r.sequence} · {fmt.dateTime(r.testedAt)} · {r.testedBy?.name ?? '—'} · {r.verdict}
+              </summary>
               <CurrentJudgement data={r.data} />
               <RecordReadings data={r.data} />
             </details>
@@ -125,22 +153,34 @@ function CurrentJudgement({ data }: { data: Parameters<typeof judgeTestRecord>[0
   return (
     <>
       <OverallVerdict judgement={j} />
-      {j.sections.map((s) => <SectionVerdict key={s.key} section={s} id={`saved-${s.key}`} />)}
+      {j.sections.map((s) => (
+        <SectionVerdict key={s.key} section={s} id={`saved-${s.key}`} />
+      ))}
     </>
   );
 }
 
 /** The final resistance beside the prediction from the winding data (information, not a verdict). */
-function ResistanceAgainstPrediction({ expected, data }: { expected: ExpectedResistance | null; data: Parameters<typeof judgeTestRecord>[0] }) {
+function ResistanceAgainstPrediction({
+  expected,
+  data,
+}: {
+  expected: ExpectedResistance | null;
+  data: Parameters<typeof judgeTestRecord>[0];
+}) {
   if (!expected) return null;
   const c = compareFinalResistance(expected, data.resistance);
   if (!c) return null;
   const off = Math.abs(c.differencePercent) > RESISTANCE_CHECK_PERCENT;
   return (
     <p className={`notice ${off ? 'warn' : 'ok'}`} data-testid="resistance-vs-prediction">
-      {off ? '⚠ ' : ''}Winding resistance against the prediction from the {expected.source}: expected {fmt.num(c.expectedOhm, 4, 'Ω')} {c.between} at{' '}
-      {fmt.num(c.temperatureC, 1, '°C')}, measured average {fmt.num(c.finalAverageOhm, 4, 'Ω')} ({c.differencePercent >= 0 ? '+' : ''}{c.differencePercent.toFixed(1)} %).
-      {off ? ` More than ${RESISTANCE_CHECK_PERCENT} % apart: check the turns, connections and wire size against the data before the motor leaves.` : ''}
+      {off ? '⚠ ' : ''}Winding resistance against the prediction from the {expected.source}: expected {fmt.num(c.expectedOhm, 4, 'Ω')}{' '}
+      {c.between} at {fmt.num(c.temperatureC, 1, '°C')}, measured average {fmt.num(c.finalAverageOhm, 4, 'Ω')} (
+      {c.differencePercent >= 0 ? '+' : ''}
+      {c.differencePercent.toFixed(1)} %).
+      {off
+        ? ` More than ${RESISTANCE_CHECK_PERCENT} % apart: check the turns, connections and wire size against the data before the motor leaves.`
+        : ''}
     </p>
   );
 }

@@ -14,7 +14,10 @@ export function RecordReadings({ data }: { data: TestDataValues }) {
             <h3 className="small">{s.title}</h3>
             <dl className="dl small">
               {s.rows.map((r) => (
-                <div key={r.label} style={{ display: 'contents' }}><dt>{r.label}</dt><dd>{r.value}</dd></div>
+                <div key={r.label} style={{ display: 'contents' }}>
+                  <dt>{r.label}</dt>
+                  <dd>{r.value}</dd>
+                </div>
               ))}
             </dl>
           </div>

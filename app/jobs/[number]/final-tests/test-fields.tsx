@@ -12,7 +12,9 @@ import { temperatureText, velocityText } from '@/lib/final-tests/display';
 export const idOf = (path: string) => path.replace(/\./g, '-');
 
 export function useFieldError(path: string): string | undefined {
-  const { formState: { errors } } = useFormContext();
+  const {
+    formState: { errors },
+  } = useFormContext();
   const e = get(errors as FieldErrors, path) as { message?: unknown } | undefined;
   return typeof e?.message === 'string' ? e.message : undefined;
 }
@@ -22,7 +24,19 @@ const toNumber = (v: unknown): number | undefined => {
   return Number.isFinite(n) ? n : undefined;
 };
 
-export function NumberField({ path, label, unit, hint, readout }: { path: string; label: string; unit?: string; hint?: string; readout?: 'temperature' | 'velocity' }) {
+export function NumberField({
+  path,
+  label,
+  unit,
+  hint,
+  readout,
+}: {
+  path: string;
+  label: string;
+  unit?: string;
+  hint?: string;
+  readout?: 'temperature' | 'velocity';
+}) {
   const { register } = useFormContext();
   const error = useFieldError(path);
   return (
@@ -38,7 +52,19 @@ export function TextField({ path, label, hint }: { path: string; label: string; 
   return <InputField id={idOf(path)} label={label} hint={hint} error={useFieldError(path)} registration={register(path)} />;
 }
 
-export function SelectField({ path, label, options, hint, blank }: { path: string; label: string; options: readonly (readonly [string, string])[]; hint?: string; blank?: string }) {
+export function SelectField({
+  path,
+  label,
+  options,
+  hint,
+  blank,
+}: {
+  path: string;
+  label: string;
+  options: readonly (readonly [string, string])[];
+  hint?: string;
+  blank?: string;
+}) {
   const { register } = useFormContext();
   const error = useFieldError(path);
   const id = idOf(path);
@@ -46,7 +72,11 @@ export function SelectField({ path, label, options, hint, blank }: { path: strin
     <Field id={id} label={label} hint={hint} error={error}>
       <select {...register(path)} {...describe(id, error, hint)}>
         {blank !== undefined && <option value="">{blank}</option>}
-        {options.map(([value, text]) => <option key={value} value={value}>{text}</option>)}
+        {options.map(([value, text]) => (
+          <option key={value} value={value}>
+            {text}
+          </option>
+        ))}
       </select>
     </Field>
   );
@@ -57,5 +87,9 @@ function Readout({ path, kind }: { path: string; kind: 'temperature' | 'velocity
   const value = toNumber(useWatch({ name: path }));
   if (value === undefined) return null;
   const text = kind === 'temperature' ? temperatureText(value) : velocityText(value);
-  return <p className="readout" data-testid={`readout-${idOf(path)}`}>= {text.replace(/^[^(]*\(/, '').replace(/\)$/, '')}</p>;
+  return (
+    <p className="readout" data-testid={`readout-${idOf(path)}`}>
+      = {text.replace(/^[^(]*\(/, '').replace(/\)$/, '')}
+    </p>
+  );
 }

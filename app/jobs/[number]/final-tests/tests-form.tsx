@@ -31,8 +31,15 @@ import { NumberField, SelectField, TextField, idOf, useFieldError } from './test
 import { OverallVerdict, SectionVerdict } from './judgement-view';
 import { callAction } from '@/lib/errors/call-action';
 
-const RESULT_OPTIONS = [['pass', 'Pass'], ['fail', 'Fail']] as const;
-const CASE_LABELS: Record<(typeof HIPOT_CASES)[number], string> = { new: 'New winding', repeat: 'Repeat test (80 %)', reconditioned: 'Reconditioned / partial rewind' };
+const RESULT_OPTIONS = [
+  ['pass', 'Pass'],
+  ['fail', 'Fail'],
+] as const;
+const CASE_LABELS: Record<(typeof HIPOT_CASES)[number], string> = {
+  new: 'New winding',
+  repeat: 'Repeat test (80 %)',
+  reconditioned: 'Reconditioned / partial rewind',
+};
 const PRACTICE_LABELS: Record<(typeof HIPOT_PRACTICES)[number], string> = { nema: 'NEMA MG 1 / ANSI/EASA AR100', iec: 'IEC 60034-1' };
 const CATEGORY_LABELS: Record<(typeof IR_CATEGORIES)[number], string> = {
   'random-wound': 'Random-wound or below 1 kV (5 MΩ)',
@@ -69,7 +76,9 @@ export function TestsForm(props: {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [mode, setMode] = useState<'edit' | 'new'>(props.editValues ? 'edit' : 'new');
-  const [target, setTarget] = useState<Target>(current && props.editValues ? { ...current, previousSequence: current.sequence } : { previousSequence: current?.sequence ?? 0 });
+  const [target, setTarget] = useState<Target>(
+    current && props.editValues ? { ...current, previousSequence: current.sequence } : { previousSequence: current?.sequence ?? 0 },
+  );
   const [conflict, setConflict] = useState(false);
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(null);
   const methods = useForm<TestRecordFormInput, unknown, TestRecordForm>({
@@ -94,7 +103,9 @@ export function TestsForm(props: {
   const onSubmit = handleSubmit(
     (values) =>
       startTransition(async () => {
-        const result = await callAction(() => saveTestRecordAction({ ...values, ...target, recordId: target.recordId ?? '', version: target.version ?? '' }));
+        const result = await callAction(() =>
+          saveTestRecordAction({ ...values, ...target, recordId: target.recordId ?? '', version: target.version ?? '' }),
+        );
         if (result.ok) {
           setTarget({ recordId: result.data.recordId, version: result.data.version, previousSequence: result.data.sequence });
           setMode('edit');
@@ -102,7 +113,14 @@ export function TestsForm(props: {
           setSummary({ tone: result.data.verdict === 'FAIL' ? 'warn' : 'ok', text: result.message ?? 'Saved.' });
           router.refresh();
         } else {
-          showActionFailure(result, { setError, setSummary, onStale: () => { setConflict(true); router.refresh(); } });
+          showActionFailure(result, {
+            setError,
+            setSummary,
+            onStale: () => {
+              setConflict(true);
+              router.refresh();
+            },
+          });
         }
       }),
     () => setSummary({ tone: 'bad', text: FIX_FIELDS_SUMMARY }),
@@ -112,31 +130,50 @@ export function TestsForm(props: {
     if (!current) return;
     setTarget(mode === 'edit' ? { ...current, previousSequence: current.sequence } : { previousSequence: current.sequence });
     setConflict(false);
-    setSummary({ tone: 'warn', text: `Your readings are still in the form. Save again to apply them ${mode === 'edit' ? `over record #${current.sequence} as it is now` : `as record #${current.sequence + 1}`}.` });
+    setSummary({
+      tone: 'warn',
+      text: `Your readings are still in the form. Save again to apply them ${mode === 'edit' ? `over record #${current.sequence} as it is now` : `as record #${current.sequence + 1}`}.`,
+    });
   };
 
-  const heading = mode === 'edit' && target.recordId ? `Edit test record #${target.previousSequence}` : `New test record #${target.previousSequence + 1}${target.previousSequence > 0 ? ' (retest)' : ''}`;
+  const heading =
+    mode === 'edit' && target.recordId
+      ? `Edit test record #${target.previousSequence}`
+      : `New test record #${target.previousSequence + 1}${target.previousSequence > 0 ? ' (retest)' : ''}`;
 
   return (
     <FormProvider {...methods}>
       <form onSubmit={onSubmit} noValidate aria-label="Final tests" className="tests-layout">
         <div className="row no-print" style={{ justifyContent: 'space-between' }}>
           <h2 style={{ margin: 0 }}>{heading}</h2>
-          {current && props.editValues && (
-            mode === 'edit'
-              ? <button type="button" className="btn quiet" onClick={() => switchTo('new')}>Start a retest (record #{current.sequence + 1})</button>
-              : <button type="button" className="btn quiet" onClick={() => switchTo('edit')}>Back to editing record #{current.sequence}</button>
-          )}
+          {current &&
+            props.editValues &&
+            (mode === 'edit' ? (
+              <button type="button" className="btn quiet" onClick={() => switchTo('new')}>
+                Start a retest (record #{current.sequence + 1})
+              </button>
+            ) : (
+              <button type="button" className="btn quiet" onClick={() => switchTo('edit')}>
+                Back to editing record #{current.sequence}
+              </button>
+            ))}
         </div>
         <FormStatus message={summary?.text} tone={summary?.tone ?? 'ok'} />
         {conflict && (
           <div className="notice warn" data-testid="conflict">
             {current ? (
               <>
-                <p><strong>Saved by someone else meanwhile.</strong> The newest record is now #{current.sequence} (version {current.version}); it is shown above the form.</p>
-                <button type="button" className="btn secondary" onClick={retryOnCurrent}>Keep my readings and retry</button>
+                <p>
+                  <strong>Saved by someone else meanwhile.</strong> The newest record is now #{current.sequence} (version {current.version}
+                  ); it is shown above the form.
+                </p>
+                <button type="button" className="btn secondary" onClick={retryOnCurrent}>
+                  Keep my readings and retry
+                </button>
               </>
-            ) : <p>Loading what the other person saved…</p>}
+            ) : (
+              <p>Loading what the other person saved…</p>
+            )}
           </div>
         )}
         <Sections control={methods.control} staff={props.staff} sources={props.sources} />
@@ -156,7 +193,15 @@ function Live({ j, section }: { j: TestJudgement | null; section: SectionKey }) 
   return s ? <SectionVerdict section={s} /> : null;
 }
 
-function Sections({ control, staff, sources }: { control: Control<TestRecordFormInput>; staff: { id: string; name: string }[]; sources: BasisSources }) {
+function Sections({
+  control,
+  staff,
+  sources,
+}: {
+  control: Control<TestRecordFormInput>;
+  staff: { id: string; name: string }[];
+  sources: BasisSources;
+}) {
   const j = useJudgement(control);
   const between = useWatch({ control, name: 'data.resistance.between' });
   const testedByError = useFieldError('testedById');
@@ -169,7 +214,13 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
         <legend>Who tested, and when</legend>
         <div className="grid">
           <DateTimeField path="testedAt" label="Tested at (UTC)" />
-          <SelectField path="testedById" label="Tested by" options={staff.map((s) => [s.id, s.name] as const)} blank="Pick a person" hint={testedByError ? undefined : 'Signs the record.'} />
+          <SelectField
+            path="testedById"
+            label="Tested by"
+            options={staff.map((s) => [s.id, s.name] as const)}
+            blank="Pick a person"
+            hint={testedByError ? undefined : 'Signs the record.'}
+          />
         </div>
       </fieldset>
 
@@ -178,9 +229,27 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
         <div className="grid">
           <NumberField path="data.basis.ratedVoltageV" label="Rated voltage" unit="V" hint={sources.ratedVoltageV} />
           <NumberField path="data.basis.ratedOutputKw" label="Rated output" unit="kW" hint="Only for the NEMA rule on small motors." />
-          <SelectField path="data.basis.insulationClass" label="Insulation class" options={INSULATION_CLASSES.map((c) => [c, `Class ${c}`] as const)} blank="Pick a class" hint={sources.insulationClass} />
-          <SelectField path="data.basis.windingKind" label="Winding" options={[['random', 'Random-wound (round wire)'], ['form', 'Form-wound (formed coils)']]} hint={sources.windingKind} />
-          <SelectField path="data.basis.irCategory" label="IEEE 43 IR minimum" options={IR_CATEGORIES.map((c) => [c, CATEGORY_LABELS[c]] as const)} />
+          <SelectField
+            path="data.basis.insulationClass"
+            label="Insulation class"
+            options={INSULATION_CLASSES.map((c) => [c, `Class ${c}`] as const)}
+            blank="Pick a class"
+            hint={sources.insulationClass}
+          />
+          <SelectField
+            path="data.basis.windingKind"
+            label="Winding"
+            options={[
+              ['random', 'Random-wound (round wire)'],
+              ['form', 'Form-wound (formed coils)'],
+            ]}
+            hint={sources.windingKind}
+          />
+          <SelectField
+            path="data.basis.irCategory"
+            label="IEEE 43 IR minimum"
+            options={IR_CATEGORIES.map((c) => [c, CATEGORY_LABELS[c]] as const)}
+          />
           <NumberField path="data.basis.frequencyHz" label="Rated frequency" unit="Hz" hint={sources.rating} />
           <NumberField path="data.basis.poles" label="Poles" hint="With the frequency, gives the synchronous speed." />
           <NumberField path="data.basis.ratedCurrentA" label="Rated current" unit="A" />
@@ -192,7 +261,12 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
       <fieldset>
         <legend>Insulation resistance and polarization index (winding to frame)</legend>
         <div className="grid">
-          <NumberField path="data.ir.testVoltageV" label="Test voltage" unit="V DC" hint={irv ? `Recommended ${irv.minV === irv.maxV ? `${irv.minV} V` : `${irv.minV}–${irv.maxV} V`} (IEEE 43).` : undefined} />
+          <NumberField
+            path="data.ir.testVoltageV"
+            label="Test voltage"
+            unit="V DC"
+            hint={irv ? `Recommended ${irv.minV === irv.maxV ? `${irv.minV} V` : `${irv.minV}–${irv.maxV} V`} (IEEE 43).` : undefined}
+          />
           <NumberField path="data.ir.temperatureC" label="Winding temperature" unit="°C" readout="temperature" />
           <NumberField path="data.ir.ir1MinMOhm" label="IR at 1 minute" unit="MΩ" />
           <NumberField path="data.ir.ir10MinMOhm" label="IR at 10 minutes" unit="MΩ" />
@@ -208,20 +282,43 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
         <legend>High-potential test (winding to frame)</legend>
         <div className="grid">
           <SelectField path="data.hipot.case" label="Case" options={HIPOT_CASES.map((c) => [c, CASE_LABELS[c]] as const)} />
-          <SelectField path="data.hipot.practice" label="Practice" options={HIPOT_PRACTICES.map((p) => [p, PRACTICE_LABELS[p]] as const)} hint={sources.practice} />
+          <SelectField
+            path="data.hipot.practice"
+            label="Practice"
+            options={HIPOT_PRACTICES.map((p) => [p, PRACTICE_LABELS[p]] as const)}
+            hint={sources.practice}
+          />
         </div>
         <p className="proposed" data-testid="hipot-proposed">
-          Proposed: <strong>{levels ? `${levels.acV} V AC` : '—'}</strong> for 1 minute, or <strong>{levels ? `${levels.dcV} V DC` : '—'}</strong>
+          Proposed: <strong>{levels ? `${levels.acV} V AC` : '—'}</strong> for 1 minute, or{' '}
+          <strong>{levels ? `${levels.dcV} V DC` : '—'}</strong>
           {levels && <span className="small muted"> — {levels.rule}</span>}
         </p>
         <div className="grid">
           <SelectField path="data.hipot.kind" label="Applied as" options={HIPOT_KINDS.map((k) => [k, k.toUpperCase()] as const)} />
           <NumberField path="data.hipot.appliedV" label="Applied voltage" unit="V" />
-          <NumberField path="data.hipot.durationS" label="Held for" unit="s" hint={`The rule asks ${HIPOT_DURATION_S} s at the full level.`} />
+          <NumberField
+            path="data.hipot.durationS"
+            label="Held for"
+            unit="s"
+            hint={`The rule asks ${HIPOT_DURATION_S} s at the full level.`}
+          />
           <NumberField path="data.hipot.leakageMa" label="Leakage current" unit="mA" hint="DC: 0.004 mA = 4 µA. Recorded, not judged." />
-          <SelectField path="data.hipot.result" label="Did the winding hold?" options={[['pass', 'Held: no breakdown'], ['fail', 'Broke down']]} blank="Not tested yet" />
+          <SelectField
+            path="data.hipot.result"
+            label="Did the winding hold?"
+            options={[
+              ['pass', 'Held: no breakdown'],
+              ['fail', 'Broke down'],
+            ]}
+            blank="Not tested yet"
+          />
           <TextField path="data.hipot.instrumentSerial" label="Hipot tester serial" />
-          <TextField path="data.hipot.reducedReason" label="Reason for a reduced level or time" hint="Only when the level or time was lowered on purpose (customer's instruction, repeat test). The sheet then prints a reduced-level test, never a pass." />
+          <TextField
+            path="data.hipot.reducedReason"
+            label="Reason for a reduced level or time"
+            hint="Only when the level or time was lowered on purpose (customer's instruction, repeat test). The sheet then prints a reduced-level test, never a pass."
+          />
         </div>
         <Live j={j} section="hipot" />
       </fieldset>
@@ -234,7 +331,12 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
         </div>
         {PHASE_NAMES.map((p, i) => (
           <div className="phase-row" key={p}>
-            <SelectField path={`data.surge.phases.${i}.result`} label={`Phase ${p} result`} options={RESULT_OPTIONS} blank="Not tested yet" />
+            <SelectField
+              path={`data.surge.phases.${i}.result`}
+              label={`Phase ${p} result`}
+              options={RESULT_OPTIONS}
+              blank="Not tested yet"
+            />
             <TextField path={`data.surge.phases.${i}.notes`} label={`Phase ${p} notes`} />
           </div>
         ))}
@@ -244,12 +346,22 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
       <fieldset>
         <legend>Winding resistance</legend>
         <div className="grid">
-          <SelectField path="data.resistance.between" label="Measured" options={RESISTANCE_BETWEEN.map((b) => [b, b === 'phase' ? 'Per phase' : 'Line to line'] as const)} />
+          <SelectField
+            path="data.resistance.between"
+            label="Measured"
+            options={RESISTANCE_BETWEEN.map((b) => [b, b === 'phase' ? 'Per phase' : 'Line to line'] as const)}
+          />
           {pairs.map((label, i) => (
             <NumberField key={label} path={`data.resistance.readings.${i}`} label={`Resistance, ${label}`} unit="Ω" />
           ))}
           <NumberField path="data.resistance.temperatureC" label="Winding temperature" unit="°C" readout="temperature" />
-          <NumberField path="data.resistance.referenceTemperatureC" label="Corrected to" unit="°C" readout="temperature" hint="Copper, 234.5 + t (IEEE)." />
+          <NumberField
+            path="data.resistance.referenceTemperatureC"
+            label="Corrected to"
+            unit="°C"
+            readout="temperature"
+            hint="Copper, 234.5 + t (IEEE)."
+          />
           <TextField path="data.resistance.instrumentSerial" label="Ohmmeter serial" />
         </div>
         <p className="readout" data-testid="resistance-derived">
@@ -262,10 +374,18 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
         <legend>Run test</legend>
         <div className="grid">
           <NumberField path="data.run.voltageV" label="Supply voltage" unit="V" />
-          {PHASE_NAMES.map((p, i) => <NumberField key={p} path={`data.run.currentsA.${i}`} label={`Current, phase ${p}`} unit="A" />)}
+          {PHASE_NAMES.map((p, i) => (
+            <NumberField key={p} path={`data.run.currentsA.${i}`} label={`Current, phase ${p}`} unit="A" />
+          ))}
           <NumberField path="data.run.speedRpm" label="Speed" unit="rpm" />
           <NumberField path="data.run.vibrationMmS" label="Vibration, highest reading" unit="mm/s" readout="velocity" />
-          <NumberField path="data.run.vibrationLimitMmS" label="Vibration limit" unit="mm/s" readout="velocity" hint="Same measure (peak or rms) as the reading; blank: not judged." />
+          <NumberField
+            path="data.run.vibrationLimitMmS"
+            label="Vibration limit"
+            unit="mm/s"
+            readout="velocity"
+            hint="Same measure (peak or rms) as the reading; blank: not judged."
+          />
           <NumberField path="data.run.bearingDeC" label="Bearing temperature, drive end" unit="°C" readout="temperature" />
           <NumberField path="data.run.bearingOdeC" label="Bearing temperature, opposite end" unit="°C" readout="temperature" />
           <SelectField path="data.run.result" label="Run result" options={RESULT_OPTIONS} blank="Not run yet" />
@@ -287,7 +407,11 @@ function Sections({ control, staff, sources }: { control: Control<TestRecordForm
 function RatingLine({ control }: { control: Control<TestRecordFormInput> }) {
   const data = useWatch({ control, name: 'data' });
   const judged = useMemo(() => lenientTestData(data), [data]);
-  return judged ? <p className="readout" data-testid="rating-sentence">Verdicts {ratingSentence(judged.basis)}.</p> : null;
+  return judged ? (
+    <p className="readout" data-testid="rating-sentence">
+      Verdicts {ratingSentence(judged.basis)}.
+    </p>
+  ) : null;
 }
 
 /** Tested-at date and time: datetime-local gives "YYYY-MM-DDTHH:MM", taken as UTC like every time the app shows. */
@@ -307,7 +431,9 @@ function Footer({ control, pending }: { control: Control<TestRecordFormInput>; p
   return (
     <div className="card" aria-live="polite">
       <OverallVerdict judgement={j} live />
-      <button className="btn" type="submit" disabled={pending}>{pending ? 'Saving…' : 'Save test record'}</button>
+      <button className="btn" type="submit" disabled={pending}>
+        {pending ? 'Saving…' : 'Save test record'}
+      </button>
     </div>
   );
 }

@@ -12,13 +12,38 @@ import { InputField, Field, describe } from '@/app/_components/field';
 import { FormStatus } from '@/app/_components/form-status';
 
 /** Records the customer's answer to the sent quote: accepted or declined, by whom, when, how, their order number. */
-export function DecisionForm({ quoteId, version, quoteNumber, today }: { quoteId: string; version: number; quoteNumber: string; today: string }) {
+export function DecisionForm({
+  quoteId,
+  version,
+  quoteNumber,
+  today,
+}: {
+  quoteId: string;
+  version: number;
+  quoteNumber: string;
+  today: string;
+}) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad'; text: string } | null>(null);
-  const { register, handleSubmit, setError, getValues, formState: { errors } } = useForm<DecisionInput, unknown, z.output<typeof decisionSchema>>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    getValues,
+    formState: { errors },
+  } = useForm<DecisionInput, unknown, z.output<typeof decisionSchema>>({
     resolver: zodResolver(decisionSchema),
-    defaultValues: { quoteId, version, decision: 'ACCEPTED', decidedBy: '', decidedOn: today, method: 'PHONE', customerOrderNumber: '', note: '' },
+    defaultValues: {
+      quoteId,
+      version,
+      decision: 'ACCEPTED',
+      decidedBy: '',
+      decidedOn: today,
+      method: 'PHONE',
+      customerOrderNumber: '',
+      note: '',
+    },
   });
   const onSubmit = handleSubmit(
     () =>
@@ -36,21 +61,44 @@ export function DecisionForm({ quoteId, version, quoteNumber, today }: { quoteId
       <FormStatus message={summary?.text} tone={summary?.tone ?? 'ok'} />
       <fieldset>
         <legend>Decision</legend>
-        <label className="inline"><input type="radio" value="ACCEPTED" {...register('decision')} /> Accepted</label>{' '}
-        <label className="inline"><input type="radio" value="DECLINED" {...register('decision')} /> Declined</label>
+        <label className="inline">
+          <input type="radio" value="ACCEPTED" {...register('decision')} /> Accepted
+        </label>{' '}
+        <label className="inline">
+          <input type="radio" value="DECLINED" {...register('decision')} /> Declined
+        </label>
       </fieldset>
       <div className="grid">
-        <InputField id="decision-by" label="Decided by (customer’s person)" error={errors.decidedBy?.message} registration={register('decidedBy')} autoComplete="off" />
+        <InputField
+          id="decision-by"
+          label="Decided by (customer’s person)"
+          error={errors.decidedBy?.message}
+          registration={register('decidedBy')}
+          autoComplete="off"
+        />
         <InputField id="decision-on" label="On" type="date" error={errors.decidedOn?.message} registration={register('decidedOn')} />
         <Field id="decision-method" label="How" error={errors.method?.message}>
           <select {...describe('decision-method', errors.method?.message)} {...register('method')}>
-            {DECISION_METHODS.map((m) => <option key={m} value={m}>{DECISION_METHOD_LABELS[m]}</option>)}
+            {DECISION_METHODS.map((m) => (
+              <option key={m} value={m}>
+                {DECISION_METHOD_LABELS[m]}
+              </option>
+            ))}
           </select>
         </Field>
-        <InputField id="decision-order" label="Customer order number" hint="Their purchase order or work order, if they gave one." error={errors.customerOrderNumber?.message} registration={register('customerOrderNumber')} autoComplete="off" />
+        <InputField
+          id="decision-order"
+          label="Customer order number"
+          hint="Their purchase order or work order, if they gave one."
+          error={errors.customerOrderNumber?.message}
+          registration={register('customerOrderNumber')}
+          autoComplete="off"
+        />
         <InputField id="decision-note" label="Note" error={errors.note?.message} registration={register('note')} />
       </div>
-      <button className="btn" type="submit" disabled={pending}>{pending ? 'Recording…' : 'Record decision'}</button>
+      <button className="btn" type="submit" disabled={pending}>
+        {pending ? 'Recording…' : 'Record decision'}
+      </button>
     </form>
   );
 }

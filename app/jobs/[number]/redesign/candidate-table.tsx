@@ -28,29 +28,102 @@ function Row({ c, choose, chosen, fillLimit, pinned, onPin, pinDisabled }: RowPr
   const short = c.wireNeeds.filter((n) => n.short);
   return (
     <tr className={chosen ? 'chosen' : undefined} data-key={c.key}>
-      <td className="num">{c.rank}{chosen && <><br /><span className="tag">chosen</span></>}</td>
-      <td>
-        {c.keepsAsFoundWire && <><span className="tag keep">keep the wire{c.changes.length > 0 ? ', change the turns/connection' : ': rewind as found'}</span><br /></>}
-        <strong>{w.turnsPerCoil.join('/')} turns</strong> · {w.connection === 'star' ? 'star (Y)' : 'delta (Δ)'} · {w.parallelPaths} circuit{w.parallelPaths === 1 ? '' : 's'} · {spansLabel(w.spans)} ({(c.pitch * 100).toFixed(0)} % pitch){w.layers === 1 ? ' single layer' : ''}
-        <br /><span className="small">{c.wires.label}</span>
-        {c.overPitched && <><br /><span className="out small"><span aria-hidden="true">⚠ </span>Over-pitched span: longer end turns and more copper; chosen only on request.</span></>}
-        {c.fractional && <><br /><span className="out small"><span aria-hidden="true">⚠ </span>Fractional slot: {c.subHarmonics.length > 0 ? `orders ${c.subHarmonics.slice(0, 4).map((h) => `${h.order.toFixed(2)} (${(h.relativeAmplitude * 100).toFixed(1)} %)`).join(', ')}` : 'even or sub-harmonic orders'}; engineer review.</span></>}
-      </td>
-      <td className="num">{pct(c.ratios.gap)} / {pct(c.ratios.tooth)} / {pct(c.ratios.yoke)}</td>
-      <td className="num">{c.currentDensity.aPerMm2 !== null ? <>{c.currentDensity.aPerMm2.toFixed(2)} A/mm²<br /></> : null}<span className="small">({pct(c.currentDensity.ratio)})</span></td>
       <td className="num">
-        {c.slotFill > fillLimit
-          ? <span className="out"><span aria-hidden="true">⚠ </span>{(c.slotFill * 100).toFixed(0)} %<br /><span className="small">over the {(fillLimit * 100).toFixed(0)} % shop limit, as the as-found winding is</span></span>
-          : `${(c.slotFill * 100).toFixed(0)} %`}
+        {c.rank}
+        {chosen && (
+          <>
+            <br />
+            <span className="tag">chosen</span>
+          </>
+        )}
+      </td>
+      <td>
+        {c.keepsAsFoundWire && (
+          <>
+            <span className="tag keep">keep the wire{c.changes.length > 0 ? ', change the turns/connection' : ': rewind as found'}</span>
+            <br />
+          </>
+        )}
+        <strong>{w.turnsPerCoil.join('/')} turns</strong> · {w.connection === 'star' ? 'star (Y)' : 'delta (Δ)'} · {w.parallelPaths} circuit
+        {w.parallelPaths === 1 ? '' : 's'} · {spansLabel(w.spans)} ({(c.pitch * 100).toFixed(0)} % pitch)
+        {w.layers === 1 ? ' single layer' : ''}
+        <br />
+        <span className="small">{c.wires.label}</span>
+        {c.overPitched && (
+          <>
+            <br />
+            <span className="out small">
+              <span aria-hidden="true">⚠ </span>Over-pitched span: longer end turns and more copper; chosen only on request.
+            </span>
+          </>
+        )}
+        {c.fractional && (
+          <>
+            <br />
+            <span className="out small">
+              <span aria-hidden="true">⚠ </span>Fractional slot:{' '}
+              {c.subHarmonics.length > 0
+                ? `orders ${c.subHarmonics
+                    .slice(0, 4)
+                    .map((h) => `${h.order.toFixed(2)} (${(h.relativeAmplitude * 100).toFixed(1)} %)`)
+                    .join(', ')}`
+                : 'even or sub-harmonic orders'}
+              ; engineer review.
+            </span>
+          </>
+        )}
+      </td>
+      <td className="num">
+        {pct(c.ratios.gap)} / {pct(c.ratios.tooth)} / {pct(c.ratios.yoke)}
+      </td>
+      <td className="num">
+        {c.currentDensity.aPerMm2 !== null ? (
+          <>
+            {c.currentDensity.aPerMm2.toFixed(2)} A/mm²
+            <br />
+          </>
+        ) : null}
+        <span className="small">({pct(c.currentDensity.ratio)})</span>
+      </td>
+      <td className="num">
+        {c.slotFill > fillLimit ? (
+          <span className="out">
+            <span aria-hidden="true">⚠ </span>
+            {(c.slotFill * 100).toFixed(0)} %<br />
+            <span className="small">over the {(fillLimit * 100).toFixed(0)} % shop limit, as the as-found winding is</span>
+          </span>
+        ) : (
+          `${(c.slotFill * 100).toFixed(0)} %`
+        )}
       </td>
       <td className="num small">
-        {c.wireNeeds.map((n) => <span key={n.label} className={n.short ? 'out' : undefined}>{n.short && <span aria-hidden="true">⚠ </span>}{n.kg.toFixed(2)} kg {n.label}{n.onHandKg === null ? '' : ` (${n.onHandKg.toFixed(1)} kg free)`}{n.short ? ' — short' : ''}<br /></span>)}
+        {c.wireNeeds.map((n) => (
+          <span key={n.label} className={n.short ? 'out' : undefined}>
+            {n.short && <span aria-hidden="true">⚠ </span>}
+            {n.kg.toFixed(2)} kg {n.label}
+            {n.onHandKg === null ? '' : ` (${n.onHandKg.toFixed(1)} kg free)`}
+            {n.short ? ' — short' : ''}
+            <br />
+          </span>
+        ))}
         {short.length > 0 && <span className="sr-only">Not enough wire in stock.</span>}
       </td>
-      <td className="small">{c.changes.join('; ') || 'no change'}<br /><span className="muted">score {c.score.toFixed(1)}: {c.effort.map((e) => `${e.what} ${e.points.toFixed(1)}`).join(', ') || 'no effort points'}</span></td>
+      <td className="small">
+        {c.changes.join('; ') || 'no change'}
+        <br />
+        <span className="muted">
+          score {c.score.toFixed(1)}: {c.effort.map((e) => `${e.what} ${e.points.toFixed(1)}`).join(', ') || 'no effort points'}
+        </span>
+      </td>
       <td>
-        <label className="pin no-print"><input type="checkbox" checked={pinned >= 0} disabled={pinDisabled && pinned < 0} onChange={() => onPin(c.key)} /> {pinned >= 0 ? `pinned ${pinned === 0 ? 'A' : 'B'}` : 'pin'}<span className="sr-only"> candidate {c.rank}</span></label>
-        {choose && !chosen ? <ChooseButton redesignId={choose.redesignId} version={choose.version} candidateKey={c.key} rank={c.rank} /> : null}
+        <label className="pin no-print">
+          <input type="checkbox" checked={pinned >= 0} disabled={pinDisabled && pinned < 0} onChange={() => onPin(c.key)} />{' '}
+          {pinned >= 0 ? `pinned ${pinned === 0 ? 'A' : 'B'}` : 'pin'}
+          <span className="sr-only"> candidate {c.rank}</span>
+        </label>
+        {choose && !chosen ? (
+          <ChooseButton redesignId={choose.redesignId} version={choose.version} candidateKey={c.key} rank={c.rank} />
+        ) : null}
       </td>
     </tr>
   );
@@ -69,36 +142,93 @@ export interface CandidateTableProps {
 }
 
 /** The ranked candidates of a draft (stored with the revision), two of them pinned side by side on the bands. */
-export function CandidateTable({ search, candidatesFound, choose, chosenKey, fillLimit, limits, originalFlux, originalHarmonic, poleRatio }: CandidateTableProps) {
+export function CandidateTable({
+  search,
+  candidatesFound,
+  choose,
+  chosenKey,
+  fillLimit,
+  limits,
+  originalFlux,
+  originalHarmonic,
+  poleRatio,
+}: CandidateTableProps) {
   const [pins, setPins] = useState<string[]>(() => search.candidates.slice(0, 2).map((c) => c.key));
   const toggle = (key: string): void => setPins((p) => (p.includes(key) ? p.filter((k) => k !== key) : p.length >= 2 ? p : [...p, key]));
   const pinned = pins.map((k) => search.candidates.find((c) => c.key === k)).filter((c): c is Candidate => c !== undefined);
   const head = (
     <thead>
       <tr>
-        <th scope="col" className="num">Rank</th><th scope="col">Winding and wires in hand</th><th scope="col" className="num">Gap / tooth / yoke change</th>
-        <th scope="col" className="num">Current density</th><th scope="col" className="num">Slot fill</th><th scope="col" className="num">Wire (as wound) against stock</th>
-        <th scope="col">What changes, and its score</th><th scope="col"><span className="sr-only">Pin and choose</span></th>
+        <th scope="col" className="num">
+          Rank
+        </th>
+        <th scope="col">Winding and wires in hand</th>
+        <th scope="col" className="num">
+          Gap / tooth / yoke change
+        </th>
+        <th scope="col" className="num">
+          Current density
+        </th>
+        <th scope="col" className="num">
+          Slot fill
+        </th>
+        <th scope="col" className="num">
+          Wire (as wound) against stock
+        </th>
+        <th scope="col">What changes, and its score</th>
+        <th scope="col">
+          <span className="sr-only">Pin and choose</span>
+        </th>
       </tr>
     </thead>
   );
-  const row = (c: Candidate) => <Row key={c.key} c={c} choose={choose} chosen={c.key === chosenKey} fillLimit={fillLimit} pinned={pins.indexOf(c.key)} onPin={toggle} pinDisabled={pins.length >= 2} />;
+  const row = (c: Candidate) => (
+    <Row
+      key={c.key}
+      c={c}
+      choose={choose}
+      chosen={c.key === chosenKey}
+      fillLimit={fillLimit}
+      pinned={pins.indexOf(c.key)}
+      onPin={toggle}
+      pinDisabled={pins.length >= 2}
+    />
+  );
   const first = search.candidates.slice(0, SHOWN);
   const rest = search.candidates.slice(SHOWN);
   return (
     <>
-      <p className="small" data-testid="ranking-rule"><strong>How they are ranked:</strong> {RANKING_RULE}</p>
+      <p className="small" data-testid="ranking-rule">
+        <strong>How they are ranked:</strong> {RANKING_RULE}
+      </p>
       <p className="small muted" data-testid="search-counts">
-        {candidatesFound} candidate{candidatesFound === 1 ? '' : 's'}{candidatesFound > search.candidates.length ? ` (the first ${search.candidates.length} kept)` : ''} from {search.familiesTried} famil{search.familiesTried === 1 ? 'y' : 'ies'} examined (layout × connection × circuits): {search.turnsChecked} turn counts checked against the flux limits, {search.wireSetsConsidered} wire combinations looked at, {search.rejected.length} famil{search.rejected.length === 1 ? 'y' : 'ies'} refused.
+        {candidatesFound} candidate{candidatesFound === 1 ? '' : 's'}
+        {candidatesFound > search.candidates.length ? ` (the first ${search.candidates.length} kept)` : ''} from {search.familiesTried}{' '}
+        famil{search.familiesTried === 1 ? 'y' : 'ies'} examined (layout × connection × circuits): {search.turnsChecked} turn counts checked
+        against the flux limits, {search.wireSetsConsidered} wire combinations looked at, {search.rejected.length} famil
+        {search.rejected.length === 1 ? 'y' : 'ies'} refused.
       </p>
       <p className={search.asFound.key ? 'notice ok' : 'notice warn'} data-testid="as-found-check">
-        {search.asFound.key ? 'The as-found wires in hand can be kept: the winding marked “keep the wire” ranks first.' : `The as-found wires cannot be kept: ${search.asFound.reason ?? ''}`}
+        {search.asFound.key
+          ? 'The as-found wires in hand can be kept: the winding marked “keep the wire” ranks first.'
+          : `The as-found wires cannot be kept: ${search.asFound.reason ?? ''}`}
       </p>
-      {search.spanNotes.length > 0 && <ul className="notice warn small" data-testid="span-notes">{search.spanNotes.map((n) => <li key={n}>{n}</li>)}</ul>}
+      {search.spanNotes.length > 0 && (
+        <ul className="notice warn small" data-testid="span-notes">
+          {search.spanNotes.map((n) => (
+            <li key={n}>{n}</li>
+          ))}
+        </ul>
+      )}
       {pinned.length > 0 && (
         <section aria-labelledby="pinned-h" className="pinned">
           <h3 id="pinned-h">Pinned for comparison ({pinned.length} of 2)</h3>
-          <ComparisonBands bands={comparisonBands(pinned, search, limits, originalFlux, originalHarmonic, poleRatio)} labels={pinned.map((c) => `rank ${c.rank}: ${c.winding.turnsPerCoil.join('/')} turns, ${c.winding.parallelPaths} circuit(s), ${c.wires.label}`)} />
+          <ComparisonBands
+            bands={comparisonBands(pinned, search, limits, originalFlux, originalHarmonic, poleRatio)}
+            labels={pinned.map(
+              (c) => `rank ${c.rank}: ${c.winding.turnsPerCoil.join('/')} turns, ${c.winding.parallelPaths} circuit(s), ${c.wires.label}`,
+            )}
+          />
         </section>
       )}
       {search.candidates.length > 0 && (
@@ -123,7 +253,13 @@ export function CandidateTable({ search, candidatesFound, choose, chosenKey, fil
       {search.rejected.length > 0 && (
         <details open={search.candidates.length === 0}>
           <summary>Families refused, and the limit that binds ({search.rejected.length})</summary>
-          <ul className="small">{search.rejected.map((r) => <li key={r.family + r.reason}><strong>{r.family}:</strong> {r.reason}</li>)}</ul>
+          <ul className="small">
+            {search.rejected.map((r) => (
+              <li key={r.family + r.reason}>
+                <strong>{r.family}:</strong> {r.reason}
+              </li>
+            ))}
+          </ul>
         </details>
       )}
     </>

@@ -6,7 +6,17 @@ import { chooseCandidate } from '@/lib/redesign/redesign-actions';
 import { callAction } from '@/lib/errors/call-action';
 
 /** Chooses one candidate of a draft revision; a refusal (approved, stale) is shown beside the button. */
-export function ChooseButton({ redesignId, version, candidateKey, rank }: { redesignId: string; version: number; candidateKey: string; rank: number }) {
+export function ChooseButton({
+  redesignId,
+  version,
+  candidateKey,
+  rank,
+}: {
+  redesignId: string;
+  version: number;
+  candidateKey: string;
+  rank: number;
+}) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [error, setError] = useState<string | null>(null);
@@ -30,7 +40,11 @@ export function ChooseButton({ redesignId, version, candidateKey, rank }: { rede
       >
         {pending ? 'Choosing…' : 'Choose'}
       </button>
-      {error && <span role="alert" className="field-error" style={{ display: 'block' }}>{error}</span>}
+      {error && (
+        <span role="alert" className="field-error" style={{ display: 'block' }}>
+          {error}
+        </span>
+      )}
     </span>
   );
 }

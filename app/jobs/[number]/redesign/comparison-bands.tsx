@@ -25,12 +25,21 @@ function BandSvg({ band, id }: { band: Band; id: string }) {
         </pattern>
       </defs>
       <line x1={X0} x2={X1} y1={22} y2={22} className="band-axis" />
-      <rect x={x(band.allowed[0])} y={12} width={Math.max(1, x(band.allowed[1]) - x(band.allowed[0]))} height={20} fill={`url(#${id}-hatch)`} className="band-allowed" />
+      <rect
+        x={x(band.allowed[0])}
+        y={12}
+        width={Math.max(1, x(band.allowed[1]) - x(band.allowed[0]))}
+        height={20}
+        fill={`url(#${id}-hatch)`}
+        className="band-allowed"
+      />
       <path d={`M ${x(band.original)} 14 l 7 8 l -7 8 l -7 -8 z`} className="band-original" />
       {band.values.map((v, i) => (
         <g key={MARKS[i]} transform={`translate(${x(v)}, ${i === 0 ? 8 : 36})`}>
           <circle r="7.5" className={`band-mark band-mark-${i}`} />
-          <text textAnchor="middle" dy="3.5" fontSize="10" className="band-letter">{MARKS[i]}</text>
+          <text textAnchor="middle" dy="3.5" fontSize="10" className="band-letter">
+            {MARKS[i]}
+          </text>
         </g>
       ))}
     </svg>
@@ -43,7 +52,12 @@ export function ComparisonBands({ bands, labels }: { bands: Band[]; labels: stri
     <div className="bands">
       <p className="small legend">
         <span aria-hidden="true">▨</span> allowed range · <span aria-hidden="true">◆</span> as found ·{' '}
-        {labels.map((l, i) => <span key={l}>{i > 0 ? ' · ' : ''}<span aria-hidden="true">●</span> <strong>{MARKS[i]}</strong> = {l}</span>)}
+        {labels.map((l, i) => (
+          <span key={l}>
+            {i > 0 ? ' · ' : ''}
+            <span aria-hidden="true">●</span> <strong>{MARKS[i]}</strong> = {l}
+          </span>
+        ))}
       </p>
       <ul className="band-list">
         {bands.map((b) => (
@@ -58,13 +72,26 @@ export function ComparisonBands({ bands, labels }: { bands: Band[]; labels: stri
         <summary>Numbers</summary>
         <table className="compare" aria-label="Pinned candidates beside the as-found winding">
           <thead>
-            <tr><th scope="col">Quantity</th><th scope="col">Allowed</th><th scope="col">As found</th>{labels.map((l, i) => <th key={l} scope="col">{MARKS[i]}: {l}</th>)}</tr>
+            <tr>
+              <th scope="col">Quantity</th>
+              <th scope="col">Allowed</th>
+              <th scope="col">As found</th>
+              {labels.map((l, i) => (
+                <th key={l} scope="col">
+                  {MARKS[i]}: {l}
+                </th>
+              ))}
+            </tr>
           </thead>
           <tbody>
             {bands.map((b) => (
               <tr key={b.key}>
-                <th scope="row">{b.label}</th><td>{b.allowedText}</td><td>{b.originalText}</td>
-                {b.texts.map((t, i) => <td key={MARKS[i]}>{t}</td>)}
+                <th scope="row">{b.label}</th>
+                <td>{b.allowedText}</td>
+                <td>{b.originalText}</td>
+                {b.texts.map((t, i) => (
+                  <td key={MARKS[i]}>{t}</td>
+                ))}
               </tr>
             ))}
           </tbody>

@@ -14,7 +14,8 @@ function Marked({ text, status }: { text: string; status: ComparisonRow['status'
   if (status !== 'out') return <>{text}</>;
   return (
     <span className="out">
-      <span aria-hidden="true">⚠ </span>{text} <strong>(out of range)</strong>
+      <span aria-hidden="true">⚠ </span>
+      {text} <strong>(out of range)</strong>
     </span>
   );
 }
@@ -27,20 +28,38 @@ export function ComparisonTable({ report }: { report: RedesignReport }) {
     <table className="compare">
       <caption className="sr-only">As-found winding beside the chosen redesign</caption>
       <thead>
-        <tr><th scope="col">Quantity</th><th scope="col">As found</th><th scope="col">Redesign</th><th scope="col" className="num">Ratio</th><th scope="col">Range / note</th></tr>
+        <tr>
+          <th scope="col">Quantity</th>
+          <th scope="col">As found</th>
+          <th scope="col">Redesign</th>
+          <th scope="col" className="num">
+            Ratio
+          </th>
+          <th scope="col">Range / note</th>
+        </tr>
       </thead>
       {GROUPS.map(([group, title]) => (
         <tbody key={group}>
-          <tr className="group"><th scope="rowgroup" colSpan={5}>{title}</th></tr>
-          {report.rows.filter((r) => r.group === group).map((r) => (
-            <tr key={r.key} data-row={r.key}>
-              <th scope="row">{r.label}</th>
-              <td><Marked text={r.original} status={r.originalStatus} /></td>
-              <td><Marked text={r.candidate} status={r.status} /></td>
-              <td className="num">{ratioText(r.ratio)}</td>
-              <td className="small">{r.note ?? ''}</td>
-            </tr>
-          ))}
+          <tr className="group">
+            <th scope="rowgroup" colSpan={5}>
+              {title}
+            </th>
+          </tr>
+          {report.rows
+            .filter((r) => r.group === group)
+            .map((r) => (
+              <tr key={r.key} data-row={r.key}>
+                <th scope="row">{r.label}</th>
+                <td>
+                  <Marked text={r.original} status={r.originalStatus} />
+                </td>
+                <td>
+                  <Marked text={r.candidate} status={r.status} />
+                </td>
+                <td className="num">{ratioText(r.ratio)}</td>
+                <td className="small">{r.note ?? ''}</td>
+              </tr>
+            ))}
         </tbody>
       ))}
     </table>
@@ -54,10 +73,17 @@ export function NameplateProposal({ report }: { report: RedesignReport }) {
     <>
       <dl className="dl">
         {nameplateLines(p).map((l) => (
-          <Fragment key={l.label}><dt>{l.label}</dt><dd>{l.value}</dd></Fragment>
+          <Fragment key={l.label}>
+            <dt>{l.label}</dt>
+            <dd>{l.value}</dd>
+          </Fragment>
         ))}
       </dl>
-      <ul className="small">{p.notes.map((n) => <li key={n}>{n}</li>)}</ul>
+      <ul className="small">
+        {p.notes.map((n) => (
+          <li key={n}>{n}</li>
+        ))}
+      </ul>
     </>
   );
 }
@@ -68,11 +94,18 @@ export function Cautions({ report }: { report: RedesignReport }) {
     <>
       <ul className="cautions">
         {report.warnings.map((w) => (
-          <li key={w.topic + w.text}><span aria-hidden="true">⚠ </span><strong>{w.topic[0]?.toUpperCase() + w.topic.slice(1)}:</strong> {w.text}</li>
+          <li key={w.topic + w.text}>
+            <span aria-hidden="true">⚠ </span>
+            <strong>{w.topic[0]?.toUpperCase() + w.topic.slice(1)}:</strong> {w.text}
+          </li>
         ))}
       </ul>
       <h3>Assumptions behind the expected rating</h3>
-      <ul className="small">{report.expected.assumptions.map((a) => <li key={a}>{a}</li>)}</ul>
+      <ul className="small">
+        {report.expected.assumptions.map((a) => (
+          <li key={a}>{a}</li>
+        ))}
+      </ul>
     </>
   );
 }

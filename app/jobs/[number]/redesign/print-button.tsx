@@ -2,5 +2,9 @@
 
 /** Opens the browser's print dialogue (the page's print styles hide the screen furniture). */
 export function PrintButton({ label = 'Print' }: { label?: string }) {
-  return <button type="button" className="btn secondary no-print" onClick={() => window.print()}>{label}</button>;
+  return (
+    <button type="button" className="btn secondary no-print" onClick={() => window.print()}>
+      {label}
+    </button>
+  );
 }

@@ -39,14 +39,20 @@ export function RequestForm({ defaults, submitLabel, intro }: { defaults: Redesi
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad'; text: string } | null>(null);
-  const { register, handleSubmit, setError, formState: { errors } } = useForm<RedesignRequestFormInput, unknown, RedesignRequestForm>({
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors },
+  } = useForm<RedesignRequestFormInput, unknown, RedesignRequestForm>({
     resolver: zodResolver(redesignRequestFormSchema),
     defaultValues: defaults,
   });
   const t = errors.target;
   const l = errors.limits as Record<string, Err> | undefined;
   const spansError = (t?.spans as Err)?.message ?? (Array.isArray(t?.spans) ? (t.spans as Err[]).find(Boolean)?.message : undefined);
-  const pathsError = (t?.parallelPaths as Err)?.message ?? (Array.isArray(t?.parallelPaths) ? (t.parallelPaths as Err[]).find(Boolean)?.message : undefined);
+  const pathsError =
+    (t?.parallelPaths as Err)?.message ?? (Array.isArray(t?.parallelPaths) ? (t.parallelPaths as Err[]).find(Boolean)?.message : undefined);
 
   const onSubmit = handleSubmit(
     (values) =>
@@ -75,9 +81,31 @@ export function RequestForm({ defaults, submitLabel, intro }: { defaults: Redesi
       <fieldset>
         <legend>New supply</legend>
         <div className="grid">
-          <InputField id="target-lineVoltageV" label="Line voltage" unit="V" type="number" error={t?.lineVoltageV?.message} registration={register('target.lineVoltageV')} />
-          <InputField id="target-frequencyHz" label="Frequency" unit="Hz" type="number" error={t?.frequencyHz?.message} registration={register('target.frequencyHz')} />
-          <InputField id="target-poles" label="Poles" type="number" inputMode="numeric" error={t?.poles?.message} registration={register('target.poles')} hint="Fewer poles load the back iron harder." />
+          <InputField
+            id="target-lineVoltageV"
+            label="Line voltage"
+            unit="V"
+            type="number"
+            error={t?.lineVoltageV?.message}
+            registration={register('target.lineVoltageV')}
+          />
+          <InputField
+            id="target-frequencyHz"
+            label="Frequency"
+            unit="Hz"
+            type="number"
+            error={t?.frequencyHz?.message}
+            registration={register('target.frequencyHz')}
+          />
+          <InputField
+            id="target-poles"
+            label="Poles"
+            type="number"
+            inputMode="numeric"
+            error={t?.poles?.message}
+            registration={register('target.poles')}
+            hint="Fewer poles load the back iron harder."
+          />
           <Field id="target-connection" label="Connection" error={t?.connection?.message}>
             <select {...register('target.connection')} {...describe('target-connection', t?.connection?.message)}>
               <option value="star">Star (Y)</option>
@@ -90,32 +118,68 @@ export function RequestForm({ defaults, submitLabel, intro }: { defaults: Redesi
       <fieldset>
         <legend>Options to search</legend>
         <div className="grid">
-          <InputField id="target-spans" label="Spans to try" unit="slot pitches" error={spansError} registration={register('target.spans')} hint='Empty: keep the as-found span. "7, 8" tries 1–8 and 1–9.' />
+          <InputField
+            id="target-spans"
+            label="Spans to try"
+            unit="slot pitches"
+            error={spansError}
+            registration={register('target.spans')}
+            hint='Empty: keep the as-found span. "7, 8" tries 1–8 and 1–9.'
+          />
           <Field id="target-layers" label="Layers" error={t?.layers?.message}>
             <select {...register('target.layers')} {...describe('target-layers', t?.layers?.message)}>
               <option value="keep">Keep the as-found layers and style</option>
               <option value="double-lap">Rewind as double-layer lap</option>
             </select>
           </Field>
-          <InputField id="target-parallelPaths" label="Parallel circuits to try" error={pathsError} registration={register('target.parallelPaths')} hint="Empty: every count the layout allows (up to 8)." />
+          <InputField
+            id="target-parallelPaths"
+            label="Parallel circuits to try"
+            error={pathsError}
+            registration={register('target.parallelPaths')}
+            hint="Empty: every count the layout allows (up to 8)."
+          />
         </div>
         <p className="check">
-          <input id="target-allowOverPitch" type="checkbox" {...register('target.allowOverPitch')} aria-describedby="target-allowOverPitch-hint" />{' '}
+          <input
+            id="target-allowOverPitch"
+            type="checkbox"
+            {...register('target.allowOverPitch')}
+            aria-describedby="target-allowOverPitch-hint"
+          />{' '}
           <label htmlFor="target-allowOverPitch">Also evaluate over-pitched spans (longer than the pole pitch)</label>
-          <br /><span id="target-allowOverPitch-hint" className="small muted">Off: a span longer than the pole pitch is refused. On a pole change the usual spans of the new pole pitch are always tried.</span>
+          <br />
+          <span id="target-allowOverPitch-hint" className="small muted">
+            Off: a span longer than the pole pitch is refused. On a pole change the usual spans of the new pole pitch are always tried.
+          </span>
         </p>
       </fieldset>
       <details>
         <summary>Limits for this job (shop defaults; change them here for this request only)</summary>
         <div className="grid" style={{ marginTop: '0.5rem' }}>
           {LIMIT_FIELDS.map(([name, label, unit, hint]) => (
-            <InputField key={name} id={`limits-${name}`} label={label} unit={unit} type="number" error={l?.[name]?.message} registration={register(`limits.${name}`)} {...(hint ? { hint } : {})} />
+            <InputField
+              key={name}
+              id={`limits-${name}`}
+              label={label}
+              unit={unit}
+              type="number"
+              error={l?.[name]?.message}
+              registration={register(`limits.${name}`)}
+              {...(hint ? { hint } : {})}
+            />
           ))}
         </div>
       </details>
       <div className="row" style={{ marginTop: '0.75rem' }}>
-        <button className="btn" type="submit" disabled={pending}>{pending ? 'Searching…' : submitLabel}</button>
-        {pending && <span className="muted" role="status">Searching every turns, circuit, connection and wire combination…</span>}
+        <button className="btn" type="submit" disabled={pending}>
+          {pending ? 'Searching…' : submitLabel}
+        </button>
+        {pending && (
+          <span className="muted" role="status">
+            Searching every turns, circuit, connection and wire combination…
+          </span>
+        )}
       </div>
     </form>
   );

@@ -7,8 +7,15 @@ import { errorOf, value } from '../../../support/fixtures/winding-fixtures';
 describe('lead markings', () => {
   // IEC 60034-8: start 1, finish 2 of U, V, W; NEMA MG 1 Part 2: T1–T4, T2–T5, T3–T6 (and T7–T10 … for 12 leads).
   it.each([
-    ['iec', 'A', 1, 'start', 'U1'], ['iec', 'B', 1, 'finish', 'V2'], ['iec', 'C', 2, 'start', 'W5'], ['iec', 'A', 2, 'finish', 'U6'],
-    ['nema', 'A', 1, 'start', 'T1'], ['nema', 'A', 1, 'finish', 'T4'], ['nema', 'C', 1, 'finish', 'T6'], ['nema', 'B', 2, 'start', 'T8'], ['nema', 'C', 2, 'finish', 'T12'],
+    ['iec', 'A', 1, 'start', 'U1'],
+    ['iec', 'B', 1, 'finish', 'V2'],
+    ['iec', 'C', 2, 'start', 'W5'],
+    ['iec', 'A', 2, 'finish', 'U6'],
+    ['nema', 'A', 1, 'start', 'T1'],
+    ['nema', 'A', 1, 'finish', 'T4'],
+    ['nema', 'C', 1, 'finish', 'T6'],
+    ['nema', 'B', 2, 'start', 'T8'],
+    ['nema', 'C', 2, 'finish', 'T12'],
   ] as const)('%s phase %s section %i %s → %s', (conv, ph, sec, end, mark) => {
     expect(leadMark(conv, ph, sec, end)).toBe(mark);
   });
@@ -21,15 +28,30 @@ describe('lead markings', () => {
   });
 
   it('6-lead delta: L1 U1+W2, L2 V1+U2, L3 W1+V2; NEMA L1 T1+T6, L2 T2+T4, L3 T3+T5', () => {
-    expect(leadPlan('iec', 6, 'delta', 2).lines.map((l) => l.leads)).toEqual([['U1', 'W2'], ['V1', 'U2'], ['W1', 'V2']]);
-    expect(leadPlan('nema', 6, 'delta', 2).lines.map((l) => l.leads)).toEqual([['T1', 'T6'], ['T2', 'T4'], ['T3', 'T5']]);
+    expect(leadPlan('iec', 6, 'delta', 2).lines.map((l) => l.leads)).toEqual([
+      ['U1', 'W2'],
+      ['V1', 'U2'],
+      ['W1', 'V2'],
+    ]);
+    expect(leadPlan('nema', 6, 'delta', 2).lines.map((l) => l.leads)).toEqual([
+      ['T1', 'T6'],
+      ['T2', 'T4'],
+      ['T3', 'T5'],
+    ]);
   });
 
   it('12-lead NEMA, sections in parallel: star L1 T1+T7 with star points T4-T5-T6 and T10-T11-T12; delta L1 T1 T7 T6 T12', () => {
     const y = leadPlan('nema', 12, 'star', 2);
     expect(y.lines[0]?.leads).toEqual(['T1', 'T7']);
-    expect(y.joints.filter((j) => j.role === 'star point').map((j) => j.ends)).toEqual([['T4', 'T5', 'T6'], ['T10', 'T11', 'T12']]);
-    expect(leadPlan('nema', 12, 'delta', 4).lines.map((l) => l.leads)).toEqual([['T1', 'T7', 'T6', 'T12'], ['T2', 'T8', 'T4', 'T10'], ['T3', 'T9', 'T5', 'T11']]);
+    expect(y.joints.filter((j) => j.role === 'star point').map((j) => j.ends)).toEqual([
+      ['T4', 'T5', 'T6'],
+      ['T10', 'T11', 'T12'],
+    ]);
+    expect(leadPlan('nema', 12, 'delta', 4).lines.map((l) => l.leads)).toEqual([
+      ['T1', 'T7', 'T6', 'T12'],
+      ['T2', 'T8', 'T4', 'T10'],
+      ['T3', 'T9', 'T5', 'T11'],
+    ]);
     expect(y.sections.filter((s) => s.phase === 'A').map((s) => s.circuits)).toEqual([[1], [2]]);
   });
 
@@ -42,8 +64,14 @@ describe('lead markings', () => {
   it('3 leads: star point and delta corners made inside the motor', () => {
     const y = leadPlan('nema', 3, 'star', 1);
     expect(y.lines.map((l) => l.leads)).toEqual([['T1'], ['T2'], ['T3']]);
-    expect(y.joints).toEqual([{ where: 'inside the motor', role: 'star point', ends: ['phase A finish', 'phase B finish', 'phase C finish'] }]);
-    expect(leadPlan('iec', 3, 'delta', 1).joints.map((j) => j.ends)).toEqual([['lead U', 'phase C finish'], ['lead V', 'phase A finish'], ['lead W', 'phase B finish']]);
+    expect(y.joints).toEqual([
+      { where: 'inside the motor', role: 'star point', ends: ['phase A finish', 'phase B finish', 'phase C finish'] },
+    ]);
+    expect(leadPlan('iec', 3, 'delta', 1).joints.map((j) => j.ends)).toEqual([
+      ['lead U', 'phase C finish'],
+      ['lead V', 'phase A finish'],
+      ['lead W', 'phase B finish'],
+    ]);
   });
 });
 
@@ -93,7 +121,16 @@ describe('wire to draw', () => {
   });
 
   it('two sizes in hand: each drawn by its own count and area', () => {
-    const d = value(wireDraw([{ turns: 10, meanTurnLengthMm: 1000 }], [{ label: 'a', count: 2, areaMm2: 1 }, { label: 'b', count: 1, areaMm2: 0.5 }], 0));
+    const d = value(
+      wireDraw(
+        [{ turns: 10, meanTurnLengthMm: 1000 }],
+        [
+          { label: 'a', count: 2, areaMm2: 1 },
+          { label: 'b', count: 1, areaMm2: 0.5 },
+        ],
+        0,
+      ),
+    );
     // 10 m per conductor: a 20 m × 1 mm², b 10 m × 0.5 mm² → 8890·(20 + 5)·1e-6 kg [derived].
     expect(d.lines.map((l) => l.copperKg)).toEqual([8890 * 20e-6, 8890 * 5e-6].map((x) => expect.closeTo(x, 9)));
   });

@@ -8,13 +8,18 @@ import type { SlotTable, WindingSpec } from '@/lib/engine/winding-layout';
 import { errorOf, lap, layoutOf, singleLayer, value } from '../../../support/fixtures/winding-fixtures';
 
 const concentricDouble = (slots: number, poles: number, spans: number[]): WindingSpec => ({
-  ...lap(slots, poles, spans[0] ?? 1), style: 'concentric', spans, turnsPerCoil: spans.map((_, i) => 10 + i),
+  ...lap(slots, poles, spans[0] ?? 1),
+  style: 'concentric',
+  spans,
+  turnsPerCoil: spans.map((_, i) => 10 + i),
 });
 
 /** Every coil of the layout, by number, from its sides. */
 const layoutCoils = (t: SlotTable): number[] => [...new Set(t.sides.map((s) => s.coil ?? 0))].sort((a, b) => a - b);
 const planCoils = (p: ConnectionPlan): number[] =>
-  (['A', 'B', 'C'] as const).flatMap((ph) => p.circuits[ph].flatMap((c) => c.steps.flatMap((s) => s.group.coils.map((k) => k.coil)))).sort((a, b) => a - b);
+  (['A', 'B', 'C'] as const)
+    .flatMap((ph) => p.circuits[ph].flatMap((c) => c.steps.flatMap((s) => s.group.coils.map((k) => k.coil))))
+    .sort((a, b) => a - b);
 
 /** Checks every plan must pass against the engine's own layout and slot star. */
 function expectSound(t: SlotTable, plan: ConnectionPlan, a: number): void {
@@ -43,10 +48,25 @@ describe('coil groups read from the layout (belt order A+, C−, B+, A−, C+, B
   it('36 slots 4 poles lap 1–8: twelve groups of three coils round the stator, alternating sense', () => {
     const g = value(coilGroups(layoutOf(lap(36, 4, 7))));
     expect(g.groups.map((x) => `${groupLabel(x)}${x.sense > 0 ? '+' : '−'}`)).toEqual([
-      'A1+', 'C1−', 'B1+', 'A2−', 'C2+', 'B2−', 'A3+', 'C3−', 'B3+', 'A4−', 'C4+', 'B4−',
+      'A1+',
+      'C1−',
+      'B1+',
+      'A2−',
+      'C2+',
+      'B2−',
+      'A3+',
+      'C3−',
+      'B3+',
+      'A4−',
+      'C4+',
+      'B4−',
     ]);
     const a1 = g.byPhase.A[0];
-    expect(a1?.coils.map((c) => [c.startSlot, c.finishSlot, c.span])).toEqual([[1, 8, 7], [2, 9, 7], [3, 10, 7]]);
+    expect(a1?.coils.map((c) => [c.startSlot, c.finishSlot, c.span])).toEqual([
+      [1, 8, 7],
+      [2, 9, 7],
+      [3, 10, 7],
+    ]);
     expect(a1?.coils.every((c) => c.startLayer === 1 && c.finishLayer === 2)).toBe(true);
     expect(g.groups.map((x) => x.pole)).toEqual([1, 1, 1, 2, 2, 2, 3, 3, 3, 4, 4, 4]);
   });
@@ -60,7 +80,11 @@ describe('coil groups read from the layout (belt order A+, C−, B+, A−, C+, B
   it('single-layer half-coiled concentric 36/4 (spans 11, 9, 7): one group per pole pair, all alike, nested coils', () => {
     const g = value(coilGroups(layoutOf(singleLayer(36, 4, [11, 9, 7]))));
     expect(g.byPhase.A.map((x) => x.sense)).toEqual([1, 1]);
-    expect(g.byPhase.A[0]?.coils.map((c) => [c.startSlot, c.finishSlot, c.span])).toEqual([[1, 12, 11], [2, 11, 9], [3, 10, 7]]);
+    expect(g.byPhase.A[0]?.coils.map((c) => [c.startSlot, c.finishSlot, c.span])).toEqual([
+      [1, 12, 11],
+      [2, 11, 9],
+      [3, 10, 7],
+    ]);
   });
 
   it('single-layer 24/2 concentric: an outer span beyond half the bore keeps its own span (15)', () => {
@@ -71,7 +95,11 @@ describe('coil groups read from the layout (belt order A+, C−, B+, A−, C+, B
   it('double-layer concentric 36/4 (spans 9, 7, 5): nested groups, as many as poles per phase', () => {
     const g = value(coilGroups(layoutOf(concentricDouble(36, 4, [9, 7, 5]))));
     expect(g.byPhase.B).toHaveLength(4);
-    expect(g.byPhase.A[0]?.coils.map((c) => [c.startSlot, c.finishSlot])).toEqual([[1, 10], [2, 9], [3, 8]]);
+    expect(g.byPhase.A[0]?.coils.map((c) => [c.startSlot, c.finishSlot])).toEqual([
+      [1, 10],
+      [2, 9],
+      [3, 8],
+    ]);
   });
 
   it('refuses a slot table without coil numbers', () => {
@@ -86,20 +114,27 @@ describe('series and parallel connection of the groups', () => {
     const p = value(connectionPlan(layoutOf(lap(36, 4, 7)), 1, 'star'));
     expect(p.poleConnection).toBe('alternate');
     expect(p.circuits.A[0]?.jumpers.map((j) => `${j.from.end} ${j.from.label} → ${j.to.end} ${j.to.label}`)).toEqual([
-      'finish A1 → finish A2', 'start A2 → start A3', 'finish A3 → finish A4',
+      'finish A1 → finish A2',
+      'start A2 → start A3',
+      'finish A3 → finish A4',
     ]);
   });
 
   it('36/4 lap, 2 circuits: neighbouring pairs A1–A2 and A3–A4', () => {
     const p = value(connectionPlan(layoutOf(lap(36, 4, 7)), 2, 'delta'));
-    expect(p.circuits.A.map((c) => c.steps.map((s) => groupLabel(s.group)))).toEqual([['A1', 'A2'], ['A3', 'A4']]);
+    expect(p.circuits.A.map((c) => c.steps.map((s) => groupLabel(s.group)))).toEqual([
+      ['A1', 'A2'],
+      ['A3', 'A4'],
+    ]);
     expect(p.circuits.A[1]?.steps.map((s) => s.enter)).toEqual(['start', 'finish']);
   });
 
   it('single-layer half-coiled: consecutive-pole connection, finish to start', () => {
     const p = value(connectionPlan(layoutOf(singleLayer(36, 4, [11, 9, 7])), 1, 'star'));
     expect(p.poleConnection).toBe('consecutive');
-    expect(p.circuits.A[0]?.jumpers.map((j) => `${j.from.end} ${j.from.label} → ${j.to.end} ${j.to.label}`)).toEqual(['finish A1 → start A2']);
+    expect(p.circuits.A[0]?.jumpers.map((j) => `${j.from.end} ${j.from.label} → ${j.to.end} ${j.to.label}`)).toEqual([
+      'finish A1 → start A2',
+    ]);
   });
 
   it('refuses 3 circuits on 36/4 (the layout allows 1, 2, 4: reference §3)', () => {
@@ -121,32 +156,54 @@ describe('series and parallel connection of the groups', () => {
   describe.each(layouts)('%s', (_name, spec) => {
     const t = layoutOf(spec);
     const allowed = allowedParallelPaths(t).allowed;
-    it.each([1, 2, 3, 4].flatMap((a) => (['star', 'delta'] as const).map((c) => [a, c] as const)))('%i circuit(s), %s: planned exactly when the layout allows it', (a, conn) => {
-      const r = connectionPlan(t, a, conn);
-      expect(r.ok).toBe(allowed.includes(a));
-      if (r.ok) {
-        expect(r.value.connection).toBe(conn);
-        expectSound(t, r.value, a);
-      }
-    });
+    it.each([1, 2, 3, 4].flatMap((a) => (['star', 'delta'] as const).map((c) => [a, c] as const)))(
+      '%i circuit(s), %s: planned exactly when the layout allows it',
+      (a, conn) => {
+        const r = connectionPlan(t, a, conn);
+        expect(r.ok).toBe(allowed.includes(a));
+        if (r.ok) {
+          expect(r.value.connection).toBe(conn);
+          expectSound(t, r.value, a);
+        }
+      },
+    );
   });
 });
 
 describe('properties (fast-check)', () => {
-  const combos: [number, number][] = [[24, 4], [36, 4], [36, 6], [48, 4], [48, 8], [54, 6], [72, 4], [72, 8], [30, 4], [42, 4], [60, 8]];
+  const combos: [number, number][] = [
+    [24, 4],
+    [36, 4],
+    [36, 6],
+    [48, 4],
+    [48, 8],
+    [54, 6],
+    [72, 4],
+    [72, 8],
+    [30, 4],
+    [42, 4],
+    [60, 8],
+  ];
   it('every coil appears exactly once; every circuit has equal turns and identical phasors', () => {
     fc.assert(
-      fc.property(fc.constantFrom(...combos), fc.integer({ min: 0, max: 100 }), fc.integer({ min: 1, max: 60 }), fc.constantFrom('star' as const, 'delta' as const), fc.integer({ min: 0, max: 3 }), (sp, spanPick, turns, conn, pathPick) => {
-        const [slots, poles] = sp;
-        const tau = Math.floor(slots / poles);
-        const span = Math.max(1, tau - (spanPick % Math.max(1, Math.ceil(tau / 2))));
-        const t = layoutOf(lap(slots, poles, span, { turnsPerCoil: [turns] }));
-        const allowed = allowedParallelPaths(t).allowed.filter((a) => a <= 4);
-        const a = allowed[pathPick % allowed.length] ?? 1;
-        const plan = value(connectionPlan(t, a, conn));
-        expectSound(t, plan, a);
-        expect(plan.groups.groups.reduce((n, g) => n + g.coils.length, 0)).toBe(t.sides.length / 2);
-      }),
+      fc.property(
+        fc.constantFrom(...combos),
+        fc.integer({ min: 0, max: 100 }),
+        fc.integer({ min: 1, max: 60 }),
+        fc.constantFrom('star' as const, 'delta' as const),
+        fc.integer({ min: 0, max: 3 }),
+        (sp, spanPick, turns, conn, pathPick) => {
+          const [slots, poles] = sp;
+          const tau = Math.floor(slots / poles);
+          const span = Math.max(1, tau - (spanPick % Math.max(1, Math.ceil(tau / 2))));
+          const t = layoutOf(lap(slots, poles, span, { turnsPerCoil: [turns] }));
+          const allowed = allowedParallelPaths(t).allowed.filter((a) => a <= 4);
+          const a = allowed[pathPick % allowed.length] ?? 1;
+          const plan = value(connectionPlan(t, a, conn));
+          expectSound(t, plan, a);
+          expect(plan.groups.groups.reduce((n, g) => n + g.coils.length, 0)).toBe(t.sides.length / 2);
+        },
+      ),
       { numRuns: 80 },
     );
   });

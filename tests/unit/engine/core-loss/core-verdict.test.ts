@@ -12,7 +12,12 @@ const MASS = 14.726333; // example A back-iron mass, kg [derived]
 const voltsFor = (b: number) => (0.8230440643 * 280 * b) / 1.3;
 const reading = (watts: number, b = 1.3): LoopReading => ({ voltageV: voltsFor(b), currentA: 0.8, watts, frequencyHz: 50, turns: 280 });
 
-const stage = (s: StageResult['stage'], watts: number, b = 1.3, hot: { slot: number; axialPositionM: number; riseK: number }[] = []): StageResult => {
+const stage = (
+  s: StageResult['stage'],
+  watts: number,
+  b = 1.3,
+  hot: { slot: number; axialPositionM: number; riseK: number }[] = [],
+): StageResult => {
   const loss = specificLoss(reading(watts, b), AREA, MASS, 1.3);
   if (!loss.ok) throw new Error(loss.error.message);
   return { stage: s, frequencyHz: 50, loss: loss.value, hotSpots: judgeHotSpots(hot) };
@@ -38,11 +43,13 @@ describe('specific loss (W/kg over the back iron)', () => {
     expect(specificLoss({ ...reading(25), turns: 0 }, AREA, MASS, 1.3).ok).toBe(false);
   });
   it('W/kg scales with the measured watts (fast-check)', () => {
-    fc.assert(fc.property(fc.double({ min: 0.01, max: 1e5, noNaN: true }), fc.double({ min: 0.01, max: 100, noNaN: true }), (w, k) => {
-      const a = specificLoss(reading(w), AREA, MASS, 1.3);
-      const b = specificLoss(reading(w * k), AREA, MASS, 1.3);
-      return a.ok && b.ok && Math.abs(b.value.wattsPerKgAtReference / a.value.wattsPerKgAtReference - k) < 1e-9 * k;
-    }));
+    fc.assert(
+      fc.property(fc.double({ min: 0.01, max: 1e5, noNaN: true }), fc.double({ min: 0.01, max: 100, noNaN: true }), (w, k) => {
+        const a = specificLoss(reading(w), AREA, MASS, 1.3);
+        const b = specificLoss(reading(w * k), AREA, MASS, 1.3);
+        return a.ok && b.ok && Math.abs(b.value.wattsPerKgAtReference / a.value.wattsPerKgAtReference - k) < 1e-9 * k;
+      }),
+    );
   });
 });
 
@@ -51,22 +58,27 @@ describe('core verdict against the shop’s limit (default +20 %, common practic
     const v = coreVerdict({ 'before-stripping': stage('before-stripping', 25), 'after-stripping': stage('after-stripping', 27) });
     expect(v.status).toBe('acceptable');
     expect(v.changeFraction).toBeCloseTo(0.08, 12);
-    expect(v.words.join(' ')).toContain('+8.0 %, within the shop\'s limit of +20.0 %');
+    expect(v.words.join(' ')).toContain("+8.0 %, within the shop's limit of +20.0 %");
     expect(v.words.join(' ')).toContain('fit to rewind');
   });
   it('refuses a rise of 32 % (33 W against 25 W) [derived]', () => {
     const v = coreVerdict({ 'before-stripping': stage('before-stripping', 25), 'after-stripping': stage('after-stripping', 33) });
     expect(v.status).toBe('not-acceptable');
-    expect(v.words[0]).toContain('+32.0 %, more than the shop\'s limit');
+    expect(v.words[0]).toContain("+32.0 %, more than the shop's limit");
   });
   it('refuses a small rise when a hot spot is 15 K above the core (limit 10 K, common practice)', () => {
-    const v = coreVerdict({ 'before-stripping': stage('before-stripping', 25), 'after-stripping': stage('after-stripping', 26, 1.3, [{ slot: 7, axialPositionM: 0.04, riseK: 15 }]) });
+    const v = coreVerdict({
+      'before-stripping': stage('before-stripping', 25),
+      'after-stripping': stage('after-stripping', 26, 1.3, [{ slot: 7, axialPositionM: 0.04, riseK: 15 }]),
+    });
     expect(v.status).toBe('not-acceptable');
     expect(v.words.join(' ')).toContain('Hot spot at slot 7, 40 mm from the drive-end face: 15.0 K');
   });
   it('judges the test after repairs when there is one', () => {
     const v = coreVerdict({
-      'before-stripping': stage('before-stripping', 25), 'after-stripping': stage('after-stripping', 33), 'after-repairs': stage('after-repairs', 26),
+      'before-stripping': stage('before-stripping', 25),
+      'after-stripping': stage('after-stripping', 33),
+      'after-repairs': stage('after-repairs', 26),
     });
     expect(v.judgedStage).toBe('after-repairs');
     expect(v.status).toBe('acceptable');
@@ -81,13 +93,26 @@ describe('core verdict against the shop’s limit (default +20 %, common practic
     expect(coreVerdict({ 'before-stripping': stage('before-stripping', 25), 'after-stripping': sixty }).status).toBe('incomplete');
   });
   it('a higher after-stripping loss never turns a refusal into an acceptance (fast-check)', () => {
-    fc.assert(fc.property(fc.double({ min: 1, max: 1000, noNaN: true }), fc.double({ min: 0, max: 3, noNaN: true }), fc.double({ min: 0, max: 3, noNaN: true }), (w, r1, r2) => {
-      const lo = Math.min(r1, r2);
-      const hi = Math.max(r1, r2);
-      const a = coreVerdict({ 'before-stripping': stage('before-stripping', w), 'after-stripping': stage('after-stripping', w * (1 + lo)) });
-      const b = coreVerdict({ 'before-stripping': stage('before-stripping', w), 'after-stripping': stage('after-stripping', w * (1 + hi)) });
-      return !(a.status === 'not-acceptable' && b.status === 'acceptable');
-    }));
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1, max: 1000, noNaN: true }),
+        fc.double({ min: 0, max: 3, noNaN: true }),
+        fc.double({ min: 0, max: 3, noNaN: true }),
+        (w, r1, r2) => {
+          const lo = Math.min(r1, r2);
+          const hi = Math.max(r1, r2);
+          const a = coreVerdict({
+            'before-stripping': stage('before-stripping', w),
+            'after-stripping': stage('after-stripping', w * (1 + lo)),
+          });
+          const b = coreVerdict({
+            'before-stripping': stage('before-stripping', w),
+            'after-stripping': stage('after-stripping', w * (1 + hi)),
+          });
+          return !(a.status === 'not-acceptable' && b.status === 'acceptable');
+        },
+      ),
+    );
   });
 });
 

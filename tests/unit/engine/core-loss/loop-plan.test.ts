@@ -11,7 +11,8 @@ import { EXAMPLE_A_RING, rel } from './fixtures';
 
 describe('core geometry of the example A core (docs/engineering/flux-density.md core; values [derived] step by step)', () => {
   const s = backIronSection(EXAMPLE_A_RING);
-  it('back-iron depth d_y = (240 − 150)/2 − 20 = 25 mm (docs/engineering/flux-density.md, example A)', () => expect(s.depthM).toBeCloseTo(0.025, 12));
+  it('back-iron depth d_y = (240 − 150)/2 − 20 = 25 mm (docs/engineering/flux-density.md, example A)', () =>
+    expect(s.depthM).toBeCloseTo(0.025, 12));
   it('net iron length L_fe = 120 mm × 0.95 = 114 mm [derived]', () => expect(s.netIronLengthM).toBeCloseTo(0.114, 12));
   it('cross-section A = 25 × 114 = 2850 mm² [derived]', () => expect(s.areaM2).toBeCloseTo(2.85e-3, 12));
   it('mean path l_m = π·(240 − 25) mm = 675.44 mm [derived]', () => expect(meanMagneticPathM(0.24, s.depthM)).toBeCloseTo(0.675442, 6));
@@ -48,7 +49,14 @@ describe('loopTestPlan', () => {
     expect(rel(plan.value.coreMassKg, 14.7263 + 4.29197)).toBeLessThan(1e-4);
   });
   it('uses the shop’s own turns when given: 300 turns on 230 V drive 1.3·230/(0.823044·300) = 1.2110 T [derived]', () => {
-    const p = loopTestPlan({ ring: EXAMPLE_A_RING, testFluxDensityT: 1.3, frequencyHz: 50, supplyVoltageV: 230, fieldStrengthAPerM: 300, turns: 300 });
+    const p = loopTestPlan({
+      ring: EXAMPLE_A_RING,
+      testFluxDensityT: 1.3,
+      frequencyHz: 50,
+      supplyVoltageV: 230,
+      fieldStrengthAPerM: 300,
+      turns: 300,
+    });
     expect(p.ok && p.value.turnsSuggested).toBe(false);
     expect(p.ok && rel(p.value.fluxDensityAtSupplyT, 1.210959)).toBeLessThan(1e-5);
   });
@@ -72,18 +80,35 @@ describe('loopTestPlan', () => {
 describe('loop properties (fast-check)', () => {
   const pos = (min: number, max: number) => fc.double({ min, max, noNaN: true, noDefaultInfinity: true });
   it('more turns at the same voltage lower the loop’s flux density', () => {
-    fc.assert(fc.property(pos(10, 1000), pos(40, 70), fc.integer({ min: 1, max: 5000 }), fc.integer({ min: 1, max: 100 }), pos(1e-4, 0.5),
-      (v, f, n, extra, a) => loopFluxDensityT(v, f, n + extra, a) < loopFluxDensityT(v, f, n, a)));
+    fc.assert(
+      fc.property(
+        pos(10, 1000),
+        pos(40, 70),
+        fc.integer({ min: 1, max: 5000 }),
+        fc.integer({ min: 1, max: 100 }),
+        pos(1e-4, 0.5),
+        (v, f, n, extra, a) => loopFluxDensityT(v, f, n + extra, a) < loopFluxDensityT(v, f, n, a),
+      ),
+    );
   });
   it('the suggested turns never exceed the target density, and one turn fewer would (when more than one)', () => {
-    fc.assert(fc.property(pos(10, 1000), pos(40, 70), pos(0.5, 1.8), pos(1e-4, 0.5), (v, f, b, a) => {
-      const n = loopTurnsFor(v, f, b, a);
-      expect(loopFluxDensityT(v, f, n, a)).toBeLessThanOrEqual(b * (1 + 1e-9));
-      if (n > 1) expect(loopFluxDensityT(v, f, n - 1, a)).toBeGreaterThan(b * (1 - 1e-9));
-    }));
+    fc.assert(
+      fc.property(pos(10, 1000), pos(40, 70), pos(0.5, 1.8), pos(1e-4, 0.5), (v, f, b, a) => {
+        const n = loopTurnsFor(v, f, b, a);
+        expect(loopFluxDensityT(v, f, n, a)).toBeLessThanOrEqual(b * (1 + 1e-9));
+        if (n > 1) expect(loopFluxDensityT(v, f, n - 1, a)).toBeGreaterThan(b * (1 - 1e-9));
+      }),
+    );
   });
   it('voltage and density invert each other: B(E(B)) = B', () => {
-    fc.assert(fc.property(pos(40, 70), fc.integer({ min: 1, max: 5000 }), pos(0.1, 2), pos(1e-4, 0.5),
-      (f, n, b, a) => Math.abs(loopFluxDensityT(loopVoltageV(f, n, b, a), f, n, a) - b) < 1e-9 * b));
+    fc.assert(
+      fc.property(
+        pos(40, 70),
+        fc.integer({ min: 1, max: 5000 }),
+        pos(0.1, 2),
+        pos(1e-4, 0.5),
+        (f, n, b, a) => Math.abs(loopFluxDensityT(loopVoltageV(f, n, b, a), f, n, a) - b) < 1e-9 * b,
+      ),
+    );
   });
 });

@@ -8,12 +8,25 @@
 import type { LiveAnalysis } from '@/lib/as-found/live-analysis';
 import { findingsSummary } from '@/lib/as-found/findings-summary';
 
-export function FindingsStrip({ live, open, onToggle, controls }: { live: LiveAnalysis; open: boolean; onToggle: () => void; controls: string }) {
+export function FindingsStrip({
+  live,
+  open,
+  onToggle,
+  controls,
+}: {
+  live: LiveAnalysis;
+  open: boolean;
+  onToggle: () => void;
+  controls: string;
+}) {
   const s = findingsSummary(live);
   return (
     <div className={`findings-strip ${s.tone}`} data-testid="findings-strip">
       <div className="strip-text">
-        <p className="strip-headline"><strong>{s.headline}</strong>{s.figures.length > 0 && <span className="strip-figures"> · {s.figures.join(' · ')}</span>}</p>
+        <p className="strip-headline">
+          <strong>{s.headline}</strong>
+          {s.figures.length > 0 && <span className="strip-figures"> · {s.figures.join(' · ')}</span>}
+        </p>
         {s.first && <p className="strip-first">{s.first}</p>}
       </div>
       <button type="button" className="btn quiet" aria-expanded={open} aria-controls={controls} onClick={onToggle}>

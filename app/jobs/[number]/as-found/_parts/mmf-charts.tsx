@@ -47,12 +47,20 @@ export function MmfCharts({ waveform, mmf }: { waveform: MmfPoint[]; mmf: MmfSpe
   return (
     <div className="mmf-charts">
       <figure aria-labelledby="mmf-wave-cap">
-        <figcaption id="mmf-wave-cap"><strong>MMF round the air gap</strong> at the instant phase A current is at its peak (ampere-turns per ampere of coil current).</figcaption>
+        <figcaption id="mmf-wave-cap">
+          <strong>MMF round the air gap</strong> at the instant phase A current is at its peak (ampere-turns per ampere of coil current).
+        </figcaption>
         <div className="chart-box" role="img" aria-label={waveName}>
           <ResponsiveContainer width="100%" height={220}>
             <LineChart data={wave} margin={{ top: 8, right: 12, bottom: 22, left: 4 }} accessibilityLayer={false}>
               <CartesianGrid strokeDasharray="3 3" stroke="#d5dae1" />
-              <XAxis dataKey="angle" type="number" domain={[0, 360]} ticks={[0, 45, 90, 135, 180, 225, 270, 315, 360]} label={{ value: 'Mechanical angle from slot 1 (°)', position: 'insideBottom', offset: -12 }} />
+              <XAxis
+                dataKey="angle"
+                type="number"
+                domain={[0, 360]}
+                ticks={[0, 45, 90, 135, 180, 225, 270, 315, 360]}
+                label={{ value: 'Mechanical angle from slot 1 (°)', position: 'insideBottom', offset: -12 }}
+              />
               <YAxis width={48} />
               <Tooltip formatter={(v) => [`${String(v)} A-turns/A`, 'MMF']} labelFormatter={(l) => `${String(l)}°`} />
               <Line type="linear" dataKey="mmf" stroke="#1d2430" strokeWidth={1.6} dot={false} isAnimationActive={false} />
@@ -63,15 +71,31 @@ export function MmfCharts({ waveform, mmf }: { waveform: MmfPoint[]; mmf: MmfSpe
           <summary>MMF values as a table</summary>
           <table className="small compact spectrum-table">
             <caption className="sr-only">MMF round the air gap every 15 degrees</caption>
-            <thead><tr><th scope="col" className="num">Angle from slot 1 (°)</th><th scope="col" className="num">MMF (A-turns/A)</th></tr></thead>
-            <tbody>{samples.map((p) => <tr key={p.angle}><td className="num">{p.angle}</td><td className="num">{p.mmf.toFixed(2)}</td></tr>)}</tbody>
+            <thead>
+              <tr>
+                <th scope="col" className="num">
+                  Angle from slot 1 (°)
+                </th>
+                <th scope="col" className="num">
+                  MMF (A-turns/A)
+                </th>
+              </tr>
+            </thead>
+            <tbody>
+              {samples.map((p) => (
+                <tr key={p.angle}>
+                  <td className="num">{p.angle}</td>
+                  <td className="num">{p.mmf.toFixed(2)}</td>
+                </tr>
+              ))}
+            </tbody>
           </table>
         </details>
       </figure>
       <figure aria-labelledby="mmf-bars-cap">
         <figcaption id="mmf-bars-cap">
-          <strong>Space harmonics</strong> of the three-phase MMF, % of the working wave: → forward, ← backward, × cancelled
-          (each phase has it, the three together cancel it).
+          <strong>Space harmonics</strong> of the three-phase MMF, % of the working wave: → forward, ← backward, × cancelled (each phase has
+          it, the three together cancel it).
         </figcaption>
         <div className="chart-box" role="img" aria-label={barName}>
           <ResponsiveContainer width="100%" height={230}>
@@ -85,12 +109,23 @@ export function MmfCharts({ waveform, mmf }: { waveform: MmfPoint[]; mmf: MmfSpe
               <CartesianGrid strokeDasharray="3 3" stroke="#d5dae1" vertical={false} />
               <XAxis dataKey="order" label={{ value: 'Order ν (electrical)', position: 'insideBottom', offset: -12 }} />
               <YAxis width={40} scale="sqrt" domain={[0, 100]} ticks={[0, 1, 5, 20, 50, 100]} />
-              <Tooltip formatter={(v, _n, item) => [`${String(v)} % (${WORD[(item.payload as { direction: MmfDirection }).direction]}, ${(item.payload as { rpm: number }).rpm} rpm)`, 'Amplitude']} />
-              <Bar dataKey="percent" isAnimationActive={false} stroke="#1d2430" shape={(props: unknown) => {
-                const p = props as { x: number; y: number; width: number; height: number; payload: { direction: MmfDirection } };
-                const fill = p.payload.direction === 'forward' ? '#1d2430' : p.payload.direction === 'backward' ? 'url(#mmf-back)' : '#fff';
-                return <rect x={p.x} y={p.y} width={p.width} height={Math.max(p.height, 0)} fill={fill} stroke="#1d2430" />;
-              }}>
+              <Tooltip
+                formatter={(v, _n, item) => [
+                  `${String(v)} % (${WORD[(item.payload as { direction: MmfDirection }).direction]}, ${(item.payload as { rpm: number }).rpm} rpm)`,
+                  'Amplitude',
+                ]}
+              />
+              <Bar
+                dataKey="percent"
+                isAnimationActive={false}
+                stroke="#1d2430"
+                shape={(props: unknown) => {
+                  const p = props as { x: number; y: number; width: number; height: number; payload: { direction: MmfDirection } };
+                  const fill =
+                    p.payload.direction === 'forward' ? '#1d2430' : p.payload.direction === 'backward' ? 'url(#mmf-back)' : '#fff';
+                  return <rect x={p.x} y={p.y} width={p.width} height={Math.max(p.height, 0)} fill={fill} stroke="#1d2430" />;
+                }}
+              >
                 <LabelList dataKey="label" position="top" fontSize={10} />
               </Bar>
             </BarChart>
@@ -98,11 +133,31 @@ export function MmfCharts({ waveform, mmf }: { waveform: MmfPoint[]; mmf: MmfSpe
         </div>
         <table className="small spectrum-table">
           <caption className="sr-only">Space harmonics: order, amplitude, direction, speed</caption>
-          <thead><tr><th scope="col">Order</th><th scope="col" className="num">% of working wave</th><th scope="col">Direction</th><th scope="col" className="num">Speed (rpm)</th></tr></thead>
+          <thead>
+            <tr>
+              <th scope="col">Order</th>
+              <th scope="col" className="num">
+                % of working wave
+              </th>
+              <th scope="col">Direction</th>
+              <th scope="col" className="num">
+                Speed (rpm)
+              </th>
+            </tr>
+          </thead>
           <tbody>
-            {bars.filter((b) => Number(b.order) <= 13 || b.percent >= 1).map((b) => (
-              <tr key={b.order}><td>{b.order}</td><td className="num">{b.percent.toFixed(1)}</td><td>{MARK[b.direction]} {WORD[b.direction]}</td><td className="num">{b.direction === 'cancelled' ? '—' : b.rpm}</td></tr>
-            ))}
+            {bars
+              .filter((b) => Number(b.order) <= 13 || b.percent >= 1)
+              .map((b) => (
+                <tr key={b.order}>
+                  <td>{b.order}</td>
+                  <td className="num">{b.percent.toFixed(1)}</td>
+                  <td>
+                    {MARK[b.direction]} {WORD[b.direction]}
+                  </td>
+                  <td className="num">{b.direction === 'cancelled' ? '—' : b.rpm}</td>
+                </tr>
+              ))}
           </tbody>
         </table>
       </figure>

@@ -8,7 +8,6 @@ import { MmfCharts } from './mmf-charts';
 import { SlotDiagram, SlotTableView } from './slot-diagram';
 import { spansLabel } from '@/lib/engine/notation';
 
-
 export function Pictures({ live }: { live: LiveAnalysis }) {
   const [showTable, setShowTable] = useState(false);
   // Charts measure their container, which only exists in the browser: draw them after hydration.
@@ -31,10 +30,18 @@ export function Pictures({ live }: { live: LiveAnalysis }) {
       <div className="pictures-grid">
         <figure className="diagram">
           <SlotDiagram table={w.layout} caption={caption} />
-          <button type="button" className="btn quiet small-btn no-print" aria-expanded={showTable} aria-controls="slot-table" onClick={() => setShowTable((s) => !s)}>
+          <button
+            type="button"
+            className="btn quiet small-btn no-print"
+            aria-expanded={showTable}
+            aria-controls="slot-table"
+            onClick={() => setShowTable((s) => !s)}
+          >
             {showTable ? 'Hide' : 'Show'} the slot table
           </button>
-          <div id="slot-table" hidden={!showTable}>{showTable && <SlotTableView table={w.layout} />}</div>
+          <div id="slot-table" hidden={!showTable}>
+            {showTable && <SlotTableView table={w.layout} />}
+          </div>
         </figure>
         {mounted ? <MmfCharts waveform={w.waveform} mmf={w.mmf} /> : <p className="muted">Drawing the MMF…</p>}
       </div>

@@ -34,7 +34,8 @@ export function rowKeyHandler({ add, remove }: { add: (() => void) | null; remov
 export function RowKeys({ id, what }: { id: string; what: string }) {
   return (
     <p id={id} className="hint row-keys">
-      Keys in these rows: <kbd>Alt</kbd>+<kbd>Shift</kbd>+<kbd>A</kbd> adds {what}; <kbd>Alt</kbd>+<kbd>Shift</kbd>+<kbd>R</kbd> removes the row you are in.
+      Keys in these rows: <kbd>Alt</kbd>+<kbd>Shift</kbd>+<kbd>A</kbd> adds {what}; <kbd>Alt</kbd>+<kbd>Shift</kbd>+<kbd>R</kbd> removes the
+      row you are in.
     </p>
   );
 }

@@ -21,7 +21,15 @@ import { AnalysisPanel } from './analysis-panel';
 import { FindingsStrip } from './findings-strip';
 import { ImportSheet } from './import-sheet';
 import { Pictures } from './pictures';
-import { CoreSection, InsulationSection, NotesSection, ResistanceSection, SupplySection, WiresSection, WindingSection } from './sheet-sections';
+import {
+  CoreSection,
+  InsulationSection,
+  NotesSection,
+  ResistanceSection,
+  SupplySection,
+  WiresSection,
+  WindingSection,
+} from './sheet-sections';
 import { serverErrorsToForm, sheetResolver } from './sheet-resolver';
 import { ReadOnlyFields } from './sheet-fields';
 import { draftStatusText, useDraftAutosave } from './use-draft-autosave';
@@ -59,28 +67,51 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
   const [slotTable, setSlotTable] = useState<CoilSide[] | undefined>(initial.slotTable);
   const slotRef = useRef(slotTable);
   slotRef.current = slotTable;
-  const [baseRevision, setBaseRevision] = useState<number | null>(initial.baseRevision !== undefined ? initial.baseRevision : savedRevision);
+  const [baseRevision, setBaseRevision] = useState<number | null>(
+    initial.baseRevision !== undefined ? initial.baseRevision : savedRevision,
+  );
   const baseRef = useRef(baseRevision);
   baseRef.current = baseRevision;
   // What was typed (or stored) behind each length field shown in the other unit: a toggle never changes it.
   const memoryRef = useRef<Map<string, TypedLength>>(new Map(initial.lengthMemory ?? []));
   const [conflict, setConflict] = useState(false);
   const [summary, setSummary] = useState<{ tone: 'ok' | 'bad' | 'warn'; text: string } | null>(
-    initial.source === 'draft' ? { tone: 'warn', text: `Restored your unsaved draft from ${fmt.dateTime(new Date(initial.draftSavedAt ?? Date.now()))}. Save the sheet to keep it, or discard the draft.` } : null,
+    initial.source === 'draft'
+      ? {
+          tone: 'warn',
+          text: `Restored your unsaved draft from ${fmt.dateTime(new Date(initial.draftSavedAt ?? Date.now()))}. Save the sheet to keep it, or discard the draft.`,
+        }
+      : null,
   );
   const [hasDraft, setHasDraft] = useState(initial.source === 'draft');
   const [pending, startTransition] = useTransition();
 
-  const resolver = useMemo(() => sheetResolver(() => unitRef.current, () => slotRef.current, () => memoryRef.current), []);
+  const resolver = useMemo(
+    () =>
+      sheetResolver(
+        () => unitRef.current,
+        () => slotRef.current,
+        () => memoryRef.current,
+      ),
+    [],
+  );
   const form = useForm<SheetFormValues, unknown, WindingSheet>({ resolver, defaultValues: initial.values, mode: 'onSubmit' });
   const { handleSubmit, setError, watch, getValues, setValue, reset } = form;
 
-  const autosave = useDraftAutosave(jobId, editable, () => ({ unit: unitRef.current, values: getValues(), baseRevision: baseRef.current, ...(slotRef.current ? { slotTable: slotRef.current } : {}) }));
+  const autosave = useDraftAutosave(jobId, editable, () => ({
+    unit: unitRef.current,
+    values: getValues(),
+    baseRevision: baseRef.current,
+    ...(slotRef.current ? { slotTable: slotRef.current } : {}),
+  }));
   const [live, setLive] = useState<LiveAnalysis>(() => liveAnalysis(initial.values, initial.unit, initial.slotTable, memoryRef.current));
   const analysisTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const reanalyse = useCallback(() => {
     if (analysisTimer.current) clearTimeout(analysisTimer.current);
-    analysisTimer.current = setTimeout(() => setLive(liveAnalysis(getValues(), unitRef.current, slotRef.current, memoryRef.current)), ANALYSIS_DELAY_MS);
+    analysisTimer.current = setTimeout(
+      () => setLive(liveAnalysis(getValues(), unitRef.current, slotRef.current, memoryRef.current)),
+      ANALYSIS_DELAY_MS,
+    );
   }, [getValues]);
 
   useEffect(() => {
@@ -125,7 +156,11 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
         applyFieldErrors(serverErrorsToForm(r.fieldErrors), setError);
         setSummary({ tone: 'bad', text: r.message });
       }),
-    () => setSummary({ tone: 'bad', text: 'Some fields need attention. Each one is marked in the form; nothing was saved yet (your draft is kept).' }),
+    () =>
+      setSummary({
+        tone: 'bad',
+        text: 'Some fields need attention. Each one is marked in the form; nothing was saved yet (your draft is kept).',
+      }),
   );
 
   const discard = () =>
@@ -159,14 +194,23 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
           <span className="label">Lengths in</span>
           {(['mm', 'in'] as const).map((u) => (
             <label key={u} className="inline">
-              <input type="radio" name="length-unit" value={u} checked={unit === u} onChange={() => switchUnit(u)} /> {u === 'mm' ? 'millimetres' : 'inches'}
+              <input type="radio" name="length-unit" value={u} checked={unit === u} onChange={() => switchUnit(u)} />{' '}
+              {u === 'mm' ? 'millimetres' : 'inches'}
             </label>
           ))}
         </div>
-        <p className="draft-status small" role="status" aria-live="polite" data-testid="draft-status">{statusText}</p>
+        <p className="draft-status small" role="status" aria-live="polite" data-testid="draft-status">
+          {statusText}
+        </p>
         <div className="row">
-          <a className="btn quiet" href={jobRoutes(jobNumber).asFoundPrint}>Print view</a>
-          {savedRevision !== null && <a className="btn quiet" href={jobRoutes(jobNumber).asFoundExport} download>Export JSON</a>}
+          <a className="btn quiet" href={jobRoutes(jobNumber).asFoundPrint}>
+            Print view
+          </a>
+          {savedRevision !== null && (
+            <a className="btn quiet" href={jobRoutes(jobNumber).asFoundExport} download>
+              Export JSON
+            </a>
+          )}
           {editable && <ImportSheet unit={unit} onImported={imported} />}
           <LibraryLink jobNumber={jobNumber} values={getValues} unit={unit} />
         </div>
@@ -179,9 +223,25 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
             <p>Loading the sheet saved by the other person…</p>
           ) : (
             <>
-              <p><strong>Saved by someone else</strong> (now revision {savedRevision}). Your values are still in this form.{' '}
-                <a href={jobRoutes(jobNumber).asFoundPrint} target="_blank" rel="noreferrer">Open the saved sheet</a> to compare.</p>
-              <button type="button" className="btn secondary" onClick={() => { setBaseRevision(savedRevision); setConflict(false); setSummary({ tone: 'warn', text: 'Your values are still in the form. Save again to replace the other revision with them.' }); }}>
+              <p>
+                <strong>Saved by someone else</strong> (now revision {savedRevision}). Your values are still in this form.{' '}
+                <a href={jobRoutes(jobNumber).asFoundPrint} target="_blank" rel="noreferrer">
+                  Open the saved sheet
+                </a>{' '}
+                to compare.
+              </p>
+              <button
+                type="button"
+                className="btn secondary"
+                onClick={() => {
+                  setBaseRevision(savedRevision);
+                  setConflict(false);
+                  setSummary({
+                    tone: 'warn',
+                    text: 'Your values are still in the form. Save again to replace the other revision with them.',
+                  });
+                }}
+              >
                 Keep my values and save over revision {savedRevision}
               </button>
             </>
@@ -201,20 +261,39 @@ export function SheetEditor({ jobId, jobNumber, editable, readOnlyReason, savedR
               <NotesSection />
             </div>
           </ReadOnlyFields>
-          {slotTable && <p className="small muted">This sheet carries a slot table drawn by the winder ({slotTable.length} coil sides); the diagram and analysis use it.</p>}
+          {slotTable && (
+            <p className="small muted">
+              This sheet carries a slot table drawn by the winder ({slotTable.length} coil sides); the diagram and analysis use it.
+            </p>
+          )}
           {editable && (
             <div className="row save-row no-print">
-              <button className="btn" type="submit" disabled={pending || conflict}>{pending ? 'Saving…' : 'Save data sheet'}</button>
-              {hasDraft && initial.source === 'draft' && <button type="button" className="btn quiet" onClick={discard} disabled={pending}>Discard draft</button>}
+              <button className="btn" type="submit" disabled={pending || conflict}>
+                {pending ? 'Saving…' : 'Save data sheet'}
+              </button>
+              {hasDraft && initial.source === 'draft' && (
+                <button type="button" className="btn quiet" onClick={discard} disabled={pending}>
+                  Discard draft
+                </button>
+              )}
               <span className="small muted">{baseRevision === null ? 'Not saved yet.' : `Editing from revision ${baseRevision}.`}</span>
             </div>
           )}
           <FindingsStrip live={live} open={drawer.open} onToggle={drawer.toggle} controls="live-analysis" />
         </form>
-        <aside id="live-analysis" className={`sheet-analysis${drawer.open ? ' open' : ''}`} aria-labelledby="live-h" ref={drawer.ref} tabIndex={0} onKeyDown={drawer.onKeyDown}>
+        <aside
+          id="live-analysis"
+          className={`sheet-analysis${drawer.open ? ' open' : ''}`}
+          aria-labelledby="live-h"
+          ref={drawer.ref}
+          tabIndex={0}
+          onKeyDown={drawer.onKeyDown}
+        >
           <div className="analysis-head">
             <h2 id="live-h">Live analysis</h2>
-            <button type="button" className="btn quiet analysis-close" onClick={drawer.close}>Close</button>
+            <button type="button" className="btn quiet analysis-close" onClick={drawer.close}>
+              Close
+            </button>
           </div>
           <AnalysisPanel live={live} />
         </aside>
@@ -263,5 +342,9 @@ function LibraryLink({ jobNumber, values, unit }: { jobNumber: number; values: (
     q.set('unit', unit);
     window.location.href = `/library?${q.toString()}`;
   };
-  return <button type="button" className="btn quiet" onClick={go}>Find matching sheets</button>;
+  return (
+    <button type="button" className="btn quiet" onClick={go}>
+      Find matching sheets
+    </button>
+  );
 }

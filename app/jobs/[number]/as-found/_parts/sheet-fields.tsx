@@ -19,13 +19,28 @@ export function ReadOnlyFields({ value, children }: { value: boolean; children: 
 export const useReadOnly = (): boolean => useContext(ReadOnlyContext);
 
 /** A field's label and value as a term and its description (inside the section's read-only list). */
-function ReadOnlyValue({ name, label, unit, text, wide }: { name: Path; label: string; unit?: string | undefined; text: (v: string) => string; wide?: boolean }) {
+function ReadOnlyValue({
+  name,
+  label,
+  unit,
+  text,
+  wide,
+}: {
+  name: Path;
+  label: string;
+  unit?: string | undefined;
+  text: (v: string) => string;
+  wide?: boolean;
+}) {
   const { control } = useFormContext<SheetFormValues>();
   const v = useWatch({ control, name });
   const shown = typeof v === 'string' && v.trim() !== '' ? text(v) : '—';
   return (
     <div className={wide ? 'sf wide' : 'sf'} data-field={name}>
-      <dt>{label}{unit ? <span className="unit"> ({unit})</span> : null}</dt>
+      <dt>
+        {label}
+        {unit ? <span className="unit"> ({unit})</span> : null}
+      </dt>
       <dd className="ro-value">{shown}</dd>
     </div>
   );
@@ -37,7 +52,9 @@ const LONG_OPTION = 18;
 export const fieldId = (name: string): string => `f-${name.replace(/\./g, '-')}`;
 
 export function useFieldError(name: string): string | undefined {
-  const { formState: { errors } } = useFormContext<SheetFormValues>();
+  const {
+    formState: { errors },
+  } = useFormContext<SheetFormValues>();
   const e = get(errors, name) as { message?: string } | undefined;
   return e?.message;
 }
@@ -62,10 +79,21 @@ export function NumField({ name, label, unit, hint, whole }: NumProps) {
   if (readOnly) return <ReadOnlyValue name={name} label={label} unit={unit} text={asIs} />;
   return (
     <div className="sf">
-      <label htmlFor={id}>{label}{unit ? <span className="unit"> ({unit})</span> : null}</label>
+      <label htmlFor={id}>
+        {label}
+        {unit ? <span className="unit"> ({unit})</span> : null}
+      </label>
       <input {...register(name)} {...describe(id, error, hint)} type="text" inputMode={whole ? 'numeric' : 'decimal'} autoComplete="off" />
-      {hint && <p id={`${id}-hint`} className="hint">{hint}</p>}
-      {error && <p id={`${id}-error`} className="field-error">{error}</p>}
+      {hint && (
+        <p id={`${id}-hint`} className="hint">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} className="field-error">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
@@ -79,14 +107,36 @@ export function TextField({ name, label, hint, long }: { name: Path; label: stri
   return (
     <div className={long ? 'sf wide' : 'sf'}>
       <label htmlFor={id}>{label}</label>
-      {long ? <textarea {...register(name)} {...describe(id, error, hint)} /> : <input {...register(name)} {...describe(id, error, hint)} type="text" autoComplete="off" />}
-      {hint && <p id={`${id}-hint`} className="hint">{hint}</p>}
-      {error && <p id={`${id}-error`} className="field-error">{error}</p>}
+      {long ? (
+        <textarea {...register(name)} {...describe(id, error, hint)} />
+      ) : (
+        <input {...register(name)} {...describe(id, error, hint)} type="text" autoComplete="off" />
+      )}
+      {hint && (
+        <p id={`${id}-hint`} className="hint">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} className="field-error">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
 
-export function SelectField({ name, label, options, hint }: { name: Path; label: string; options: readonly (readonly [string, string])[]; hint?: string }) {
+export function SelectField({
+  name,
+  label,
+  options,
+  hint,
+}: {
+  name: Path;
+  label: string;
+  options: readonly (readonly [string, string])[];
+  hint?: string;
+}) {
   const { register } = useFormContext<SheetFormValues>();
   const id = fieldId(name);
   const error = useFieldError(name);
@@ -96,10 +146,22 @@ export function SelectField({ name, label, options, hint }: { name: Path; label:
     <div className={options.some(([, l]) => l.length > LONG_OPTION) ? 'sf span2' : 'sf'}>
       <label htmlFor={id}>{label}</label>
       <select {...register(name)} {...describe(id, error, hint)}>
-        {options.map(([v, l]) => <option key={v} value={v}>{l}</option>)}
+        {options.map(([v, l]) => (
+          <option key={v} value={v}>
+            {l}
+          </option>
+        ))}
       </select>
-      {hint && <p id={`${id}-hint`} className="hint">{hint}</p>}
-      {error && <p id={`${id}-error`} className="field-error">{error}</p>}
+      {hint && (
+        <p id={`${id}-hint`} className="hint">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} className="field-error">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
@@ -109,7 +171,11 @@ export function Section({ id, title, children, note }: { id: string; title: stri
   return (
     <fieldset className="sheet-section" aria-describedby={note ? `${id}-note` : undefined}>
       <legend id={id}>{title}</legend>
-      {note && <p id={`${id}-note`} className="hint">{note}</p>}
+      {note && (
+        <p id={`${id}-note`} className="hint">
+          {note}
+        </p>
+      )}
       {readOnly ? <dl className="sgrid ro">{children}</dl> : <div className="sgrid">{children}</div>}
     </fieldset>
   );

@@ -10,7 +10,11 @@ import { windingSheetSchema, type WindingSheet } from '@/lib/as-found/winding-sh
 import type { LengthUnit } from '@/lib/as-found/length-entry';
 import { formToSheetInput, sheetPathToFormPath, type LengthMemory, type SheetFormValues } from '@/lib/as-found/as-found-form';
 
-export function sheetResolver(unit: () => LengthUnit, slotTable: () => CoilSide[] | undefined, memory: () => LengthMemory): Resolver<SheetFormValues, unknown, WindingSheet> {
+export function sheetResolver(
+  unit: () => LengthUnit,
+  slotTable: () => CoilSide[] | undefined,
+  memory: () => LengthMemory,
+): Resolver<SheetFormValues, unknown, WindingSheet> {
   return async (values, _context, options) => {
     const r = windingSheetSchema.safeParse(formToSheetInput(values, unit(), slotTable(), memory()));
     if (r.success) return { values: r.data, errors: {} };

@@ -32,7 +32,11 @@ export function CoreSection({ unit }: { unit: LengthUnit }) {
 }
 
 function CoilRows() {
-  const { control, register, formState: { errors } } = useFormContext<SheetFormValues>();
+  const {
+    control,
+    register,
+    formState: { errors },
+  } = useFormContext<SheetFormValues>();
   const { fields, append, remove } = useFieldArray({ control, name: 'winding.coils' });
   const style = useWatch({ control, name: 'winding.style' });
   const coils = useWatch({ control, name: 'winding.coils' });
@@ -43,21 +47,44 @@ function CoilRows() {
   const add = () => append({ span: '', turns: '' }, { focusName: `winding.coils.${fields.length}.span` });
   const onKeyDown = rowKeyHandler({
     add: canAdd ? add : null,
-    remove: concentric && fields.length > 1 ? (i) => { remove(i); focusLater(fieldId(`winding.coils.${Math.max(0, i - 1)}.span`)); } : null,
+    remove:
+      concentric && fields.length > 1
+        ? (i) => {
+            remove(i);
+            focusLater(fieldId(`winding.coils.${Math.max(0, i - 1)}.span`));
+          }
+        : null,
   });
   if (readOnly) {
     return (
       <div className="sf wide">
         <dt>{concentric ? 'Coils of one group, outside coil first' : 'Coil'}</dt>
-        <dd className="ro-value">{coils.map((c, i) => `${concentric ? `coil ${i + 1}: ` : ''}span ${c.span || '—'}, ${c.turns || '—'} turns`).join('; ')}</dd>
+        <dd className="ro-value">
+          {coils.map((c, i) => `${concentric ? `coil ${i + 1}: ` : ''}span ${c.span || '—'}, ${c.turns || '—'} turns`).join('; ')}
+        </dd>
       </div>
     );
   }
   return (
-    <div className="wide coil-rows" role="group" aria-labelledby="coils-h" aria-describedby={concentric ? 'coil-keys' : undefined} onKeyDown={onKeyDown}>
-      <p id="coils-h" className="label">{concentric ? 'Coils of one group, outside coil first' : 'Coil'}</p>
+    <div
+      className="wide coil-rows"
+      role="group"
+      aria-labelledby="coils-h"
+      aria-describedby={concentric ? 'coil-keys' : undefined}
+      onKeyDown={onKeyDown}
+    >
+      <p id="coils-h" className="label">
+        {concentric ? 'Coils of one group, outside coil first' : 'Coil'}
+      </p>
       <table className="compact">
-        <thead><tr><th scope="col">{concentric ? 'Coil' : ''}</th><th scope="col">Span (slots; “1–8” is 7)</th><th scope="col">Turns per coil</th><th /></tr></thead>
+        <thead>
+          <tr>
+            <th scope="col">{concentric ? 'Coil' : ''}</th>
+            <th scope="col">Span (slots; “1–8” is 7)</th>
+            <th scope="col">Turns per coil</th>
+            <th />
+          </tr>
+        </thead>
         <tbody>
           {fields.map((f, i) => {
             const spanId = fieldId(`winding.coils.${i}.span`);
@@ -66,31 +93,66 @@ function CoilRows() {
               <tr key={f.id} data-row={i}>
                 <td>{concentric ? i + 1 : ''}</td>
                 <td>
-                  <label htmlFor={spanId} className="sr-only">Span of coil {i + 1}</label>
-                  <input id={spanId} {...register(`winding.coils.${i}.span`)} inputMode="numeric" autoComplete="off" aria-invalid={errorAt(errors, `winding.coils.${i}.span`) ? true : undefined} />
+                  <label htmlFor={spanId} className="sr-only">
+                    Span of coil {i + 1}
+                  </label>
+                  <input
+                    id={spanId}
+                    {...register(`winding.coils.${i}.span`)}
+                    inputMode="numeric"
+                    autoComplete="off"
+                    aria-invalid={errorAt(errors, `winding.coils.${i}.span`) ? true : undefined}
+                  />
                   <RowError name={`winding.coils.${i}.span`} message={errorAt(errors, `winding.coils.${i}.span`)} />
                 </td>
                 <td>
-                  <label htmlFor={turnsId} className="sr-only">Turns of coil {i + 1}</label>
-                  <input id={turnsId} {...register(`winding.coils.${i}.turns`)} inputMode="numeric" autoComplete="off" aria-invalid={errorAt(errors, `winding.coils.${i}.turns`) ? true : undefined} />
+                  <label htmlFor={turnsId} className="sr-only">
+                    Turns of coil {i + 1}
+                  </label>
+                  <input
+                    id={turnsId}
+                    {...register(`winding.coils.${i}.turns`)}
+                    inputMode="numeric"
+                    autoComplete="off"
+                    aria-invalid={errorAt(errors, `winding.coils.${i}.turns`) ? true : undefined}
+                  />
                   <RowError name={`winding.coils.${i}.turns`} message={errorAt(errors, `winding.coils.${i}.turns`)} />
                 </td>
-                <td>{concentric && fields.length > 1 && <button type="button" className="btn quiet small-btn" onClick={() => remove(i)} aria-label={`Remove coil ${i + 1}`}>Remove</button>}</td>
+                <td>
+                  {concentric && fields.length > 1 && (
+                    <button type="button" className="btn quiet small-btn" onClick={() => remove(i)} aria-label={`Remove coil ${i + 1}`}>
+                      Remove
+                    </button>
+                  )}
+                </td>
               </tr>
             );
           })}
         </tbody>
       </table>
-      {canAdd && <button type="button" className="btn quiet small-btn" onClick={add} aria-keyshortcuts={ROW_KEYS.add.aria}>Add a coil to the group</button>}
+      {canAdd && (
+        <button type="button" className="btn quiet small-btn" onClick={add} aria-keyshortcuts={ROW_KEYS.add.aria}>
+          Add a coil to the group
+        </button>
+      )}
       {concentric && <RowKeys id="coil-keys" what="a coil to the group" />}
-      {rootError && <p className="field-error" id="f-winding-coils-error">{rootError}</p>}
+      {rootError && (
+        <p className="field-error" id="f-winding-coils-error">
+          {rootError}
+        </p>
+      )}
     </div>
   );
 }
 
-const errorAt = (errors: FieldErrors<SheetFormValues>, name: string): string | undefined => (get(errors, name) as { message?: string } | undefined)?.message;
+const errorAt = (errors: FieldErrors<SheetFormValues>, name: string): string | undefined =>
+  (get(errors, name) as { message?: string } | undefined)?.message;
 function RowError({ message, name }: { message: string | undefined; name: string }) {
-  return message ? <p className="field-error" id={`${fieldId(name)}-error`}>{message}</p> : null;
+  return message ? (
+    <p className="field-error" id={`${fieldId(name)}-error`}>
+      {message}
+    </p>
+  ) : null;
 }
 
 export function WindingSection({ unit }: { unit: LengthUnit }) {
@@ -98,14 +160,46 @@ export function WindingSection({ unit }: { unit: LengthUnit }) {
   const layers = useWatch({ control, name: 'winding.layers' });
   return (
     <Section id="sec-winding" title="Winding as found">
-      <SelectField name="winding.layers" label="Layers" options={[['2', 'Double layer (2 sides per slot)'], ['1', 'Single layer']]} />
-      <SelectField name="winding.style" label="Coil style" options={[['lap', 'Lap (all coils one span)'], ['concentric', 'Concentric (nested coils)']]} />
-      {layers === '1' && <SelectField name="winding.singleLayerCoiling" label="Single-layer coiling" options={[['', '—'], ['half', 'Half-coiled (group per pole pair)'], ['whole', 'Whole-coiled (group per pole)']]} />}
+      <SelectField
+        name="winding.layers"
+        label="Layers"
+        options={[
+          ['2', 'Double layer (2 sides per slot)'],
+          ['1', 'Single layer'],
+        ]}
+      />
+      <SelectField
+        name="winding.style"
+        label="Coil style"
+        options={[
+          ['lap', 'Lap (all coils one span)'],
+          ['concentric', 'Concentric (nested coils)'],
+        ]}
+      />
+      {layers === '1' && (
+        <SelectField
+          name="winding.singleLayerCoiling"
+          label="Single-layer coiling"
+          options={[
+            ['', '—'],
+            ['half', 'Half-coiled (group per pole pair)'],
+            ['whole', 'Whole-coiled (group per pole)'],
+          ]}
+        />
+      )}
       <CoilRows />
       <NumField name="winding.coilsPerGroup" label="Coils per group" whole />
       <NumField name="winding.groups" label="Groups (total)" whole />
       <NumField name="winding.parallelPaths" label="Parallel circuits" whole />
-      <SelectField name="winding.connection" label="Connection" options={[['', '—'], ['star', 'Star (Y)'], ['delta', 'Delta (Δ)']]} />
+      <SelectField
+        name="winding.connection"
+        label="Connection"
+        options={[
+          ['', '—'],
+          ['star', 'Star (Y)'],
+          ['delta', 'Delta (Δ)'],
+        ]}
+      />
       <NumField name="winding.leads" label="Leads" whole />
       <TextField name="winding.leadMarkings" label="Lead markings" hint="e.g. U1 V1 W1 U2 V2 W2" />
       <NumField name="winding.meanTurnLengthMm" label="Mean length of turn" unit={unit} />
@@ -126,10 +220,24 @@ function WireRowsReadOnly() {
   return (
     <table className="compact wires">
       <caption className="sr-only">Wires in hand</caption>
-      <thead><tr><th scope="col">#</th><th scope="col">Standard</th><th scope="col">Size (AWG, or bare mm)</th><th scope="col">Wires in hand</th><th scope="col">Enamel grade</th></tr></thead>
+      <thead>
+        <tr>
+          <th scope="col">#</th>
+          <th scope="col">Standard</th>
+          <th scope="col">Size (AWG, or bare mm)</th>
+          <th scope="col">Wires in hand</th>
+          <th scope="col">Enamel grade</th>
+        </tr>
+      </thead>
       <tbody>
         {wires.map((w, i) => (
-          <tr key={i}><td>{i + 1}</td><td>{STANDARD_LABELS[w.standard] ?? w.standard}</td><td>{w.size || '—'}</td><td>{w.count || '—'}</td><td>{GRADE_LABELS[w.enamelGrade] ?? w.enamelGrade}</td></tr>
+          <tr key={i}>
+            <td>{i + 1}</td>
+            <td>{STANDARD_LABELS[w.standard] ?? w.standard}</td>
+            <td>{w.size || '—'}</td>
+            <td>{w.count || '—'}</td>
+            <td>{GRADE_LABELS[w.enamelGrade] ?? w.enamelGrade}</td>
+          </tr>
         ))}
       </tbody>
     </table>
@@ -142,14 +250,24 @@ function focusLater(id: string): void {
 }
 
 export function WiresSection() {
-  const { control, register, formState: { errors } } = useFormContext<SheetFormValues>();
+  const {
+    control,
+    register,
+    formState: { errors },
+  } = useFormContext<SheetFormValues>();
   const { fields, append, remove } = useFieldArray({ control, name: 'wires' });
   const rootError = errorAt(errors, 'wires.root') ?? errorAt(errors, 'wires');
   const readOnly = useReadOnly();
   const add = () => append(blankWire(), { focusName: `wires.${fields.length}.size` });
   const onKeyDown = rowKeyHandler({
     add: fields.length < 4 ? add : null,
-    remove: fields.length > 1 ? (i) => { remove(i); focusLater(fieldId(`wires.${Math.max(0, i - 1)}.size`)); } : null,
+    remove:
+      fields.length > 1
+        ? (i) => {
+            remove(i);
+            focusLater(fieldId(`wires.${Math.max(0, i - 1)}.size`));
+          }
+        : null,
   });
   if (readOnly) {
     return (
@@ -164,35 +282,81 @@ export function WiresSection() {
       <legend>Wires in hand</legend>
       <p className="hint">One row per wire size; “count” is how many wires of that size are wound together in hand.</p>
       <table className="compact wires">
-        <thead><tr><th scope="col">#</th><th scope="col">Standard</th><th scope="col">Size (AWG, or bare mm)</th><th scope="col">Wires in hand</th><th scope="col">Enamel grade</th><th /></tr></thead>
+        <thead>
+          <tr>
+            <th scope="col">#</th>
+            <th scope="col">Standard</th>
+            <th scope="col">Size (AWG, or bare mm)</th>
+            <th scope="col">Wires in hand</th>
+            <th scope="col">Enamel grade</th>
+            <th />
+          </tr>
+        </thead>
         <tbody>
           {fields.map((f, i) => (
             <tr key={f.id} data-row={i}>
               <td>{i + 1}</td>
               <td>
-                <label htmlFor={fieldId(`wires.${i}.standard`)} className="sr-only">Wire {i + 1} standard</label>
-                <select id={fieldId(`wires.${i}.standard`)} {...register(`wires.${i}.standard`)}><option value="metric">Metric (mm)</option><option value="awg">AWG</option></select>
+                <label htmlFor={fieldId(`wires.${i}.standard`)} className="sr-only">
+                  Wire {i + 1} standard
+                </label>
+                <select id={fieldId(`wires.${i}.standard`)} {...register(`wires.${i}.standard`)}>
+                  <option value="metric">Metric (mm)</option>
+                  <option value="awg">AWG</option>
+                </select>
               </td>
               <td>
-                <label htmlFor={fieldId(`wires.${i}.size`)} className="sr-only">Wire {i + 1} size</label>
-                <input id={fieldId(`wires.${i}.size`)} {...register(`wires.${i}.size`)} autoComplete="off" aria-invalid={errorAt(errors, `wires.${i}.size`) ? true : undefined} aria-describedby={`${fieldId(`wires.${i}.size`)}-error`} />
+                <label htmlFor={fieldId(`wires.${i}.size`)} className="sr-only">
+                  Wire {i + 1} size
+                </label>
+                <input
+                  id={fieldId(`wires.${i}.size`)}
+                  {...register(`wires.${i}.size`)}
+                  autoComplete="off"
+                  aria-invalid={errorAt(errors, `wires.${i}.size`) ? true : undefined}
+                  aria-describedby={`${fieldId(`wires.${i}.size`)}-error`}
+                />
                 <RowError name={`wires.${i}.size`} message={errorAt(errors, `wires.${i}.size`)} />
               </td>
               <td>
-                <label htmlFor={fieldId(`wires.${i}.count`)} className="sr-only">Wire {i + 1} count in hand</label>
-                <input id={fieldId(`wires.${i}.count`)} {...register(`wires.${i}.count`)} inputMode="numeric" autoComplete="off" aria-invalid={errorAt(errors, `wires.${i}.count`) ? true : undefined} />
+                <label htmlFor={fieldId(`wires.${i}.count`)} className="sr-only">
+                  Wire {i + 1} count in hand
+                </label>
+                <input
+                  id={fieldId(`wires.${i}.count`)}
+                  {...register(`wires.${i}.count`)}
+                  inputMode="numeric"
+                  autoComplete="off"
+                  aria-invalid={errorAt(errors, `wires.${i}.count`) ? true : undefined}
+                />
                 <RowError name={`wires.${i}.count`} message={errorAt(errors, `wires.${i}.count`)} />
               </td>
               <td>
-                <label htmlFor={fieldId(`wires.${i}.enamelGrade`)} className="sr-only">Wire {i + 1} enamel grade</label>
-                <select id={fieldId(`wires.${i}.enamelGrade`)} {...register(`wires.${i}.enamelGrade`)}><option value="1">1 (single build)</option><option value="2">2 (heavy)</option><option value="3">3</option></select>
+                <label htmlFor={fieldId(`wires.${i}.enamelGrade`)} className="sr-only">
+                  Wire {i + 1} enamel grade
+                </label>
+                <select id={fieldId(`wires.${i}.enamelGrade`)} {...register(`wires.${i}.enamelGrade`)}>
+                  <option value="1">1 (single build)</option>
+                  <option value="2">2 (heavy)</option>
+                  <option value="3">3</option>
+                </select>
               </td>
-              <td>{fields.length > 1 && <button type="button" className="btn quiet small-btn" onClick={() => remove(i)} aria-label={`Remove wire ${i + 1}`}>Remove</button>}</td>
+              <td>
+                {fields.length > 1 && (
+                  <button type="button" className="btn quiet small-btn" onClick={() => remove(i)} aria-label={`Remove wire ${i + 1}`}>
+                    Remove
+                  </button>
+                )}
+              </td>
             </tr>
           ))}
         </tbody>
       </table>
-      {fields.length < 4 && <button type="button" className="btn quiet small-btn" onClick={add} aria-keyshortcuts={ROW_KEYS.add.aria}>Add a wire size</button>}
+      {fields.length < 4 && (
+        <button type="button" className="btn quiet small-btn" onClick={add} aria-keyshortcuts={ROW_KEYS.add.aria}>
+          Add a wire size
+        </button>
+      )}
       <RowKeys id="wire-keys" what="a wire size" />
       {rootError && <p className="field-error">{rootError}</p>}
     </fieldset>
@@ -214,7 +378,17 @@ export function SupplySection() {
 export function InsulationSection() {
   return (
     <Section id="sec-ins" title="Insulation">
-      <SelectField name="insulation.thermalClass" label="Insulation class" options={[['', '—'], ['A', 'A (105 °C)'], ['B', 'B (130 °C)'], ['F', 'F (155 °C)'], ['H', 'H (180 °C)']]} />
+      <SelectField
+        name="insulation.thermalClass"
+        label="Insulation class"
+        options={[
+          ['', '—'],
+          ['A', 'A (105 °C)'],
+          ['B', 'B (130 °C)'],
+          ['F', 'F (155 °C)'],
+          ['H', 'H (180 °C)'],
+        ]}
+      />
       <TextField name="insulation.slotLiner" label="Slot liner" hint="Material and thickness" />
       <TextField name="insulation.wedges" label="Wedges" />
       <TextField name="insulation.varnish" label="Varnish" />
@@ -229,7 +403,14 @@ export function ResistanceSection() {
       <NumField name="resistance.readings.1" label="Reading 2 (V–W or V1–V2)" unit="Ω" />
       <NumField name="resistance.readings.2" label="Reading 3 (W–U or W1–W2)" unit="Ω" />
       <NumField name="resistance.temperatureC" label="Winding temperature" unit="°C" />
-      <SelectField name="resistance.between" label="Readings are" options={[['line-to-line', 'Line to line'], ['phase', 'Per phase']]} />
+      <SelectField
+        name="resistance.between"
+        label="Readings are"
+        options={[
+          ['line-to-line', 'Line to line'],
+          ['phase', 'Per phase'],
+        ]}
+      />
     </Section>
   );
 }
@@ -237,7 +418,12 @@ export function ResistanceSection() {
 export function NotesSection() {
   return (
     <Section id="sec-notes" title="Notes">
-      <TextField name="notes" label="Notes" long hint="Anything else the next winder needs: damage, repairs to the core, odd connections." />
+      <TextField
+        name="notes"
+        label="Notes"
+        long
+        hint="Anything else the next winder needs: damage, repairs to the core, odd connections."
+      />
     </Section>
   );
 }

@@ -101,8 +101,9 @@ export function SlotDiagram({ table, caption, id = 'slot-diagram' }: SlotDiagram
       {/* One string child: React renders a <title> with several children as empty on the server. */}
       <title id={`${id}-title`}>{`Slot diagram: ${S} slots, ${table.poles} poles, ${caption}`}</title>
       <desc id={`${id}-desc`}>
-        Each slot shows its coil sides by phase and direction (top layer next to the bore{table.layers === 2 ? ', bottom layer outside it' : ''}).
-        Phase belts round the top layer: {beltText}. {group.length ? `First A+ group spans: ${group.map(([a, b]) => `${a}–${b}`).join(', ')}.` : ''} The table below lists every slot.
+        Each slot shows its coil sides by phase and direction (top layer next to the bore
+        {table.layers === 2 ? ', bottom layer outside it' : ''}). Phase belts round the top layer: {beltText}.{' '}
+        {group.length ? `First A+ group spans: ${group.map(([a, b]) => `${a}–${b}`).join(', ')}.` : ''} The table below lists every slot.
       </desc>
       <defs>
         <pattern id={`${id}-hatch`} width="4" height="4" patternUnits="userSpaceOnUse" patternTransform="rotate(45)">
@@ -126,27 +127,57 @@ export function SlotDiagram({ table, caption, id = 'slot-diagram' }: SlotDiagram
         const [tx, ty] = polar((r1 + r2) / 2, mid);
         return (
           <g key={`${s.slot}-${s.layer}`} data-slot={s.slot} data-layer={s.layer}>
-            <path d={sector(r1 + 1, r2 - 1, mid - pitch * 0.42, mid + pitch * 0.42)} fill={fill} stroke="#1d2430" strokeWidth={s.polarity > 0 ? 1.2 : 0.9} strokeDasharray={s.polarity > 0 ? undefined : '2 1.5'} />
+            <path
+              d={sector(r1 + 1, r2 - 1, mid - pitch * 0.42, mid + pitch * 0.42)}
+              fill={fill}
+              stroke="#1d2430"
+              strokeWidth={s.polarity > 0 ? 1.2 : 0.9}
+              strokeDasharray={s.polarity > 0 ? undefined : '2 1.5'}
+            />
             {showCellLabels && (
-              <text x={f(tx)} y={f(ty)} fontSize={fontCell} textAnchor="middle" dominantBaseline="central" className="cell-label" paintOrder="stroke" stroke="#fff" strokeWidth={fontCell / 3.5}>
+              <text
+                x={f(tx)}
+                y={f(ty)}
+                fontSize={fontCell}
+                textAnchor="middle"
+                dominantBaseline="central"
+                className="cell-label"
+                paintOrder="stroke"
+                stroke="#fff"
+                strokeWidth={fontCell / 3.5}
+              >
                 {sideLabel(s)}
               </text>
             )}
           </g>
         );
       })}
-      {Array.from({ length: S }, (_, i) => i + 1).filter((n) => n === 1 || (n - 1) % labelEvery === 0).map((n) => {
-        const [x, y] = polar(R_BORE + RING + 13, (n - 1) * pitch);
-        return <text key={n} x={f(x)} y={f(y)} fontSize={TEXT_MIN} textAnchor="middle" dominantBaseline="central" fill="#3d4654">{n}</text>;
-      })}
+      {Array.from({ length: S }, (_, i) => i + 1)
+        .filter((n) => n === 1 || (n - 1) % labelEvery === 0)
+        .map((n) => {
+          const [x, y] = polar(R_BORE + RING + 13, (n - 1) * pitch);
+          return (
+            <text key={n} x={f(x)} y={f(y)} fontSize={TEXT_MIN} textAnchor="middle" dominantBaseline="central" fill="#3d4654">
+              {n}
+            </text>
+          );
+        })}
       {belts.map((b) => {
         const a1 = (b.first - 1) * pitch - pitch * 0.45;
         const a2 = (b.last - 1) * pitch + pitch * 0.45;
         const [lx, ly] = polar(R_BORE + RING + 38, (a1 + a2) / 2);
         return (
           <g key={`${b.first}-${b.label}`}>
-            <path d={arc(R_BORE + RING + 26, a1, a2)} fill="none" stroke="#1d2430" strokeWidth="2" strokeDasharray={b.label.endsWith('+') ? undefined : '4 2'} />
-            <text x={f(lx)} y={f(ly)} fontSize={TEXT_MIN + 1} fontWeight="700" textAnchor="middle" dominantBaseline="central">{b.label}</text>
+            <path
+              d={arc(R_BORE + RING + 26, a1, a2)}
+              fill="none"
+              stroke="#1d2430"
+              strokeWidth="2"
+              strokeDasharray={b.label.endsWith('+') ? undefined : '4 2'}
+            />
+            <text x={f(lx)} y={f(ly)} fontSize={TEXT_MIN + 1} fontWeight="700" textAnchor="middle" dominantBaseline="central">
+              {b.label}
+            </text>
           </g>
         );
       })}
@@ -156,25 +187,41 @@ export function SlotDiagram({ table, caption, id = 'slot-diagram' }: SlotDiagram
         if (a2 < a1) a2 += 360;
         if (a2 - a1 > 180) [a1, a2] = [a2 - 360, a1];
         const r = R_BORE - 10 - k * 9;
-        return <path key={`${from}-${to}`} d={arc(r, a1, a2)} fill="none" stroke="#a4531c" strokeWidth="1.6" markerEnd={`url(#${id}-arrow)`} />;
+        return (
+          <path key={`${from}-${to}`} d={arc(r, a1, a2)} fill="none" stroke="#a4531c" strokeWidth="1.6" markerEnd={`url(#${id}-arrow)`} />
+        );
       })}
-      <text y="-16" textAnchor="middle" fontSize={TEXT_MIN + 1} fontWeight="700">{S} slots · {table.poles} poles</text>
-      <text y="2" textAnchor="middle" fontSize={TEXT_MIN}>{caption}</text>
+      <text y="-16" textAnchor="middle" fontSize={TEXT_MIN + 1} fontWeight="700">
+        {S} slots · {table.poles} poles
+      </text>
+      <text y="2" textAnchor="middle" fontSize={TEXT_MIN}>
+        {caption}
+      </text>
       {group.length > 0 && (
         <text y="20" textAnchor="middle" fontSize={TEXT_MIN} fill="#8a4516">
           <tspan x="0">arrows: span of the first A+ group</tspan>
-          <tspan x="0" dy={TEXT_MIN + 3}>{group.map(([a, b]) => `${a}–${b}`).join(', ')}</tspan>
+          <tspan x="0" dy={TEXT_MIN + 3}>
+            {group.map(([a, b]) => `${a}–${b}`).join(', ')}
+          </tspan>
         </text>
       )}
       <g transform="translate(-255,285)" fontSize={TEXT_MIN}>
         <rect width="18" height="12" fill={PHASE_TINT.A} stroke="#1d2430" />
-        <text x="23" y="10">Phase A (plain)</text>
+        <text x="23" y="10">
+          Phase A (plain)
+        </text>
         <rect x="118" width="18" height="12" fill={`url(#${id}-hatch)`} stroke="#1d2430" />
-        <text x="141" y="10">Phase B (hatched)</text>
+        <text x="141" y="10">
+          Phase B (hatched)
+        </text>
         <rect x="250" width="18" height="12" fill={`url(#${id}-dots)`} stroke="#1d2430" />
-        <text x="273" y="10">Phase C (dotted)</text>
+        <text x="273" y="10">
+          Phase C (dotted)
+        </text>
         <rect x="372" width="18" height="12" fill="#fff" stroke="#1d2430" strokeDasharray="2 1.5" />
-        <text x="395" y="10">− returning</text>
+        <text x="395" y="10">
+          − returning
+        </text>
       </g>
     </svg>
   );
@@ -183,7 +230,8 @@ export function SlotDiagram({ table, caption, id = 'slot-diagram' }: SlotDiagram
 /** Slot-by-slot rows for the table alternative. */
 export function slotRows(table: SlotTable): { slot: number; top: string; bottom: string }[] {
   const at = (slot: number, layer: number) => table.sides.find((s) => s.slot === slot && s.layer === layer);
-  const text = (s: CoilSide | undefined) => (s ? `${sideLabel(s)}${s.coil !== undefined ? ` (coil ${s.coil}, ${s.turns} turns)` : ` (${s.turns} turns)`}` : '—');
+  const text = (s: CoilSide | undefined) =>
+    s ? `${sideLabel(s)}${s.coil !== undefined ? ` (coil ${s.coil}, ${s.turns} turns)` : ` (${s.turns} turns)`}` : '—';
   return Array.from({ length: table.slots }, (_, i) => ({ slot: i + 1, top: text(at(i + 1, 1)), bottom: text(at(i + 1, 2)) }));
 }
 
@@ -192,11 +240,19 @@ export function SlotTableView({ table }: { table: SlotTable }) {
     <table className="slot-table small">
       <caption className="sr-only">Coil sides in each slot</caption>
       <thead>
-        <tr><th scope="col">Slot</th><th scope="col">{table.layers === 2 ? 'Top layer' : 'Coil side'}</th>{table.layers === 2 && <th scope="col">Bottom layer</th>}</tr>
+        <tr>
+          <th scope="col">Slot</th>
+          <th scope="col">{table.layers === 2 ? 'Top layer' : 'Coil side'}</th>
+          {table.layers === 2 && <th scope="col">Bottom layer</th>}
+        </tr>
       </thead>
       <tbody>
         {slotRows(table).map((r) => (
-          <tr key={r.slot}><td className="num">{r.slot}</td><td>{r.top}</td>{table.layers === 2 && <td>{r.bottom}</td>}</tr>
+          <tr key={r.slot}>
+            <td className="num">{r.slot}</td>
+            <td>{r.top}</td>
+            {table.layers === 2 && <td>{r.bottom}</td>}
+          </tr>
         ))}
       </tbody>
     </table>

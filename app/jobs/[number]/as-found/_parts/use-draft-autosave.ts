@@ -4,7 +4,7 @@
  * Saves the raw form as a server-side draft a few seconds after the winder stops typing, retries when the
  * connection drops, and saves at once when the tab is hidden or closed, so nothing typed is lost.
  */
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react';
 import { useRouter } from 'next/navigation';
 import { saveSheetDraft } from '@/lib/as-found/as-found-actions';
 import type { DraftPayload } from '@/lib/as-found/draft-schema';
@@ -27,12 +27,18 @@ const hhmm = (d: Date): string => fmt.time(d);
 
 export function draftStatusText(s: DraftState): string {
   switch (s.kind) {
-    case 'idle': return '';
-    case 'pending': return 'Unsaved changes: keeping a draft…';
-    case 'saving': return 'Saving draft…';
-    case 'saved': return `Draft saved ${hhmm(s.at)}`;
-    case 'failed': return `Draft not saved (${s.message}); trying again shortly. Keep this tab open.`;
-    case 'cleared': return s.text;
+    case 'idle':
+      return '';
+    case 'pending':
+      return 'Unsaved changes: keeping a draft…';
+    case 'saving':
+      return 'Saving draft…';
+    case 'saved':
+      return `Draft saved ${hhmm(s.at)}`;
+    case 'failed':
+      return `Draft not saved (${s.message}); trying again shortly. Keep this tab open.`;
+    case 'cleared':
+      return s.text;
   }
 }
 
@@ -43,7 +49,10 @@ export function useDraftAutosave(jobId: string, enabled: boolean, snapshot: () =
   const dirty = useRef(false);
   const inFlight = useRef(false);
   const snap = useRef(snapshot);
-  snap.current = snapshot;
+  // The latest snapshot function, kept current after each render (never written during render).
+  useLayoutEffect(() => {
+    snap.current = snapshot;
+  });
 
   const sendRef = useRef<() => Promise<void>>(async () => {});
   const schedule = useCallback((ms: number) => {
@@ -80,7 +89,9 @@ export function useDraftAutosave(jobId: string, enabled: boolean, snapshot: () =
       if (dirty.current && !timer.current) schedule(DRAFT_DELAY_MS);
     }
   }, [enabled, jobId, schedule]);
-  sendRef.current = send;
+  useLayoutEffect(() => {
+    sendRef.current = send;
+  }, [send]);
 
   /** Call after every change to the form. */
   const changed = useCallback(() => {
@@ -125,7 +136,17 @@ export function useDraftAutosave(jobId: string, enabled: boolean, snapshot: () =
     const onClick = (e: MouseEvent) => {
       if (!dirty.current && !inFlight.current) return;
       const a = (e.target as Element | null)?.closest?.('a[href]');
-      if (!(a instanceof HTMLAnchorElement) || a.target || a.hasAttribute('download') || e.defaultPrevented || e.button !== 0 || e.metaKey || e.ctrlKey || e.shiftKey) return;
+      if (
+        !(a instanceof HTMLAnchorElement) ||
+        a.target ||
+        a.hasAttribute('download') ||
+        e.defaultPrevented ||
+        e.button !== 0 ||
+        e.metaKey ||
+        e.ctrlKey ||
+        e.shiftKey
+      )
+        return;
       const url = new URL(a.href, window.location.href);
       if (url.origin !== window.location.origin || url.pathname === window.location.pathname) return;
       e.preventDefault();

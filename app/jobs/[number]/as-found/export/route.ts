@@ -15,7 +15,12 @@ export const GET = guardedRoute('job.read', jobNumberParamsSchema, async (req, _
   const saved = await getAsFoundSheet(job.id);
   if (!saved) return new Response('This job has no saved data sheet yet.', { status: 404 });
   // ?rev=N downloads an earlier saved revision from the sheet's history.
-  const rev = z.coerce.number().int().positive().max(1_000_000).safeParse(new URL(req.url).searchParams.get('rev') ?? saved.revision);
+  const rev = z.coerce
+    .number()
+    .int()
+    .positive()
+    .max(1_000_000)
+    .safeParse(new URL(req.url).searchParams.get('rev') ?? saved.revision);
   if (!rev.success) return new Response('Not found.', { status: 404 });
   const sheet = rev.data === saved.revision ? saved.sheet : await getSheetRevision(job.id, rev.data);
   if (!sheet) return new Response(`This sheet has no revision ${rev.data}.`, { status: 404 });

@@ -3,7 +3,6 @@ import { jobSheetPdf } from '@/lib/job-sheet/job-sheet-snapshot';
 import { PdfBusyError } from '@/lib/job-sheet/pdf-pool';
 import { jobNumberParamsSchema } from '@/lib/jobs/job-schema';
 
-
 /**
  * The job sheet PDF for a signed-in user whose role may read jobs: a download by default, shown in the
  * browser with ?inline=1. Shipped jobs get the copy stored when they shipped.

@@ -25,45 +25,105 @@ export default async function QuotePrintPage({ params }: { params: Promise<{ num
   return (
     <article className="quote-doc">
       <p className="no-print">
-        <Link href={routes.quote}>← Estimate and quote</Link> · <a href={routes.quotePdf(d.revision)} download>Download PDF</a>
+        <Link href={routes.quote}>← Estimate and quote</Link> ·{' '}
+        <a href={routes.quotePdf(d.revision)} download>
+          Download PDF
+        </a>
       </p>
       <header>
-        <p><strong>{d.shop.name}</strong>{d.shop.address ? ` · ${d.shop.address}` : ''}{d.shop.phone ? ` · ${d.shop.phone}` : ''}</p>
+        <p>
+          <strong>{d.shop.name}</strong>
+          {d.shop.address ? ` · ${d.shop.address}` : ''}
+          {d.shop.phone ? ` · ${d.shop.phone}` : ''}
+        </p>
         <h1>Quote {d.number}</h1>
         {d.status === 'DRAFT' && <p className="draft-mark">DRAFT — not yet sent; figures may change.</p>}
       </header>
       <div className="grid" style={{ gridTemplateColumns: '1fr 1fr' }}>
         <dl className="dl">
-          <dt>Customer</dt><dd>{d.customer.company}</dd>
-          <dt>Contact</dt><dd>{d.customer.contact ?? '—'}</dd>
-          <dt>Address</dt><dd>{d.customer.address ?? '—'}</dd>
+          <dt>Customer</dt>
+          <dd>{d.customer.company}</dd>
+          <dt>Contact</dt>
+          <dd>{d.customer.contact ?? '—'}</dd>
+          <dt>Address</dt>
+          <dd>{d.customer.address ?? '—'}</dd>
         </dl>
         <dl className="dl">
-          <dt>Job</dt><dd>{d.jobNumber}</dd>
-          <dt>Motor</dt><dd>{d.motor}</dd>
-          <dt>Issued</dt><dd>{d.issued ?? '—'}</dd>
-          <dt>Valid until</dt><dd>{d.validUntil ?? '—'}</dd>
-          {d.decision && <><dt>Decision</dt><dd>{d.decision}</dd></>}
+          <dt>Job</dt>
+          <dd>{d.jobNumber}</dd>
+          <dt>Motor</dt>
+          <dd>{d.motor}</dd>
+          <dt>Issued</dt>
+          <dd>{d.issued ?? '—'}</dd>
+          <dt>Valid until</dt>
+          <dd>{d.validUntil ?? '—'}</dd>
+          {d.decision && (
+            <>
+              <dt>Decision</dt>
+              <dd>{d.decision}</dd>
+            </>
+          )}
         </dl>
       </div>
       <table>
-        <thead><tr><th scope="col">Kind</th><th scope="col">Description</th><th scope="col" className="num">Quantity</th><th scope="col" className="num">Unit price</th><th scope="col" className="num">Tax</th><th scope="col" className="num">Amount</th></tr></thead>
+        <thead>
+          <tr>
+            <th scope="col">Kind</th>
+            <th scope="col">Description</th>
+            <th scope="col" className="num">
+              Quantity
+            </th>
+            <th scope="col" className="num">
+              Unit price
+            </th>
+            <th scope="col" className="num">
+              Tax
+            </th>
+            <th scope="col" className="num">
+              Amount
+            </th>
+          </tr>
+        </thead>
         <tbody>
           {d.lines.map((l, i) => (
-            <tr key={i}><td>{l.kind}</td><td>{l.description}{l.reference ? ` — ${l.reference}` : ''}</td><td className="num">{l.quantity}</td><td className="num">{l.unitPrice}</td><td className="num">{l.taxRate}</td><td className="num">{l.amount}</td></tr>
+            <tr key={i}>
+              <td>{l.kind}</td>
+              <td>
+                {l.description}
+                {l.reference ? ` — ${l.reference}` : ''}
+              </td>
+              <td className="num">{l.quantity}</td>
+              <td className="num">{l.unitPrice}</td>
+              <td className="num">{l.taxRate}</td>
+              <td className="num">{l.amount}</td>
+            </tr>
           ))}
         </tbody>
       </table>
       <table className="totals-table" aria-label="Totals">
         <tbody>
-          {d.totals.map((t) => <tr key={t.label}><th scope="row">{t.label}</th><td className="num">{t.strong ? <strong>{t.value}</strong> : t.value}</td></tr>)}
+          {d.totals.map((t) => (
+            <tr key={t.label}>
+              <th scope="row">{t.label}</th>
+              <td className="num">{t.strong ? <strong>{t.value}</strong> : t.value}</td>
+            </tr>
+          ))}
         </tbody>
       </table>
-      {d.notes && <><h2>Notes</h2><p>{d.notes}</p></>}
+      {d.notes && (
+        <>
+          <h2>Notes</h2>
+          <p>{d.notes}</p>
+        </>
+      )}
       <h2>Terms</h2>
       <p>{d.terms}</p>
       <h2>Safety</h2>
-      {d.notices.map((n) => <p key={n.id} className="notice">⚠ <strong>{n.title}:</strong> {n.text}</p>)}
+      {d.notices.map((n) => (
+        <p key={n.id} className="notice">
+          ⚠ <strong>{n.title}:</strong> {n.text}
+        </p>
+      ))}
       <p className="muted small">{d.closing}</p>
     </article>
   );
