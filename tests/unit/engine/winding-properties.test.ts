@@ -215,17 +215,15 @@ describe('the engine never throws and never returns NaN or Infinity', () => {
   });
 
   it('on real slot and pole counts with arbitrary everything else', () => {
-    const real = fc
-      .constantFrom(...BALANCED_COMBINATIONS)
-      .chain(({ slots, poles }) =>
-        fc.record({
-          slots: fc.constant(slots),
-          poles: fc.constant(poles),
-          span: fc.oneof(fc.integer({ min: -2, max: slots + 2 }), num),
-          turns: num,
-          paths: num,
-        }),
-      );
+    const real = fc.constantFrom(...BALANCED_COMBINATIONS).chain(({ slots, poles }) =>
+      fc.record({
+        slots: fc.constant(slots),
+        poles: fc.constant(poles),
+        span: fc.oneof(fc.integer({ min: -2, max: slots + 2 }), num),
+        turns: num,
+        paths: num,
+      }),
+    );
     fc.assert(
       fc.property(real, core, supply, ({ slots, poles, span, turns, paths }, c, s) => {
         const w = lap(slots, poles, span, { turnsPerCoil: [turns], parallelPaths: paths });
