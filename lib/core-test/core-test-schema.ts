@@ -16,10 +16,9 @@ export const CORE_TEST_STAGE_LABELS: Record<CoreTestStageValue, string> = {
   AFTER_REPAIRS: 'After core repairs',
 };
 export const MAX_HOT_SPOTS = 50;
-export const NUL_MESSAGE = 'Text may not contain NUL characters.';
 
-/** Optional text that refuses NUL characters (PostgreSQL cannot store them; they are never typed). */
-const text = (max: number) => optionalText(max).refine((v) => v === undefined || !v.includes('\u0000'), NUL_MESSAGE);
+/** Optional text; the shared text builder already refuses NUL characters (lib/validation/safe-text.ts). */
+const text = (max: number) => optionalText(max);
 const temperature = (label: string, max = 250) => optionalNumber({ label, min: -40, max, unit: '°C' });
 
 export const hotSpotSchema = z.object({
