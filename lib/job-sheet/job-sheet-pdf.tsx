@@ -8,6 +8,7 @@ import { Document, Font, Page, StyleSheet, Text, View, renderToBuffer } from '@r
 import { checkValueText, overallText, statusText } from '@/lib/final-tests/display';
 import type { JobSheetData, Row } from './job-sheet-data';
 import { LossesPdf } from './losses-pdf';
+import { DOCUMENT_FRAME_STYLES, DOCUMENT_INK } from '@/lib/presentation/pdf-frame-styles';
 
 const FONT_DIR = join(process.cwd(), 'node_modules', 'dejavu-fonts-ttf', 'ttf');
 let fontsReady = false;
@@ -29,34 +30,11 @@ export function registerFonts(): void {
   fontsReady = true;
 }
 
-const ink = '#1d2430';
+const ink = DOCUMENT_INK;
 /** A heading needs this much of its section (pt) below it on the page, or it moves to the next page. */
 const HEADING_KEEP = 90;
 const s = StyleSheet.create({
-  page: { fontFamily: 'DejaVu', fontSize: 8.5, color: ink, paddingTop: 54, paddingBottom: 44, paddingHorizontal: 36, lineHeight: 1.3 },
-  header: {
-    position: 'absolute',
-    top: 20,
-    left: 36,
-    right: 36,
-    flexDirection: 'row',
-    justifyContent: 'space-between',
-    borderBottomWidth: 1,
-    borderBottomColor: ink,
-    paddingBottom: 4,
-  },
-  footer: {
-    position: 'absolute',
-    bottom: 18,
-    left: 36,
-    right: 36,
-    flexDirection: 'row',
-    justifyContent: 'space-between',
-    fontSize: 7,
-    color: '#5a6473',
-  },
-  shop: { fontSize: 12, fontWeight: 'bold' },
-  title: { fontSize: 15, fontWeight: 'bold', marginBottom: 6 },
+  ...DOCUMENT_FRAME_STYLES,
   h2: {
     fontSize: 10.5,
     fontWeight: 'bold',

@@ -5,33 +5,11 @@
 import { Document, Page, StyleSheet, Text, View, renderToBuffer } from '@react-pdf/renderer';
 import { registerFonts } from '@/lib/job-sheet/job-sheet-pdf';
 import type { QuoteDocument } from './quote-document';
+import { DOCUMENT_FRAME_STYLES, DOCUMENT_INK } from '@/lib/presentation/pdf-frame-styles';
 
-const ink = '#1d2430';
+const ink = DOCUMENT_INK;
 const s = StyleSheet.create({
-  page: { fontFamily: 'DejaVu', fontSize: 8.5, color: ink, paddingTop: 54, paddingBottom: 44, paddingHorizontal: 36, lineHeight: 1.3 },
-  header: {
-    position: 'absolute',
-    top: 20,
-    left: 36,
-    right: 36,
-    flexDirection: 'row',
-    justifyContent: 'space-between',
-    borderBottomWidth: 1,
-    borderBottomColor: ink,
-    paddingBottom: 4,
-  },
-  footer: {
-    position: 'absolute',
-    bottom: 18,
-    left: 36,
-    right: 36,
-    flexDirection: 'row',
-    justifyContent: 'space-between',
-    fontSize: 7,
-    color: '#5a6473',
-  },
-  shop: { fontSize: 12, fontWeight: 'bold' },
-  title: { fontSize: 15, fontWeight: 'bold', marginBottom: 6 },
+  ...DOCUMENT_FRAME_STYLES,
   h2: {
     fontSize: 10.5,
     fontWeight: 'bold',
