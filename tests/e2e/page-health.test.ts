@@ -45,6 +45,7 @@ describe('every screen', () => {
   });
 
   it('sends the old addresses of the as-found sheet and the final tests to their new ones', async () => {
+    await e2e.browser.context.clearCookies();
     const page = await e2e.browser.context.newPage();
     await signIn(page, e2e.app.baseUrl, ADMIN.email, ADMIN.password);
     await page.goto(`${e2e.app.baseUrl}/jobs/1016/sheet/print`);
